@@ -1,0 +1,45 @@
+package io.github.startransport.core.gradient;
+
+import io.github.startransport.spi.Checks;
+import io.github.startransport.spi.ZoneState;
+
+/**
+ * Validation of the zone fields each family of models reads, so that every model refuses
+ * the same input with the same words. Allocation-free on the normal path.
+ */
+public final class ZoneChecks {
+    private ZoneChecks() {
+    }
+
+    /**
+     * Checks the fields the stability test reads: T, rho, P, L, m, kappa, nabla_ad, delta,
+     * phi, nabla_mu.
+     *
+     * @param z the zone
+     */
+    public static void forStability(ZoneState z) {
+        int i = z.zone;
+        Checks.positive("temperature", z.temperature, "K", i);
+        Checks.positive("density", z.density, "g cm^-3", i);
+        Checks.positive("pressure", z.pressure, "dyn cm^-2", i);
+        Checks.finite("luminosity", z.luminosity, "erg s^-1", i);
+        Checks.positive("mass", z.mass, "g", i);
+        Checks.positive("opacity", z.opacity, "cm^2 g^-1", i);
+        Checks.openInterval("nablaAd", z.nablaAd, 0.0, 1.0, "1", i);
+        Checks.positive("delta", z.delta, "1", i);
+        Checks.positive("phi", z.phi, "1", i);
+        Checks.finite("nablaMu", z.nablaMu, "1", i);
+    }
+
+    /**
+     * Checks a composition (X, Z).
+     *
+     * @param hydrogen X
+     * @param metals   Z
+     * @param zone     zone index for messages
+     */
+    public static void composition(double hydrogen, double metals, int zone) {
+        Checks.closedInterval("hydrogen", hydrogen, 0.0, 1.0, "1", zone);
+        Checks.closedInterval("metals", metals, 0.0, 1.0 - hydrogen, "1", zone);
+    }
+}

@@ -1,0 +1,40 @@
+package io.github.startransport.spi;
+
+import java.util.Arrays;
+
+/**
+ * Caller-owned, mutable result of a {@link StabilityModel}: allocate once, reuse per zone.
+ *
+ * <p>Derivative arrays are indexed by {@link ZoneInput} and hold plain partial derivatives.
+ */
+public final class StabilityResult {
+    /** Radiative gradient nabla_rad = 3 kappa L P / (16 pi a c G m T^4) (dimensionless). */
+    public double nablaRad;
+    /** Adiabatic gradient nabla_ad as given (dimensionless). */
+    public double nablaAd;
+    /** Ledoux gradient nabla_L = nabla_ad + (phi/delta) nabla_mu (dimensionless). */
+    public double nablaLedoux;
+    /** Schwarzschild margin nabla_rad - nabla_ad: positive means Schwarzschild-unstable. */
+    public double marginSchwarzschild;
+    /** Ledoux margin nabla_rad - nabla_L: positive means Ledoux-unstable. */
+    public double marginLedoux;
+    /** The regime under {@link #criterion}. */
+    public Regime regime;
+    /** The criterion the regime was decided by. */
+    public Criterion criterion;
+    /** Partial derivatives of nablaRad with respect to each {@link ZoneInput}. */
+    public final double[] dNablaRad = new double[ZoneInput.COUNT];
+    /** Partial derivatives of nablaLedoux with respect to each {@link ZoneInput}. */
+    public final double[] dNablaLedoux = new double[ZoneInput.COUNT];
+
+    /** @return the margin that decided the regime: Schwarzschild or Ledoux, by {@link #criterion} */
+    public double margin() {
+        return criterion == Criterion.LEDOUX ? marginLedoux : marginSchwarzschild;
+    }
+
+    @Override
+    public String toString() {
+        return "StabilityResult[regime=" + regime + " (" + criterion + "), nabla_rad=" + nablaRad
+                + ", nabla_ad=" + nablaAd + ", nabla_L=" + nablaLedoux + ", dNablaRad=" + Arrays.toString(dNablaRad) + "]";
+    }
+}
