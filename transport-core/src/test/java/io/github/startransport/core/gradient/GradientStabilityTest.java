@@ -1,0 +1,232 @@
+package io.github.startransport.core.gradient;
+
+import io.github.startransport.spi.Criterion;
+import io.github.startransport.spi.InvalidInputException;
+import io.github.startransport.spi.ModelOptions;
+import io.github.startransport.spi.Regime;
+import io.github.startransport.spi.StabilityResult;
+import io.github.startransport.spi.ZoneInput;
+import io.github.startransport.spi.ZoneState;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.DoubleRange;
+import net.jqwik.api.constraints.Scale;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The stability test: classification by the Schwarzschild and Ledoux criteria as defined in
+ * Kippenhahn, Weigert &amp; Weiss 2012 §6.1-6.2 (from memory), Ledoux derivatives, refusals.
+ */
+class GradientStabilityTest {
+    private static final GradientStability SCHWARZSCHILD = new GradientStability(Criterion.SCHWARZSCHILD);
+    private static final GradientStability LEDOUX = new GradientStability(Criterion.LEDOUX);
+
+    /** A valid zone whose nabla_rad equals {@code nablaRad} (L is chosen for it). */
+    static ZoneState zone(double nablaRad, double nablaAd, double nablaMu) {
+        ZoneState z = new ZoneState();
+        z.radius = 5e10;
+        z.mass = 1e33;
+        z.temperature = 1e7;
+        z.density = 10.0;
+        z.pressure = 1e16;
+        z.opacity = 1.0;
+        z.cp = 3e8;
+        z.nablaAd = nablaAd;
+        z.delta = 1.0;
+        z.phi = 1.0;
+        z.nablaMu = nablaMu;
+        z.luminosity = nablaRad / RadiativeGradient.value(z.opacity, 1.0, z.pressure, z.mass, z.temperature);
+        return z;
+    }
+
+    private static Regime regime(GradientStability model, ZoneState z) {
+        StabilityResult r = new StabilityResult();
+        model.evaluate(z, r);
+        return r.regime;
+    }
+
+    @Test
+    void radiativeWhereNablaRadBelowNablaAd() {
+        ZoneState z = zone(0.2, 0.4, 0.0);
+        assertEquals(Regime.RADIATIVE, regime(SCHWARZSCHILD, z));
+        assertEquals(Regime.RADIATIVE, regime(LEDOUX, z));
+    }
+
+    @Test
+    void convectiveWhereNablaRadAboveBothGradients() {
+        ZoneState z = zone(0.9, 0.4, 0.1);
+        assertEquals(Regime.CONVECTIVE, regime(SCHWARZSCHILD, z));
+        assertEquals(Regime.CONVECTIVE, regime(LEDOUX, z));
+    }
+
+    @Test
+    void semiconvectiveBetweenNablaAdAndNablaLedoux() {
+        // nabla_ad < nabla_rad < nabla_L with nabla_mu > 0: Schwarzschild-unstable, Ledoux-stable
+        ZoneState z = zone(0.5, 0.4, 0.3); // nabla_L = 0.7
+        assertEquals(Regime.CONVECTIVE, regime(SCHWARZSCHILD, z));
+        assertEquals(Regime.SEMICONVECTIVE, regime(LEDOUX, z));
+    }
+
+    @Test
+    void thermohalineWhereMuInvertedAndStable() {
+        ZoneState z = zone(0.2, 0.4, -0.05); // nabla_L = 0.35 > nabla_rad
+        assertEquals(Regime.THERMOHALINE, regime(SCHWARZSCHILD, z));
+        assertEquals(Regime.THERMOHALINE, regime(LEDOUX, z));
+    }
+
+    @Test
+    void negativeLuminosityIsRadiative() {
+        // energy flowing inward (e.g. a neutrino-cooled core): nabla_rad < 0 < nabla_ad
+        ZoneState z = zone(-0.3, 0.4, 0.0);
+        StabilityResult r = new StabilityResult();
+        SCHWARZSCHILD.evaluate(z, r);
+        assertTrue(r.nablaRad < 0);
+        assertEquals(Regime.RADIATIVE, r.regime);
+        assertEquals(Regime.RADIATIVE, regime(LEDOUX, z));
+    }
+
+    @Test
+    void marginsAreTheGradientDifferences() {
+        ZoneState z = zone(0.5, 0.4, 0.3);
+        StabilityResult r = new StabilityResult();
+        LEDOUX.evaluate(z, r);
+        assertEquals(0.1, r.marginSchwarzschild, 1e-12);
+        assertEquals(0.5 - 0.7, r.marginLedoux, 1e-12);
+        assertEquals(r.marginLedoux, r.margin(), 0.0);
+    }
+
+    @Test
+    void optionsChooseTheCriterion() {
+        assertEquals(Criterion.LEDOUX, GradientStability.fromOptions(ModelOptions.parse("criterion=Ledoux")).criterion());
+        assertEquals(Criterion.SCHWARZSCHILD, GradientStability.fromOptions(ModelOptions.defaults()).criterion());
+        assertThrows(io.github.startransport.spi.InvalidOptionException.class,
+                () -> GradientStability.fromOptions(ModelOptions.parse("criterion=maybe")));
+        assertThrows(io.github.startransport.spi.InvalidOptionException.class,
+                () -> GradientStability.fromOptions(ModelOptions.parse("alhpa=2")));
+    }
+
+    @Property(tries = 2000, seed = "201")
+    void schwarzschildStableWithStabilisingMuIsLedouxStable(
+            @ForAll @Scale(9) @DoubleRange(min = -1, max = 3) double nablaRad,
+            @ForAll @Scale(9) @DoubleRange(min = 0.2, max = 0.45) double nablaAd,
+            @ForAll @Scale(9) @DoubleRange(min = 0, max = 2) double nablaMu,
+            @ForAll @Scale(9) @DoubleRange(min = 0.3, max = 10) double delta,
+            @ForAll @Scale(9) @DoubleRange(min = 0.3, max = 3) double phi) {
+        ZoneState z = zone(nablaRad, nablaAd, nablaMu);
+        z.delta = delta;
+        z.phi = phi;
+        StabilityResult r = new StabilityResult();
+        SCHWARZSCHILD.evaluate(z, r);
+        if (r.regime != Regime.CONVECTIVE) {
+            LEDOUX.evaluate(z, r);
+            assertNotEquals(Regime.CONVECTIVE, r.regime);
+            assertTrue(r.marginLedoux <= 0);
+        }
+    }
+
+    @Property(tries = 2000, seed = "202")
+    void ledouxConvectiveImpliesSchwarzschildConvectiveWhenMuStabilises(
+            @ForAll @Scale(9) @DoubleRange(min = -1, max = 3) double nablaRad,
+            @ForAll @Scale(9) @DoubleRange(min = 0.2, max = 0.45) double nablaAd,
+            @ForAll @Scale(9) @DoubleRange(min = 0, max = 2) double nablaMu) {
+        ZoneState z = zone(nablaRad, nablaAd, nablaMu);
+        if (regime(LEDOUX, z) == Regime.CONVECTIVE) {
+            assertEquals(Regime.CONVECTIVE, regime(SCHWARZSCHILD, z));
+        }
+    }
+
+    @Property(tries = 1000, seed = "203")
+    void ledouxDerivativesAgreeWithCentralDifferences(
+            @ForAll @Scale(9) @DoubleRange(min = 0.2, max = 0.45) double nablaAd,
+            @ForAll @Scale(9) @DoubleRange(min = -1, max = 1) double nablaMu,
+            @ForAll @Scale(9) @DoubleRange(min = 0.3, max = 10) double delta,
+            @ForAll @Scale(9) @DoubleRange(min = 0.3, max = 3) double phi) {
+        ZoneState z = zone(0.3, nablaAd, nablaMu);
+        z.delta = delta;
+        z.phi = phi;
+        StabilityResult r = new StabilityResult();
+        LEDOUX.evaluate(z, r);
+        StabilityResult up = new StabilityResult();
+        StabilityResult dn = new StabilityResult();
+        for (int i : new int[] {ZoneInput.NABLA_AD, ZoneInput.NABLA_MU, ZoneInput.DELTA, ZoneInput.PHI,
+                                ZoneInput.T, ZoneInput.P, ZoneInput.L, ZoneInput.M, ZoneInput.KAPPA}) {
+            double x = z.get(i);
+            double h = 1e-6 * Math.max(Math.abs(x), 1e-3);
+            ZoneState zu = new ZoneState().set(z);
+            ZoneState zd = new ZoneState().set(z);
+            zu.put(i, x + h);
+            zd.put(i, x - h);
+            LEDOUX.evaluate(zu, up);
+            LEDOUX.evaluate(zd, dn);
+            double fdL = (up.nablaLedoux - dn.nablaLedoux) / (2 * h);
+            double fdR = (up.nablaRad - dn.nablaRad) / (2 * h);
+            // 1e-6 relative, with a floor at the central difference's own rounding error ~ 1e-10 |f| / |x|
+            double scale = Math.max(Math.abs(x), 1e-3);
+            assertEquals(fdL, r.dNablaLedoux[i], 1e-6 * Math.abs(fdL) + 1e-8 * Math.abs(r.nablaLedoux) / scale,
+                    "dNablaL/d" + ZoneInput.name(i));
+            assertEquals(fdR, r.dNablaRad[i], 1e-6 * Math.abs(fdR) + 1e-8 * Math.abs(r.nablaRad) / scale,
+                    "dNablaRad/d" + ZoneInput.name(i));
+        }
+    }
+
+    // ---- refusals: one case per field and kind of bad value ----
+
+    static Stream<Arguments> badInputs() {
+        List<Arguments> cases = new ArrayList<>();
+        String[][] positive = {
+            {"temperature", "K"}, {"density", "g cm^-3"}, {"pressure", "dyn cm^-2"}, {"opacity", "cm^2 g^-1"},
+            {"mass", "g"}, {"delta", "1"}, {"phi", "1"}};
+        for (String[] f : positive) {
+            for (double bad : new double[] {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY, 0.0, -1.0}) {
+                cases.add(Arguments.of(f[0], f[1], bad));
+            }
+        }
+        for (double bad : new double[] {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY}) {
+            cases.add(Arguments.of("luminosity", "erg s^-1", bad));
+            cases.add(Arguments.of("nablaMu", "1", bad));
+        }
+        for (double bad : new double[] {Double.NaN, 0.0, 1.0, -0.1, 1.5}) {
+            cases.add(Arguments.of("nablaAd", "1", bad));
+        }
+        return cases.stream();
+    }
+
+    @ParameterizedTest(name = "{0} = {2}")
+    @MethodSource("badInputs")
+    void badInputIsRefusedNamingFieldValueUnitAndZone(String field, String unit, double bad) {
+        ZoneState z = zone(0.5, 0.4, 0.0);
+        z.zone = 17;
+        switch (field) {
+            case "temperature" -> z.temperature = bad;
+            case "density" -> z.density = bad;
+            case "pressure" -> z.pressure = bad;
+            case "opacity" -> z.opacity = bad;
+            case "mass" -> z.mass = bad;
+            case "delta" -> z.delta = bad;
+            case "phi" -> z.phi = bad;
+            case "luminosity" -> z.luminosity = bad;
+            case "nablaMu" -> z.nablaMu = bad;
+            case "nablaAd" -> z.nablaAd = bad;
+            default -> throw new IllegalArgumentException(field);
+        }
+        InvalidInputException e = assertThrows(InvalidInputException.class,
+                () -> LEDOUX.evaluate(z, new StabilityResult()));
+        assertEquals(field, e.field());
+        assertEquals(unit, e.unit());
+        assertEquals(17, e.zone());
+        assertTrue(Double.compare(bad, e.value()) == 0, "value " + e.value());
+        assertTrue(e.getMessage().contains(field) && e.getMessage().contains("zone 17"), e.getMessage());
+    }
+}
