@@ -23,7 +23,13 @@ public final class ModelFamily<T> {
     /** Rosseland mean opacities, analytic or tabulated. */
     public static final ModelFamily<OpacityModel> OPACITY = new ModelFamily<>("opacity", OpacityModel.class);
 
-    private static final List<ModelFamily<?>> ALL = List.of(STABILITY, THERMODYNAMICS, CONVECTION, OPACITY);
+    /** Whole-profile diagnosis: zones, regions, boundaries, timescales. */
+    public static final ModelFamily<ProfileDiagnoser> DIAGNOSIS = new ModelFamily<>("diagnosis", ProfileDiagnoser.class);
+    /** Built-in stellar models that need no input file. */
+    public static final ModelFamily<StarModel> STAR = new ModelFamily<>("star", StarModel.class);
+
+    private static final List<ModelFamily<?>> ALL =
+            List.of(STABILITY, THERMODYNAMICS, CONVECTION, OPACITY, DIAGNOSIS, STAR);
 
     private final String name;
     private final Class<T> type;

@@ -260,4 +260,14 @@ public final class Transport {
     public OpacityModel opacity(String name, ModelOptions options) {
         return model(ModelFamily.OPACITY, name, options);
     }
+
+    /** @return shortcut for {@code model(ModelFamily.DIAGNOSIS, name, options)} */
+    public ProfileDiagnoser diagnoser(String name, ModelOptions options) {
+        return model(ModelFamily.DIAGNOSIS, name, options);
+    }
+
+    /** @return shortcut for {@code model(ModelFamily.STAR, name, options)} */
+    public StarModel star(String name, ModelOptions options) {
+        return model(ModelFamily.STAR, name, options);
+    }
 }

@@ -1,0 +1,121 @@
+package io.github.startransport.spi;
+
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The diagnosis of one profile: per-zone columns (centre to surface), regimes, regions,
+ * timescales and warnings. Immutable: accessors return copies.
+ */
+public final class ProfileDiagnosis {
+    private final String source;
+    private final Criterion criterion;
+    private final double alpha;
+    private final EnumMap<DiagnosisColumn, double[]> columns;
+    private final Regime[] regimes;
+    private final List<Region> regions;
+    private final Timescales timescales;
+    private final List<String> warnings;
+
+    /**
+     * @param source     where the profile came from
+     * @param criterion  criterion the regimes were decided by
+     * @param alpha      mixing-length parameter used
+     * @param columns    every {@link DiagnosisColumn}, each as long as {@code regimes}
+     * @param regimes    regime per zone
+     * @param regions    non-radiative regions, centre to surface
+     * @param timescales whole-star timescales
+     * @param warnings   what the diagnosis had to assume or could not trust, one sentence each
+     */
+    public ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
+                            Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings) {
+        this.source = source;
+        this.criterion = criterion;
+        this.alpha = alpha;
+        this.columns = new EnumMap<>(DiagnosisColumn.class);
+        for (DiagnosisColumn c : DiagnosisColumn.values()) {
+            double[] v = columns.get(c);
+            if (v == null || v.length != regimes.length) {
+                throw new IllegalArgumentException("column " + c.header() + " missing or of the wrong length");
+            }
+            this.columns.put(c, v.clone());
+        }
+        this.regimes = regimes.clone();
+        this.regions = List.copyOf(regions);
+        this.timescales = timescales;
+        this.warnings = List.copyOf(warnings);
+    }
+
+    /** @return where the profile came from */
+    public String source() {
+        return source;
+    }
+
+    /** @return the criterion the regimes were decided by */
+    public Criterion criterion() {
+        return criterion;
+    }
+
+    /** @return the mixing-length parameter used */
+    public double alpha() {
+        return alpha;
+    }
+
+    /** @return number of zones */
+    public int size() {
+        return regimes.length;
+    }
+
+    /**
+     * @param column a column
+     * @return a copy of its values, centre to surface
+     */
+    public double[] column(DiagnosisColumn column) {
+        return columns.get(column).clone();
+    }
+
+    /**
+     * @param column a column
+     * @param zone   zone index, centre = 0
+     * @return the value
+     */
+    public double value(DiagnosisColumn column, int zone) {
+        return columns.get(column)[zone];
+    }
+
+    /** @return a copy of the regime of every zone */
+    public Regime[] regimes() {
+        return regimes.clone();
+    }
+
+    /** @return the non-radiative regions, centre to surface */
+    public List<Region> regions() {
+        return regions;
+    }
+
+    /** @return the timescales */
+    public Timescales timescales() {
+        return timescales;
+    }
+
+    /** @return warnings, one sentence each */
+    public List<String> warnings() {
+        return warnings;
+    }
+
+    /** @return total mass M (g) */
+    public double mass() {
+        return value(DiagnosisColumn.MASS, size() - 1);
+    }
+
+    /** @return outer radius R (cm) */
+    public double radius() {
+        return value(DiagnosisColumn.RADIUS, size() - 1);
+    }
+
+    /** @return surface luminosity (erg s^-1) */
+    public double luminosity() {
+        return value(DiagnosisColumn.LUMINOSITY, size() - 1);
+    }
+}

@@ -1,0 +1,41 @@
+package io.github.startransport.spi;
+
+import java.util.OptionalDouble;
+
+/**
+ * A contiguous run of zones in one non-radiative regime, with its boundaries located between
+ * grid points by linear interpolation of the quantity whose sign change defines them.
+ *
+ * <p>A region that reaches the innermost zone has its bottom at the centre (r = 0, m = 0); one
+ * that reaches the outermost zone has its top at the surface (r = R, m = M).
+ *
+ * @param regime                  the regime
+ * @param bottomRadius            r at the bottom (cm)
+ * @param topRadius               r at the top (cm)
+ * @param bottomMass              m at the bottom (g)
+ * @param topMass                 m at the top (g)
+ * @param bottomRadiusFraction    r/R at the bottom
+ * @param topRadiusFraction       r/R at the top
+ * @param bottomMassFraction      m/M at the bottom
+ * @param topMassFraction         m/M at the top
+ * @param scaleHeights            thickness in pressure scale heights, ln(P_bottom / P_top)
+ * @param bottomSchwarzschild     bottom radius by the Schwarzschild margin, where one lies next to the bottom (cm)
+ * @param topSchwarzschild        top radius by the Schwarzschild margin, where one lies next to the top (cm)
+ * @param bottomLedoux            bottom radius by the Ledoux margin, where one lies next to the bottom (cm)
+ * @param topLedoux               top radius by the Ledoux margin, where one lies next to the top (cm)
+ * @param turnoverGlobal          convective regions: integral of dr / v_conv across the region (s)
+ * @param turnoverLocal           convective regions: l / v_conv half a pressure scale height above the bottom (s)
+ * @param maxVelocity             convective regions: largest v_conv in the region (cm s^-1)
+ * @param firstZone               index of the innermost zone in the region
+ * @param lastZone                index of the outermost zone in the region
+ */
+public record Region(Regime regime,
+                     double bottomRadius, double topRadius, double bottomMass, double topMass,
+                     double bottomRadiusFraction, double topRadiusFraction,
+                     double bottomMassFraction, double topMassFraction,
+                     double scaleHeights,
+                     OptionalDouble bottomSchwarzschild, OptionalDouble topSchwarzschild,
+                     OptionalDouble bottomLedoux, OptionalDouble topLedoux,
+                     OptionalDouble turnoverGlobal, OptionalDouble turnoverLocal, OptionalDouble maxVelocity,
+                     int firstZone, int lastZone) {
+}
