@@ -9,6 +9,9 @@ module io.github.startransport.core {
     exports io.github.startransport.core;
     exports io.github.startransport.core.constants;
     exports io.github.startransport.core.gradient;
+    exports io.github.startransport.core.model;
+    exports io.github.startransport.core.profile;
+    exports io.github.startransport.core.timescale;
 
     provides io.github.startransport.spi.TransportProvider with io.github.startransport.core.CoreProvider;
 }

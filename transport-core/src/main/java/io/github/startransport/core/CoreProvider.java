@@ -2,6 +2,8 @@ package io.github.startransport.core;
 
 import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
+import io.github.startransport.core.model.DemoStar;
+import io.github.startransport.core.profile.LocalDiagnosis;
 import io.github.startransport.spi.DiscoveryException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
@@ -27,7 +29,9 @@ public final class CoreProvider implements TransportProvider {
     /** In each family the first entry is the default. */
     private static final List<Entry> ENTRIES = List.of(
             new Entry(GradientStability.INFO, GradientStability::fromOptions),
-            new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions));
+            new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions),
+            new Entry(LocalDiagnosis.INFO, LocalDiagnosis::fromOptions),
+            new Entry(DemoStar.INFO, DemoStar::fromOptions));
 
     /** Public no-argument constructor, as {@link java.util.ServiceLoader} requires. */
     public CoreProvider() {
@@ -40,7 +44,7 @@ public final class CoreProvider implements TransportProvider {
 
     @Override
     public String description() {
-        return "startransport's own physics: stability tests, ideal gas plus radiation";
+        return "startransport's own physics: stability tests, ideal gas plus radiation, profile diagnosis, demo star";
     }
 
     @Override

@@ -1,0 +1,41 @@
+package io.github.startransport.core.profile;
+
+import io.github.startransport.core.gradient.GasRadiation;
+
+/**
+ * nabla_mu = d ln mu / d ln P from a profile's composition columns, with mu of a fully ionised
+ * mixture ({@link GasRadiation#meanMolecularWeight}).
+ *
+ * <p>Derivative in ln P by the three-point formula for non-uniform spacing at interior zones
+ * (exact for quadratics; e.g. Fornberg 1988, Math. Comp. 51, 699) and one-sided differences at
+ * the two ends. A composition step between two zones therefore shows up in both of them.
+ */
+public final class CompositionGradient {
+    private CompositionGradient() {
+    }
+
+    /**
+     * @param hydrogen X per zone
+     * @param metals   Z per zone
+     * @param pressure P per zone (dyn cm^-2)
+     * @param out      nabla_mu per zone; modified
+     */
+    public static void nablaMu(double[] hydrogen, double[] metals, double[] pressure, double[] out) {
+        int n = pressure.length;
+        double[] lnMu = new double[n];
+        double[] lnP = new double[n];
+        for (int k = 0; k < n; k++) {
+            lnMu[k] = Math.log(GasRadiation.meanMolecularWeight(hydrogen[k], metals[k]));
+            lnP[k] = Math.log(pressure[k]);
+        }
+        out[0] = (lnMu[1] - lnMu[0]) / (lnP[1] - lnP[0]);
+        out[n - 1] = (lnMu[n - 1] - lnMu[n - 2]) / (lnP[n - 1] - lnP[n - 2]);
+        for (int k = 1; k < n - 1; k++) {
+            double h0 = lnP[k] - lnP[k - 1];
+            double h1 = lnP[k + 1] - lnP[k];
+            out[k] = (-h1 / (h0 * (h0 + h1))) * lnMu[k - 1]
+                    + ((h1 - h0) / (h0 * h1)) * lnMu[k]
+                    + (h0 / (h1 * (h0 + h1))) * lnMu[k + 1];
+        }
+    }
+}

@@ -1,0 +1,348 @@
+package io.github.startransport.core.profile;
+
+import io.github.startransport.core.constants.Codata2018;
+import io.github.startransport.core.gradient.LedouxGradient;
+import io.github.startransport.core.timescale.Timescale;
+import io.github.startransport.spi.ConvectionModel;
+import io.github.startransport.spi.ConvectionResult;
+import io.github.startransport.spi.Criterion;
+import io.github.startransport.spi.DiagnosisColumn;
+import io.github.startransport.spi.DiagnosisSetup;
+import io.github.startransport.spi.InvalidInputException;
+import io.github.startransport.spi.ModelFamily;
+import io.github.startransport.spi.ModelInfo;
+import io.github.startransport.spi.ModelOptions;
+import io.github.startransport.spi.OpacityResult;
+import io.github.startransport.spi.Profile;
+import io.github.startransport.spi.ProfileColumn;
+import io.github.startransport.spi.ProfileDiagnoser;
+import io.github.startransport.spi.ProfileDiagnosis;
+import io.github.startransport.spi.Regime;
+import io.github.startransport.spi.Region;
+import io.github.startransport.spi.ThermoResult;
+import io.github.startransport.spi.Timescales;
+import io.github.startransport.spi.ZoneState;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.OptionalDouble;
+
+/**
+ * Zone-by-zone diagnosis of a whole profile with local models: per-zone gradients and
+ * convection, regions with interpolated boundaries, and timescales.
+ *
+ * <p>Missing optional columns are filled: kappa from the setup's opacity model; nabla_ad, c_P and
+ * delta from its thermodynamics model (a warning says so, and counts zones cooler than
+ * {@value #PARTIAL_IONISATION_T} K where a fully ionised fallback is wrong); nabla_mu from the
+ * composition ({@link CompositionGradient}); phi = 1 (ideal gas).
+ *
+ * <p>Region boundaries lie where the quantity that separates the two regimes changes sign, found
+ * by {@link BoundaryFinder} between the two zones: the chosen criterion's margin at the edge of a
+ * convective region, the Schwarzschild margin at the edge of a semiconvective region, nabla_mu
+ * at the edge of a thermohaline region. The Schwarzschild and Ledoux boundaries are both
+ * reported where a margin of each kind changes sign next to the edge.
+ *
+ * <p>Immutable and thread-safe; each call allocates its own working arrays.
+ */
+public final class LocalDiagnosis implements ProfileDiagnoser {
+    /** Name to ask for this model by. */
+    public static final String NAME = "zone-by-zone";
+
+    /** Below this temperature (K) a fully ionised equation of state is not to be trusted. */
+    public static final double PARTIAL_IONISATION_T = 1e5;
+
+    /** Describes this model (it takes no options). */
+    public static final ModelInfo INFO = new ModelInfo(ModelFamily.DIAGNOSIS, NAME,
+            "zone-by-zone diagnosis with local models: gradients, regime, convection, mixing; regions with "
+                    + "boundaries interpolated between zones; photon, thermal and Kelvin-Helmholtz timescales; "
+                    + "convective turnover times", List.of());
+
+    /** The one instance: the model has no parameters. */
+    public static final LocalDiagnosis INSTANCE = new LocalDiagnosis();
+
+    private LocalDiagnosis() {
+    }
+
+    /**
+     * @param options must be empty
+     * @return the model
+     */
+    public static LocalDiagnosis fromOptions(ModelOptions options) {
+        options.requireKnown(NAME, INFO.optionNames());
+        return INSTANCE;
+    }
+
+    @Override
+    public ProfileDiagnosis diagnose(Profile p, DiagnosisSetup setup) {
+        int n = p.size();
+        ConvectionModel convection = setup.convection();
+        Criterion criterion = convection.criterion();
+        List<String> warnings = new ArrayList<>();
+        if (p.wasReversed()) {
+            warnings.add("the profile was ordered surface to centre and has been reversed");
+        }
+        double[] r = p.column(ProfileColumn.RADIUS);
+        double[] m = p.column(ProfileColumn.MASS);
+        double[] t = p.column(ProfileColumn.TEMPERATURE);
+        double[] rho = p.column(ProfileColumn.DENSITY);
+        double[] pres = p.column(ProfileColumn.PRESSURE);
+        double[] lum = p.column(ProfileColumn.LUMINOSITY);
+        double[] x = p.column(ProfileColumn.HYDROGEN);
+        double[] z = p.column(ProfileColumn.METALS);
+
+        boolean hasKappa = p.has(ProfileColumn.OPACITY);
+        double[] kappa = hasKappa ? p.column(ProfileColumn.OPACITY) : new double[n];
+        boolean hasThermo = p.has(ProfileColumn.NABLA_AD) && p.has(ProfileColumn.CP) && p.has(ProfileColumn.DELTA);
+        double[] nablaAd = p.has(ProfileColumn.NABLA_AD) ? p.column(ProfileColumn.NABLA_AD) : new double[n];
+        double[] cp = p.has(ProfileColumn.CP) ? p.column(ProfileColumn.CP) : new double[n];
+        double[] delta = p.has(ProfileColumn.DELTA) ? p.column(ProfileColumn.DELTA) : new double[n];
+        double[] phi = p.has(ProfileColumn.PHI) ? p.column(ProfileColumn.PHI) : filled(n, 1.0);
+        double[] nablaMu;
+        if (p.has(ProfileColumn.NABLA_MU)) {
+            nablaMu = p.column(ProfileColumn.NABLA_MU);
+        } else {
+            for (int k = 1; k < n; k++) {
+                if (!(pres[k] < pres[k - 1])) {
+                    throw new InvalidInputException(ProfileColumn.PRESSURE.header(), pres[k], ProfileColumn.PRESSURE.unit(),
+                            zoneAsGiven(p, k), "decreasing outwards to compute nabla_mu from the composition (zone before it: "
+                            + pres[k - 1] + "); give a nabla_mu column instead (" + p.source() + ")");
+                }
+            }
+            nablaMu = new double[n];
+            CompositionGradient.nablaMu(x, z, pres, nablaMu);
+        }
+
+        EnumMap<DiagnosisColumn, double[]> out = new EnumMap<>(DiagnosisColumn.class);
+        for (DiagnosisColumn c : DiagnosisColumn.values()) {
+            out.put(c, new double[n]);
+        }
+        double[] g = out.get(DiagnosisColumn.GRAVITY);
+        double[] hp = out.get(DiagnosisColumn.SCALE_HEIGHT);
+        double[] nablaRad = out.get(DiagnosisColumn.NABLA_RAD);
+        double[] nablaL = out.get(DiagnosisColumn.NABLA_LEDOUX);
+        double[] nabla = out.get(DiagnosisColumn.NABLA);
+        double[] nablaE = out.get(DiagnosisColumn.NABLA_ELEMENT);
+        double[] v = out.get(DiagnosisColumn.VELOCITY);
+        double[] fconv = out.get(DiagnosisColumn.CONVECTIVE_FRACTION);
+        double[] dmix = out.get(DiagnosisColumn.DIFFUSION);
+        double[] ell = new double[n];
+        double[] marginS = new double[n];
+        double[] marginL = new double[n];
+        Regime[] regimes = new Regime[n];
+
+        ZoneState zone = new ZoneState();
+        ThermoResult thermo = new ThermoResult();
+        OpacityResult opacity = new OpacityResult();
+        ConvectionResult conv = new ConvectionResult();
+        int cool = 0;
+        for (int k = 0; k < n; k++) {
+            zone.zone = zoneAsGiven(p, k);
+            zone.radius = r[k];
+            zone.mass = m[k];
+            zone.temperature = t[k];
+            zone.density = rho[k];
+            zone.pressure = pres[k];
+            zone.luminosity = lum[k];
+            zone.hydrogen = x[k];
+            zone.metals = z[k];
+            if (!hasThermo) {
+                setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone.zone, thermo);
+                if (!p.has(ProfileColumn.NABLA_AD)) {
+                    nablaAd[k] = thermo.nablaAd;
+                }
+                if (!p.has(ProfileColumn.CP)) {
+                    cp[k] = thermo.cp;
+                }
+                if (!p.has(ProfileColumn.DELTA)) {
+                    delta[k] = thermo.delta;
+                }
+                if (t[k] < PARTIAL_IONISATION_T) {
+                    cool++;
+                }
+            }
+            if (!hasKappa) {
+                setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone.zone, opacity);
+                kappa[k] = opacity.kappa;
+            }
+            zone.opacity = kappa[k];
+            zone.nablaAd = nablaAd[k];
+            zone.cp = cp[k];
+            zone.delta = delta[k];
+            zone.phi = phi[k];
+            zone.nablaMu = nablaMu[k];
+            convection.solve(zone, conv);
+            g[k] = Codata2018.GRAVITATIONAL_CONSTANT * m[k] / (r[k] * r[k]);
+            hp[k] = pres[k] / (rho[k] * g[k]);
+            nablaRad[k] = conv.nablaRad;
+            nablaL[k] = LedouxGradient.value(nablaAd[k], phi[k], delta[k], nablaMu[k]);
+            nabla[k] = conv.nabla;
+            nablaE[k] = conv.nablaElement;
+            v[k] = conv.velocity;
+            fconv[k] = conv.convectiveFraction;
+            dmix[k] = conv.diffusion;
+            ell[k] = conv.mixingLength;
+            regimes[k] = conv.regime;
+            marginS[k] = nablaRad[k] - nablaAd[k];
+            marginL[k] = nablaRad[k] - nablaL[k];
+        }
+        if (!hasThermo) {
+            warnings.add("nabla_ad, c_P and delta were computed by " + setup.thermodynamics()
+                    + " (fully ionised ideal gas plus radiation): a fallback, not the model's own equation of state"
+                    + (cool > 0 ? "; " + cool + " zones are cooler than 1e5 K, where partial ionisation makes it wrong"
+                    : ""));
+        }
+        if (!hasKappa) {
+            warnings.add("kappa was computed by the opacity model " + setup.opacity());
+        }
+        if (!p.has(ProfileColumn.NABLA_MU)) {
+            warnings.add("nabla_mu was computed from the X and Z columns (fully ionised mu)");
+        }
+        put(out, DiagnosisColumn.RADIUS, r);
+        put(out, DiagnosisColumn.MASS, m);
+        put(out, DiagnosisColumn.TEMPERATURE, t);
+        put(out, DiagnosisColumn.DENSITY, rho);
+        put(out, DiagnosisColumn.PRESSURE, pres);
+        put(out, DiagnosisColumn.LUMINOSITY, lum);
+        put(out, DiagnosisColumn.HYDROGEN, x);
+        put(out, DiagnosisColumn.METALS, z);
+        put(out, DiagnosisColumn.OPACITY, kappa);
+        put(out, DiagnosisColumn.CP, cp);
+        put(out, DiagnosisColumn.DELTA, delta);
+        put(out, DiagnosisColumn.NABLA_AD, nablaAd);
+        put(out, DiagnosisColumn.NABLA_MU, nablaMu);
+
+        List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, nablaMu, criterion);
+        Timescales times = new Timescales(
+                Timescale.photonDiffusion(r, kappa, rho),
+                Timescale.thermalDiffusion(r, kappa, rho, t, cp),
+                Timescale.kelvinHelmholtz(m[n - 1], r[n - 1], lum[n - 1]));
+        return new ProfileDiagnosis(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings);
+    }
+
+    private static int zoneAsGiven(Profile p, int k) {
+        return p.wasReversed() ? p.size() - 1 - k : k;
+    }
+
+    private static double[] filled(int n, double value) {
+        double[] a = new double[n];
+        java.util.Arrays.fill(a, value);
+        return a;
+    }
+
+    private static void put(Map<DiagnosisColumn, double[]> out, DiagnosisColumn c, double[] values) {
+        System.arraycopy(values, 0, out.get(c), 0, values.length);
+    }
+
+    /** The quantity whose sign change separates regime a (inside) from regime b (outside). */
+    private static double[] separator(Regime inside, Regime outside, Criterion criterion, double[] marginS,
+                                      double[] marginL, double[] nablaMu) {
+        if (inside == Regime.CONVECTIVE || outside == Regime.CONVECTIVE) {
+            return criterion == Criterion.LEDOUX ? marginL : marginS;
+        }
+        if (inside == Regime.SEMICONVECTIVE || outside == Regime.SEMICONVECTIVE) {
+            return marginS;
+        }
+        return nablaMu;
+    }
+
+    static List<Region> regions(double[] r, double[] m, double[] pres, double[] hp, double[] ell, double[] v,
+                                Regime[] regimes, double[] marginS, double[] marginL, double[] nablaMu,
+                                Criterion criterion) {
+        int n = r.length;
+        double radius = r[n - 1];
+        double mass = m[n - 1];
+        List<Region> regions = new ArrayList<>();
+        int k = 0;
+        while (k < n) {
+            Regime regime = regimes[k];
+            int first = k;
+            while (k + 1 < n && regimes[k + 1] == regime) {
+                k++;
+            }
+            int last = k;
+            k++;
+            if (regime == Regime.RADIATIVE) {
+                continue;
+            }
+            double rb;
+            double mb;
+            double pb;
+            if (first == 0) {
+                rb = 0.0;
+                mb = 0.0;
+                pb = pres[0];
+            } else {
+                double[] f = separator(regime, regimes[first - 1], criterion, marginS, marginL, nablaMu);
+                rb = BoundaryFinder.root(r[first - 1], f[first - 1], r[first], f[first]);
+                double w = (rb - r[first - 1]) / (r[first] - r[first - 1]);
+                mb = m[first - 1] + w * (m[first] - m[first - 1]);
+                pb = Math.exp(Math.log(pres[first - 1]) + w * (Math.log(pres[first]) - Math.log(pres[first - 1])));
+            }
+            double rt;
+            double mt;
+            double pt;
+            if (last == n - 1) {
+                rt = radius;
+                mt = mass;
+                pt = pres[n - 1];
+            } else {
+                double[] f = separator(regime, regimes[last + 1], criterion, marginS, marginL, nablaMu);
+                rt = BoundaryFinder.root(r[last], f[last], r[last + 1], f[last + 1]);
+                double w = (rt - r[last]) / (r[last + 1] - r[last]);
+                mt = m[last] + w * (m[last + 1] - m[last]);
+                pt = Math.exp(Math.log(pres[last]) + w * (Math.log(pres[last + 1]) - Math.log(pres[last])));
+            }
+            OptionalDouble turnGlobal = OptionalDouble.empty();
+            OptionalDouble turnLocal = OptionalDouble.empty();
+            OptionalDouble vmax = OptionalDouble.empty();
+            if (regime == Regime.CONVECTIVE) {
+                double peak = 0.0;
+                for (int j = first; j <= last; j++) {
+                    peak = Math.max(peak, v[j]);
+                }
+                vmax = OptionalDouble.of(peak);
+                if (peak > 0.0) {
+                    turnGlobal = OptionalDouble.of(Timescale.turnoverGlobal(r, v, first, last, rb, rt));
+                    double local = Timescale.turnoverLocal(r, hp, ell, v, first, last, rb, rt);
+                    if (local > 0.0) {
+                        turnLocal = OptionalDouble.of(local);
+                    }
+                }
+            }
+            regions.add(new Region(regime, rb, rt, mb, mt, rb / radius, rt / radius, mb / mass, mt / mass,
+                    Math.log(pb / pt),
+                    edge(r, marginS, first - 1, first), edge(r, marginS, last, last + 1),
+                    edge(r, marginL, first - 1, first), edge(r, marginL, last, last + 1),
+                    turnGlobal, turnLocal, vmax, first, last));
+        }
+        return regions;
+    }
+
+    /**
+     * The root of a margin next to an edge: searched between zones a and b, then outwards and
+     * inwards by up to {@value #EDGE_SEARCH} zones, since the two criteria's boundaries need not
+     * fall in the same interval.
+     */
+    private static OptionalDouble edge(double[] r, double[] f, int a, int b) {
+        int n = r.length;
+        for (int d = 0; d <= EDGE_SEARCH; d++) {
+            for (int s : new int[] {-d, d}) {
+                int i = a + s;
+                int j = b + s;
+                if (i >= 0 && j < n && j > i && BoundaryFinder.changesSign(f[i], f[j])) {
+                    return OptionalDouble.of(BoundaryFinder.root(r[i], f[i], r[j], f[j]));
+                }
+            }
+        }
+        return OptionalDouble.empty();
+    }
+
+    private static final int EDGE_SEARCH = 50;
+
+    @Override
+    public String toString() {
+        return NAME;
+    }
+}

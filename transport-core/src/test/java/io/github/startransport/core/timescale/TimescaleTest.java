@@ -1,0 +1,87 @@
+package io.github.startransport.core.timescale;
+
+import io.github.startransport.core.constants.Codata2018;
+import io.github.startransport.core.constants.Iau2015;
+import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+class TimescaleTest {
+
+    private static double[] grid(int n, double radius) {
+        double[] r = new double[n];
+        for (int k = 0; k < n; k++) {
+            r[k] = radius * (k + 1) / n;
+        }
+        return r;
+    }
+
+    private static double[] constant(int n, double v) {
+        double[] a = new double[n];
+        java.util.Arrays.fill(a, v);
+        return a;
+    }
+
+    @Test
+    void photonDiffusionOfAUniformSphereIsKappaRhoRSquaredOverTwoC() {
+        // random walk with mean free path l = 1/(kappa rho): t = R^2 / (2 l c) (Hansen, Kawaler & Trimble 2004 §1.3)
+        int n = 50;
+        double radius = Iau2015.SOLAR_RADIUS;
+        double kappa = 0.34;
+        double rho = 1.41;
+        double t = Timescale.photonDiffusion(grid(n, radius), constant(n, kappa), constant(n, rho));
+        double closed = kappa * rho * radius * radius / (2 * Codata2018.SPEED_OF_LIGHT);
+        assertEquals(closed, t, 1e-12 * closed);
+    }
+
+    @Test
+    void thermalDiffusionOfAUniformSphere() {
+        // integral_0^R r / (3 chi) dr with chi = 4 a c T^3/(3 kappa rho^2 c_P) constant: R^2 / (6 chi)
+        int n = 40;
+        double radius = 1e11;
+        double kappa = 2.0;
+        double rho = 3.0;
+        double temp = 2e6;
+        double cp = 3e8;
+        double chi = 4 * Codata2018.RADIATION_CONSTANT * Codata2018.SPEED_OF_LIGHT * Math.pow(temp, 3)
+                / (3 * kappa * rho * rho * cp);
+        double t = Timescale.thermalDiffusion(grid(n, radius), constant(n, kappa), constant(n, rho),
+                constant(n, temp), constant(n, cp));
+        double closed = radius * radius / (6 * chi);
+        assertEquals(closed, t, 1e-12 * closed);
+    }
+
+    @Test
+    void kelvinHelmholtzTimeOfTheSunIsAboutThirtyMillionYears() {
+        // ~3e7 yr for the Sun (Kippenhahn, Weigert & Weiss 2012 §3.3; Carroll & Ostlie 2007 §10.3; from memory)
+        double t = Timescale.kelvinHelmholtz(Iau2015.SOLAR_MASS, Iau2015.SOLAR_RADIUS, Iau2015.SOLAR_LUMINOSITY);
+        double years = t / Iau2015.JULIAN_YEAR;
+        assertEquals(3.1e7, years, 0.2e7);
+    }
+
+    @Test
+    void globalTurnoverOfUniformVelocityIsThicknessOverVelocity() {
+        // integral dr / v with v constant (definition)
+        double[] r = grid(20, 1e10);
+        double[] v = constant(20, 3e4);
+        double bottom = 2.2e9;
+        double top = 7.7e9;
+        assertEquals((top - bottom) / 3e4, Timescale.turnoverGlobal(r, v, 4, 14, bottom, top), 1e-9);
+    }
+
+    @Test
+    void localTurnoverIsMixingLengthOverVelocityHalfAScaleHeightAboveTheBase() {
+        double[] r = grid(20, 1e10);
+        double[] hp = constant(20, 1e9);
+        double[] v = new double[20];
+        double[] l = new double[20];
+        for (int k = 0; k < 20; k++) {
+            v[k] = 1e3 * r[k] / 1e8; // linear in r, so the interpolation is exact
+            l[k] = 1.8e9;
+        }
+        double bottom = 2.2e9;
+        double at = bottom + 0.5e9;
+        double expected = 1.8e9 / (1e3 * at / 1e8);
+        assertEquals(expected, Timescale.turnoverLocal(r, hp, l, v, 2, 18, bottom, 9.6e9), 1e-12 * expected);
+    }
+}
