@@ -1,5 +1,7 @@
 package io.github.startransport.core;
 
+import io.github.startransport.core.convection.LocalMixingLength;
+import io.github.startransport.core.convection.TransparentEddyMixingLength;
 import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.spi.DiscoveryException;
@@ -27,7 +29,9 @@ public final class CoreProvider implements TransportProvider {
     /** In each family the first entry is the default. */
     private static final List<Entry> ENTRIES = List.of(
             new Entry(GradientStability.INFO, GradientStability::fromOptions),
-            new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions));
+            new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions),
+            new Entry(LocalMixingLength.INFO, LocalMixingLength::fromOptions),
+            new Entry(TransparentEddyMixingLength.INFO, TransparentEddyMixingLength::fromOptions));
 
     /** Public no-argument constructor, as {@link java.util.ServiceLoader} requires. */
     public CoreProvider() {
@@ -40,7 +44,7 @@ public final class CoreProvider implements TransportProvider {
 
     @Override
     public String description() {
-        return "startransport's own physics: stability tests, ideal gas plus radiation";
+        return "startransport's own physics: stability tests, ideal gas plus radiation, mixing-length convection";
     }
 
     @Override
