@@ -155,6 +155,11 @@ public final class MixingLengthZone {
         final double gamma3 = gamma * gamma * gamma;
         final double den2 = den * den;
         final double lossElasticity = transparent ? 2.0 / (1.0 + yw2) : 0.0; // d ln q / d ln omega
+        // reciprocals once, so that the loop below multiplies only
+        final double invGamma = 1.0 / gamma;
+        final double invDen2 = 1.0 / den2;
+        final double invNablaRad = 1.0 / nablaRad;
+        final double invFourULoss2 = 1.0 / (4.0 * uLoss * uLoss);
         final double[] dNabla = out.dNabla;
         final double[] dVelocity = out.dVelocity;
         final double[] dConvective = out.dConvectiveFraction;
@@ -172,19 +177,19 @@ public final class MixingLengthZone {
             final double eOmega = (i == ZoneInput.KAPPA || i == ZoneInput.RHO ? 1.0 : 0.0) + eLength;
             final double eQ = lossElasticity * eOmega;
             final double eVelocityScale = 0.5 * (eGravity + (i == ZoneInput.DELTA ? 1.0 : 0.0) - eHp);
-            final double input = eLength == 0.0 && eLossBase == 0.0 && eVelocityScale == 0.0 && eQ == 0.0
-                    ? 1.0 : inputValue(z, alpha, i);
-            final double dlnLength = eLength / input;
-            final double dlnULoss = (eLossBase + eQ) / input;
-            final double dA0 = a0 * eQ / input;
-            final double dS = dW / (4.0 * uLoss * uLoss) - 2.0 * s * dlnULoss;
+            final double perUnit = eLength == 0.0 && eLossBase == 0.0 && eVelocityScale == 0.0 && eQ == 0.0
+                    ? 0.0 : 1.0 / inputValue(z, alpha, i);
+            final double dlnLength = eLength * perUnit;
+            final double dlnULoss = (eLossBase + eQ) * perUnit;
+            final double dA0 = a0 * eQ * perUnit;
+            final double dS = dW * invFourULoss2 - 2.0 * s * dlnULoss;
             final double dGamma = (dS - gamma3 * dA0) * sensitivity;
             final double dShareRad = (dA0 * gamma * gamma * (gamma + 1.0)
-                    + a0 * gamma * (gamma + 2.0) * dGamma) / den2;
+                    + a0 * gamma * (gamma + 2.0) * dGamma) * invDen2;
             dNabla[i] = shareSuper * dNablaRad + shareRad * dNablaAd - w * dShareRad;
-            final double dlnVelocity = dlnLength + eVelocityScale / input + dlnULoss + dGamma / gamma;
+            final double dlnVelocity = dlnLength + eVelocityScale * perUnit + dlnULoss + dGamma * invGamma;
             dVelocity[i] = velocity * dlnVelocity;
-            dConvective[i] = (dW * shareRad + w * dShareRad - convective * dNablaRad) / nablaRad;
+            dConvective[i] = (dW * shareRad + w * dShareRad - convective * dNablaRad) * invNablaRad;
             dDiffusion[i] = diffusion * (dlnVelocity + dlnLength);
         }
     }
