@@ -1,5 +1,6 @@
 /**
- * startransport's physics: constants, gradients and stability, thermodynamics fallback.
+ * startransport's physics: constants, gradients and stability, thermodynamics fallback,
+ * mixing-length convection and mixing coefficients.
  * Found by hosts through {@link io.github.startransport.spi.Transport}.
  */
 module io.github.startransport.core {
@@ -8,6 +9,7 @@ module io.github.startransport.core {
 
     exports io.github.startransport.core;
     exports io.github.startransport.core.constants;
+    exports io.github.startransport.core.convection;
     exports io.github.startransport.core.gradient;
     exports io.github.startransport.core.model;
     exports io.github.startransport.core.profile;

@@ -1,5 +1,7 @@
 package io.github.startransport.core;
 
+import io.github.startransport.core.convection.LocalMixingLength;
+import io.github.startransport.core.convection.TransparentEddyMixingLength;
 import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.model.DemoStar;
@@ -30,6 +32,8 @@ public final class CoreProvider implements TransportProvider {
     private static final List<Entry> ENTRIES = List.of(
             new Entry(GradientStability.INFO, GradientStability::fromOptions),
             new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions),
+            new Entry(LocalMixingLength.INFO, LocalMixingLength::fromOptions),
+            new Entry(TransparentEddyMixingLength.INFO, TransparentEddyMixingLength::fromOptions),
             new Entry(LocalDiagnosis.INFO, LocalDiagnosis::fromOptions),
             new Entry(DemoStar.INFO, DemoStar::fromOptions));
 
@@ -44,7 +48,8 @@ public final class CoreProvider implements TransportProvider {
 
     @Override
     public String description() {
-        return "startransport's own physics: stability tests, ideal gas plus radiation, profile diagnosis, demo star";
+        return "startransport's own physics: stability tests, ideal gas plus radiation, mixing-length convection, "
+                + "profile diagnosis, demo star";
     }
 
     @Override

@@ -27,4 +27,31 @@ public interface ConvectionModel {
      * @throws InvalidInputException when a read field is non-finite or unphysical
      */
     void solve(ZoneState zone, ConvectionResult out);
+
+    /**
+     * The efficiency parameter of exponentially decaying overshoot beyond a convective
+     * boundary: the velocity scale height is f H_P.
+     *
+     * @return f (dimensionless), 0 when the model applies no overshoot
+     */
+    default double overshootParameter() {
+        return 0.0;
+    }
+
+    /**
+     * Mixing diffusion coefficient at a distance beyond a convective boundary, for hosts that
+     * extend mixing past the boundary (not a hot-path call: it needs the boundary's position,
+     * which a single zone does not know). The host chooses where the boundary sits and which
+     * convective zone supplies the starting coefficient.
+     *
+     * @param boundaryDiffusion D_0, the convective coefficient at the boundary (cm^2 s^-1), &gt;= 0
+     * @param distance          distance z from the boundary into the stable layer (cm), &gt;= 0
+     * @param scaleHeight       pressure scale height H_P at the boundary (cm), &gt; 0
+     * @return D(z) (cm^2 s^-1)
+     * @throws InvalidInputException         when an argument is non-finite or out of range
+     * @throws UnsupportedOperationException when the model offers no overshoot
+     */
+    default double overshootDiffusion(double boundaryDiffusion, double distance, double scaleHeight) {
+        throw new UnsupportedOperationException(getClass().getName() + " offers no overshoot mixing");
+    }
 }
