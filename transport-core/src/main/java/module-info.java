@@ -9,6 +9,7 @@ module io.github.startransport.core {
     exports io.github.startransport.core;
     exports io.github.startransport.core.constants;
     exports io.github.startransport.core.gradient;
+    exports io.github.startransport.core.opacity;
 
     provides io.github.startransport.spi.TransportProvider with io.github.startransport.core.CoreProvider;
 }

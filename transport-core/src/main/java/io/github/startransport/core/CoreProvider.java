@@ -2,6 +2,9 @@ package io.github.startransport.core;
 
 import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
+import io.github.startransport.core.opacity.AnalyticOpacity;
+import io.github.startransport.core.opacity.CsvTableTool;
+import io.github.startransport.core.opacity.TabulatedOpacity;
 import io.github.startransport.spi.DiscoveryException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
@@ -27,7 +30,10 @@ public final class CoreProvider implements TransportProvider {
     /** In each family the first entry is the default. */
     private static final List<Entry> ENTRIES = List.of(
             new Entry(GradientStability.INFO, GradientStability::fromOptions),
-            new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions));
+            new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions),
+            new Entry(AnalyticOpacity.INFO, AnalyticOpacity::fromOptions),
+            new Entry(TabulatedOpacity.INFO, TabulatedOpacity::fromOptions),
+            new Entry(CsvTableTool.INFO, CsvTableTool::fromOptions));
 
     /** Public no-argument constructor, as {@link java.util.ServiceLoader} requires. */
     public CoreProvider() {
@@ -40,7 +46,7 @@ public final class CoreProvider implements TransportProvider {
 
     @Override
     public String description() {
-        return "startransport's own physics: stability tests, ideal gas plus radiation";
+        return "startransport's own physics: stability tests, ideal gas plus radiation, opacities (analytic and tabulated)";
     }
 
     @Override

@@ -23,7 +23,12 @@ public final class ModelFamily<T> {
     /** Rosseland mean opacities, analytic or tabulated. */
     public static final ModelFamily<OpacityModel> OPACITY = new ModelFamily<>("opacity", OpacityModel.class);
 
-    private static final List<ModelFamily<?>> ALL = List.of(STABILITY, THERMODYNAMICS, CONVECTION, OPACITY);
+    /** Builders and checkers of opacity table files (not a physical model: a tool over the table format). */
+    public static final ModelFamily<OpacityTableTool> OPACITY_TABLES =
+            new ModelFamily<>("opacity-tables", OpacityTableTool.class);
+
+    private static final List<ModelFamily<?>> ALL =
+            List.of(STABILITY, THERMODYNAMICS, CONVECTION, OPACITY, OPACITY_TABLES);
 
     private final String name;
     private final Class<T> type;

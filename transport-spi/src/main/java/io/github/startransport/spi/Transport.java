@@ -260,4 +260,9 @@ public final class Transport {
     public OpacityModel opacity(String name, ModelOptions options) {
         return model(ModelFamily.OPACITY, name, options);
     }
+
+    /** @return shortcut for {@code model(ModelFamily.OPACITY_TABLES, name, options)} */
+    public OpacityTableTool opacityTables(String name, ModelOptions options) {
+        return model(ModelFamily.OPACITY_TABLES, name, options);
+    }
 }
