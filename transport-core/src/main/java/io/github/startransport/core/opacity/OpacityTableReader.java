@@ -53,7 +53,6 @@ public final class OpacityTableReader {
     public static final String ABSENT = "absent:";
 
     private static final String[] COLUMNS = HEADER.split(",");
-    private static final Pattern NUMBER = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
     private static final Pattern NON_FINITE = Pattern.compile("[+-]?(nan|inf|infinity)", Pattern.CASE_INSENSITIVE);
 
     private OpacityTableReader() {
@@ -90,6 +89,9 @@ public final class OpacityTableReader {
     private record Key(double x, double z) {
     }
 
+    private record Point(double t, double r) {
+    }
+
     private record Row(double t, double r, double v, int line, int colT, int colR) {
     }
 
@@ -103,7 +105,7 @@ public final class OpacityTableReader {
         final int firstLine;
         final int firstColX;
         final List<Row> rows = new ArrayList<>();
-        final Map<Long, Integer> seen = new HashMap<>();
+        final Map<Point, Row> seen = new HashMap<>();
         final List<Hole> holes = new ArrayList<>();
 
         Table(int firstLine, int firstColX) {
@@ -160,17 +162,12 @@ public final class OpacityTableReader {
                 table = new Table(lineNo, starts[0] + 1);
                 tables.put(key, table);
             }
-            long pointKey = 31L * Double.hashCode(vals[2]) + Double.hashCode(vals[3]);
             Row row = new Row(vals[2], vals[3], vals[4], lineNo, starts[2] + 1, starts[3] + 1);
-            Integer earlier = table.seen.putIfAbsent(pointKey, table.rows.size());
-            if (earlier != null) {
-                for (Row other : table.rows) {
-                    if (other.t == row.t && other.r == row.r) {
-                        throw new DataFormatException(source, lineNo, starts[0] + 1,
-                                "duplicate point X=" + vals[0] + ", Z=" + vals[1] + ", log_T=" + vals[2] + ", log_R="
-                                        + vals[3] + " (first given on line " + other.line + ")");
-                    }
-                }
+            Row other = table.seen.putIfAbsent(new Point(vals[2], vals[3]), row);
+            if (other != null) {
+                throw new DataFormatException(source, lineNo, starts[0] + 1,
+                        "duplicate point X=" + vals[0] + ", Z=" + vals[1] + ", log_T=" + vals[2] + ", log_R="
+                                + vals[3] + " (first given on line " + other.line + ")");
             }
             table.rows.add(row);
         }
@@ -315,10 +312,10 @@ public final class OpacityTableReader {
             if (text.isEmpty()) {
                 throw new DataFormatException(source, lineNo, col, COLUMNS[field] + " is empty");
             }
-            if (NON_FINITE.matcher(text).matches()) {
-                throw new DataFormatException(source, lineNo, col, COLUMNS[field] + " is not finite: '" + text + "'");
-            }
-            if (!NUMBER.matcher(text).matches()) {
+            if (!isDecimal(text)) {
+                if (NON_FINITE.matcher(text).matches()) {
+                    throw new DataFormatException(source, lineNo, col, COLUMNS[field] + " is not finite: '" + text + "'");
+                }
                 throw new DataFormatException(source, lineNo, col, COLUMNS[field] + " is not a number: '" + text + "'");
             }
             double v = Double.parseDouble(text);
@@ -337,6 +334,45 @@ public final class OpacityTableReader {
             throw new DataFormatException(source, lineNo, len + 1,
                     "too few fields: expected 5 (" + HEADER + "), found " + field);
         }
+    }
+
+    /** [+-]? (digits [. digits?] | . digits) ([eE] [+-]? digits)? */
+    static boolean isDecimal(String s) {
+        int n = s.length();
+        int i = 0;
+        if (i < n && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
+            i++;
+        }
+        int digits = 0;
+        while (i < n && s.charAt(i) >= '0' && s.charAt(i) <= '9') {
+            i++;
+            digits++;
+        }
+        if (i < n && s.charAt(i) == '.') {
+            i++;
+            while (i < n && s.charAt(i) >= '0' && s.charAt(i) <= '9') {
+                i++;
+                digits++;
+            }
+        }
+        if (digits == 0) {
+            return false;
+        }
+        if (i < n && (s.charAt(i) == 'e' || s.charAt(i) == 'E')) {
+            i++;
+            if (i < n && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
+                i++;
+            }
+            int exp = 0;
+            while (i < n && s.charAt(i) >= '0' && s.charAt(i) <= '9') {
+                i++;
+                exp++;
+            }
+            if (exp == 0) {
+                return false;
+            }
+        }
+        return i == n;
     }
 
     private static void checkComposition(double x, double z, int[] starts, int lineNo, String source) {
@@ -398,7 +434,7 @@ public final class OpacityTableReader {
     }
 
     private static double holeNumber(String text, int lineNo, int col, String source) {
-        if (!NUMBER.matcher(text).matches()) {
+        if (!isDecimal(text)) {
             throw new DataFormatException(source, lineNo, col, "'# " + ABSENT + "' value is not a number: '" + text + "'");
         }
         double v = Double.parseDouble(text);

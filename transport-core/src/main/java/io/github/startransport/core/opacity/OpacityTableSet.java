@@ -172,6 +172,17 @@ public final class OpacityTableSet {
         ZoneChecks.composition(hydrogen, metals, zone);
         double lt = Math.log10(temperature);
         double lr = Math.log10(density) - 3.0 * lt + 18.0;
+        evaluateLogs(lt, lr, temperature, density, hydrogen, metals, policy, zone, out);
+    }
+
+    /**
+     * The same with the table coordinates given directly (T and rho only for messages).
+     *
+     * @param lt log10 T (log K)
+     * @param lr log10 R
+     */
+    void evaluateLogs(double lt, double lr, double temperature, double density, double hydrogen, double metals,
+                      OutOfRangePolicy policy, int zone, OpacityResult out) {
         boolean outside = false;
 
         // metals axis
