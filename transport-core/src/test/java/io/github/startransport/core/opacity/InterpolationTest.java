@@ -171,14 +171,18 @@ class InterpolationTest {
 
     @Test
     void convergesAtFourthOrderUnderRefinement() {
-        // Hermite cubics with O(h^4) node slopes: error O(h^4), i.e. a factor 16 per halving of h.
+        // Bicubic Hermite with exact slopes errs by O(h^4) (constant f^(4)/384, tiny here); our slopes carry
+        // O(h^4) errors that enter the value times O(h), i.e. O(h^5) with a larger constant. So the error
+        // must fall by at least 2^4 per halving of h (order >= 4, 3.7 allowed for the max-norm sampling)
+        // and, pre-asymptotically, by about 2^5.
         double e1 = maxError(21);
         double e2 = maxError(41);
         double e3 = maxError(81);
         double order1 = Math.log(e1 / e2) / Math.log(2);
         double order2 = Math.log(e2 / e3) / Math.log(2);
-        assertTrue(order1 > 3.5 && order1 < 4.6, "observed order " + order1 + " (" + e1 + " -> " + e2 + ")");
-        assertTrue(order2 > 3.5 && order2 < 4.6, "observed order " + order2 + " (" + e2 + " -> " + e3 + ")");
+        System.out.printf("max errors %.3e, %.3e, %.3e: observed orders %.2f, %.2f%n", e1, e2, e3, order1, order2);
+        assertTrue(order1 > 3.7 && order1 < 6, "observed order " + order1 + " (" + e1 + " -> " + e2 + ")");
+        assertTrue(order2 > 3.7 && order2 < 6, "observed order " + order2 + " (" + e2 + " -> " + e3 + ")");
     }
 
     @Test
