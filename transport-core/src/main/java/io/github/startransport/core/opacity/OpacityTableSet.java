@@ -368,6 +368,15 @@ public final class OpacityTableSet {
         int ix = OpacityGrid.interval(ax, x);
         int iy = OpacityGrid.interval(ay, y);
         int fb = g.fallbackRow(ix, iy);
+        // a point on the lower edge of an unusable cell may belong to the usable cell below it
+        if (fb != -1 && y == ay[iy] && iy > 0 && g.fallbackRow(ix, iy - 1) == -1) {
+            iy--;
+            fb = -1;
+        }
+        if (fb != -1 && x == ax[ix] && ix > 0 && g.fallbackRow(ix - 1, iy) == -1) {
+            ix--;
+            fb = -1;
+        }
         if (fb != -1) {
             outside = true;
             if (policy == OutOfRangePolicy.REFUSE || fb == -2) {
