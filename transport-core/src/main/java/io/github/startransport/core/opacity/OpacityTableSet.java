@@ -37,11 +37,15 @@ import java.util.List;
  * <p>Immutable and thread-safe; {@link #evaluate} allocates nothing (except the exception it throws).
  */
 public final class OpacityTableSet {
+    private static final double LN_10 = Math.log(10.0);
+
     private final String source;
     private final OpacityGrid[] grids;
     private final double[] zs;
     private final int[] rowStart;
     private final double[][] rowXs;
+    private final double[] zInv;
+    private final double[][] rowXInv;
     private final boolean fast;
     private final double[] logT;
     private final double[] logR;
@@ -73,6 +77,11 @@ public final class OpacityTableSet {
             for (int k = 0; k < rowXs[r].length; k++) {
                 rowXs[r][k] = grids[rowStart[r] + k].hydrogen;
             }
+        }
+        zInv = inverseDenominators(zs);
+        rowXInv = new double[rowXs.length][];
+        for (int r = 0; r < rowXs.length; r++) {
+            rowXInv[r] = inverseDenominators(rowXs[r]);
         }
         boolean shared = allowFast;
         for (OpacityGrid g : grids) {
@@ -220,7 +229,7 @@ public final class OpacityTableSet {
             double c0 = 0, c1 = 0, c2 = 0, c3 = 0, c4 = 0, c5 = 0, c6 = 0, c7 = 0;
             double c8 = 0, c9 = 0, c10 = 0, c11 = 0, c12 = 0, c13 = 0, c14 = 0, c15 = 0;
             for (int kz = kzLo; kz <= kzHi; kz++) {
-                double wz = weight(zs, iz, zq, kz);
+                double wz = weight(zs, zInv, iz, zq, kz);
                 if (wz == 0.0) {
                     continue;
                 }
@@ -236,7 +245,7 @@ public final class OpacityTableSet {
                 int kxHi = nx <= 2 ? nx - 1 : Math.min(nx - 1, ixx + 2);
                 int base = rowStart[kz];
                 for (int kx = kxLo; kx <= kxHi; kx++) {
-                    double w = wz * weight(xs, ixx, xq, kx);
+                    double w = wz * weight(xs, rowXInv[kz], ixx, xq, kx);
                     if (w == 0.0) {
                         continue;
                     }
@@ -304,7 +313,7 @@ public final class OpacityTableSet {
         double fx = 0;
         double fy = 0;
         for (int kz = kzLo; kz <= kzHi; kz++) {
-            double wz = weight(zs, iz, zq, kz);
+            double wz = weight(zs, zInv, iz, zq, kz);
             if (wz == 0.0) {
                 continue;
             }
@@ -319,7 +328,7 @@ public final class OpacityTableSet {
             int kxLo = nx <= 2 ? 0 : Math.max(0, ixx - 1);
             int kxHi = nx <= 2 ? nx - 1 : Math.min(nx - 1, ixx + 2);
             for (int kx = kxLo; kx <= kxHi; kx++) {
-                double w = wz * weight(xs, ixx, xq, kx);
+                double w = wz * weight(xs, rowXInv[kz], ixx, xq, kx);
                 if (w == 0.0) {
                     continue;
                 }
@@ -334,7 +343,7 @@ public final class OpacityTableSet {
 
     private static void finish(double f, double fx, double fy, boolean outside, OutOfRangePolicy policy,
                                OpacityResult out) {
-        out.kappa = Math.pow(10.0, f);
+        out.kappa = Math.exp(f * LN_10);
         out.dLnKappaDLnRho = fy;
         out.dLnKappaDLnT = fx - 3.0 * fy;
         out.status = !outside ? OpacityStatus.INSIDE
@@ -445,36 +454,64 @@ public final class OpacityTableSet {
     }
 
     /**
+     * Per axis a: for each three-node stencil lo (0 .. n-3) the inverse Lagrange denominators
+     * 1 / prod_{m != k} (a_k - a_m) of its nodes k = lo, lo+1, lo+2 at [3 lo + k - lo], then the inverse
+     * interval widths at [3 (n-2) + i]. Lets {@link #weight} use multiplications only.
+     */
+    static double[] inverseDenominators(double[] a) {
+        int n = a.length;
+        int stencils = Math.max(0, n - 2);
+        double[] inv = new double[3 * stencils + Math.max(0, n - 1)];
+        for (int lo = 0; lo < stencils; lo++) {
+            for (int k = lo; k <= lo + 2; k++) {
+                double d = 1.0;
+                for (int m = lo; m <= lo + 2; m++) {
+                    if (m != k) {
+                        d *= a[k] - a[m];
+                    }
+                }
+                inv[3 * lo + k - lo] = 1.0 / d;
+            }
+        }
+        for (int i = 0; i < n - 1; i++) {
+            inv[3 * stencils + i] = 1.0 / (a[i + 1] - a[i]);
+        }
+        return inv;
+    }
+
+    /**
      * Weight of node k for query q in interval i of axis a: constant (n = 1), linear (n = 2), or the
      * blended quadratic (n &gt;= 3) described in the class comment.
+     *
+     * @param inv the axis' {@link #inverseDenominators}
      */
-    static double weight(double[] a, int i, double q, int k) {
+    static double weight(double[] a, double[] inv, int i, double q, int k) {
         int n = a.length;
         if (n == 1) {
             return 1.0;
         }
         if (n == 2) {
-            double s = (q - a[0]) / (a[1] - a[0]);
+            double s = (q - a[0]) * inv[0];
             return k == 0 ? 1.0 - s : s;
         }
         boolean left = i >= 1;
         boolean right = i + 2 <= n - 1;
         if (left && right) {
-            double s = (q - a[i]) / (a[i + 1] - a[i]);
-            return (1.0 - s) * quadratic(a, i - 1, q, k) + s * quadratic(a, i, q, k);
+            double s = (q - a[i]) * inv[3 * (n - 2) + i];
+            return (1.0 - s) * quadratic(a, inv, i - 1, q, k) + s * quadratic(a, inv, i, q, k);
         }
-        return left ? quadratic(a, i - 1, q, k) : quadratic(a, i, q, k);
+        return left ? quadratic(a, inv, i - 1, q, k) : quadratic(a, inv, i, q, k);
     }
 
     /** Lagrange basis of node k for the quadratic through a[lo], a[lo+1], a[lo+2] (0 if k is not one of them). */
-    private static double quadratic(double[] a, int lo, double q, int k) {
+    private static double quadratic(double[] a, double[] inv, int lo, double q, int k) {
         if (k < lo || k > lo + 2) {
             return 0.0;
         }
-        double w = 1.0;
+        double w = inv[3 * lo + k - lo];
         for (int m = lo; m <= lo + 2; m++) {
             if (m != k) {
-                w *= (q - a[m]) / (a[k] - a[m]);
+                w *= q - a[m];
             }
         }
         return w;
