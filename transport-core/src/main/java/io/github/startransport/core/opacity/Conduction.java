@@ -8,8 +8,10 @@ package io.github.startransport.core.opacity;
  * It enters the total as 1/kappa = 1/kappa_rad + 1/kappa_cd because radiative and conductive fluxes
  * add (kappa_cd = 4 a c T^3 / (3 rho lambda_cd)).
  *
- * <p>d ln kappa_cd / d ln rho = -2 and d ln kappa_cd / d ln T = +2 exactly. Outside strong degeneracy
- * the formula overestimates kappa_cd, which then drops out of the harmonic sum, as it should.
+ * <p>d ln kappa_cd / d ln rho = -2 and d ln kappa_cd / d ln T = +2 exactly. The formula is applied
+ * everywhere; outside strong degeneracy it is only a stand-in (its share of the total stays below ~1%
+ * wherever kappa_rad is below ~1e-2 of kappa_cd, e.g. the solar interior, but it reaches a few percent
+ * in dense, moderately hot gas such as T = 1e5-1e6 K at rho ~ 1e-2-1 g cm^-3).
  * Production work uses tabulated conductive opacities (e.g. Cassisi et al. 2007). Pure static kernel.
  */
 public final class Conduction {
