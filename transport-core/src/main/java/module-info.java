@@ -12,6 +12,7 @@ module io.github.startransport.core {
     exports io.github.startransport.core.convection;
     exports io.github.startransport.core.gradient;
     exports io.github.startransport.core.model;
+    exports io.github.startransport.core.opacity;
     exports io.github.startransport.core.profile;
     exports io.github.startransport.core.timescale;
 

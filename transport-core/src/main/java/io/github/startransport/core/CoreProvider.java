@@ -6,6 +6,9 @@ import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.model.DemoStar;
 import io.github.startransport.core.profile.LocalDiagnosis;
+import io.github.startransport.core.opacity.AnalyticOpacity;
+import io.github.startransport.core.opacity.CsvTableTool;
+import io.github.startransport.core.opacity.TabulatedOpacity;
 import io.github.startransport.spi.DiscoveryException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
@@ -34,6 +37,9 @@ public final class CoreProvider implements TransportProvider {
             new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions),
             new Entry(LocalMixingLength.INFO, LocalMixingLength::fromOptions),
             new Entry(TransparentEddyMixingLength.INFO, TransparentEddyMixingLength::fromOptions),
+            new Entry(AnalyticOpacity.INFO, AnalyticOpacity::fromOptions),
+            new Entry(TabulatedOpacity.INFO, TabulatedOpacity::fromOptions),
+            new Entry(CsvTableTool.INFO, CsvTableTool::fromOptions),
             new Entry(LocalDiagnosis.INFO, LocalDiagnosis::fromOptions),
             new Entry(DemoStar.INFO, DemoStar::fromOptions));
 
@@ -49,7 +55,7 @@ public final class CoreProvider implements TransportProvider {
     @Override
     public String description() {
         return "startransport's own physics: stability tests, ideal gas plus radiation, mixing-length convection, "
-                + "profile diagnosis, demo star";
+                + "opacities (analytic and tabulated), profile diagnosis, demo star";
     }
 
     @Override

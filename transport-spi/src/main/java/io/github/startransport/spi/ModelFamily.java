@@ -23,13 +23,17 @@ public final class ModelFamily<T> {
     /** Rosseland mean opacities, analytic or tabulated. */
     public static final ModelFamily<OpacityModel> OPACITY = new ModelFamily<>("opacity", OpacityModel.class);
 
+    /** Builders and checkers of opacity table files (not a physical model: a tool over the table format). */
+    public static final ModelFamily<OpacityTableTool> OPACITY_TABLES =
+            new ModelFamily<>("opacity-tables", OpacityTableTool.class);
+
     /** Whole-profile diagnosis: zones, regions, boundaries, timescales. */
     public static final ModelFamily<ProfileDiagnoser> DIAGNOSIS = new ModelFamily<>("diagnosis", ProfileDiagnoser.class);
     /** Built-in stellar models that need no input file. */
     public static final ModelFamily<StarModel> STAR = new ModelFamily<>("star", StarModel.class);
 
     private static final List<ModelFamily<?>> ALL =
-            List.of(STABILITY, THERMODYNAMICS, CONVECTION, OPACITY, DIAGNOSIS, STAR);
+            List.of(STABILITY, THERMODYNAMICS, CONVECTION, OPACITY, OPACITY_TABLES, DIAGNOSIS, STAR);
 
     private final String name;
     private final Class<T> type;

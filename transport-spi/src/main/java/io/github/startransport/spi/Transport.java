@@ -270,4 +270,9 @@ public final class Transport {
     public StarModel star(String name, ModelOptions options) {
         return model(ModelFamily.STAR, name, options);
     }
+
+    /** @return shortcut for {@code model(ModelFamily.OPACITY_TABLES, name, options)} */
+    public OpacityTableTool opacityTables(String name, ModelOptions options) {
+        return model(ModelFamily.OPACITY_TABLES, name, options);
+    }
 }
