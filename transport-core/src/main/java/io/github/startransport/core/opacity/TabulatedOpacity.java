@@ -28,7 +28,7 @@ public final class TabulatedOpacity implements OpacityModel {
             List.of(new OptionInfo("file", "", "",
                             "table file to read; empty for the built-in demo table (the analytic composite tabulated "
                                     + "at start-up)"),
-                    new OptionInfo("outOfRange", "refuse", "",
+                    new OptionInfo("out-of-range", "refuse", "",
                             "refuse, clamp or extrapolate: what a query outside the table does")));
 
     private final OpacityTableSet set;
@@ -44,13 +44,13 @@ public final class TabulatedOpacity implements OpacityModel {
     }
 
     /**
-     * @param options {@code file}, {@code outOfRange}
+     * @param options {@code file}, {@code out-of-range}
      * @return the model
      * @throws io.github.startransport.spi.DataFormatException when the file is malformed
      */
     public static TabulatedOpacity fromOptions(ModelOptions options) {
         options.requireKnown(NAME, INFO.optionNames());
-        OutOfRangePolicy policy = options.getEnum(NAME, "outOfRange", OutOfRangePolicy.class, OutOfRangePolicy.REFUSE);
+        OutOfRangePolicy policy = options.getEnum(NAME, "out-of-range", OutOfRangePolicy.class, OutOfRangePolicy.REFUSE);
         String file = options.getString(NAME, "file", "");
         OpacityTableSet set = file.isBlank() ? DemoTable.set() : OpacityTableReader.read(Path.of(file));
         return new TabulatedOpacity(set, policy);
@@ -74,6 +74,6 @@ public final class TabulatedOpacity implements OpacityModel {
 
     @Override
     public String toString() {
-        return NAME + "(" + set.source() + ", outOfRange=" + policy.name().toLowerCase(java.util.Locale.ROOT) + ")";
+        return NAME + "(" + set.source() + ", out-of-range=" + policy.name().toLowerCase(java.util.Locale.ROOT) + ")";
     }
 }

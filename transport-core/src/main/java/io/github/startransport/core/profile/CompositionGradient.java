@@ -33,9 +33,10 @@ public final class CompositionGradient {
         for (int k = 1; k < n - 1; k++) {
             double h0 = lnP[k] - lnP[k - 1];
             double h1 = lnP[k + 1] - lnP[k];
-            out[k] = (-h1 / (h0 * (h0 + h1))) * lnMu[k - 1]
-                    + ((h1 - h0) / (h0 * h1)) * lnMu[k]
-                    + (h0 / (h1 * (h0 + h1))) * lnMu[k + 1];
+            // the three weights sum to zero; written on differences so that a uniform composition
+            // gives exactly 0 rather than rounding noise of either sign
+            out[k] = (-h1 / (h0 * (h0 + h1))) * (lnMu[k - 1] - lnMu[k])
+                    + (h0 / (h1 * (h0 + h1))) * (lnMu[k + 1] - lnMu[k]);
         }
     }
 }

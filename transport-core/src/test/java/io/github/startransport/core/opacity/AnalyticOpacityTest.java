@@ -13,7 +13,8 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 class AnalyticOpacityTest {
-    private static final AnalyticOpacity MODEL = AnalyticOpacity.DEFAULT;
+    /** The published Kramers constants with g_bf / t = 1 (Carroll & Ostlie 1996), so the checks below see them unscaled. */
+    private static final AnalyticOpacity MODEL = new AnalyticOpacity(1.0, 1.0);
 
     private static void assertRel(double expected, double actual, double rel, String what) {
         assertEquals(expected, actual, rel * Math.abs(expected), what);

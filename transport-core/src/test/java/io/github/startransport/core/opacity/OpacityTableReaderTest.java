@@ -197,7 +197,7 @@ class OpacityTableReaderTest {
         assertEquals(1.0, s.tables().get(0).coverage());
         assertEquals(6.0, s.tables().get(1).logTMax());
         OpacityModel table = transport.opacity("table",
-                ModelOptions.parse("file=" + file + ",outOfRange=clamp"));
+                ModelOptions.parse("file=" + file + ",out-of-range=clamp"));
         OpacityResult r = new OpacityResult();
         table.evaluate(1e7, 1.0, 0.7, 0.02, -1, r);
         assertEquals(OpacityStatus.CLAMPED, r.status);
