@@ -277,9 +277,19 @@ final class DiagnoseCommand implements Callable<Integer> {
             throw new IllegalStateException("interrupted", e);
         } finally {
             pool.shutdownNow();
+            awaitQuietly(pool);
             bar.finish();
         }
         return results;
+    }
+
+    /** Waits for cancelled tasks to stop writing, so the staging folder can be deleted whole. */
+    private static void awaitQuietly(ExecutorService pool) {
+        try {
+            pool.awaitTermination(2, java.util.concurrent.TimeUnit.MINUTES);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 
     private ProfileDiagnosis diagnoseAndWrite(Job job, Setup setup, Path dir, ProgressBar bar) throws IOException {

@@ -75,11 +75,26 @@ final class OutputFolder implements AutoCloseable {
                     + " is not a folder");
         }
         try {
-            Path staging = Files.createTempDirectory(parent, "." + t.getFileName() + ".partial-");
+            Path staging = freshSibling(t, ".partial-");
+            Files.createDirectory(staging);
             return new OutputFolder(t, staging, created);
         } catch (IOException e) {
             deleteCreated(created);
             throw new BadInputException("cannot write the output folder " + target + ": " + reason(e, parent), e);
+        }
+    }
+
+    /**
+     * A hidden, unused name beside the target. (Not {@code Files.createTempDirectory}: its folders
+     * are private to the owner, and the staging folder becomes the output folder.)
+     */
+    private static Path freshSibling(Path target, String kind) {
+        java.util.concurrent.ThreadLocalRandom random = java.util.concurrent.ThreadLocalRandom.current();
+        while (true) {
+            Path p = target.resolveSibling("." + target.getFileName() + kind + Long.toUnsignedString(random.nextLong(), 36));
+            if (!Files.exists(p, LinkOption.NOFOLLOW_LINKS)) {
+                return p;
+            }
         }
     }
 
@@ -136,8 +151,7 @@ final class OutputFolder implements AutoCloseable {
      */
     void commit() throws IOException {
         if (Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
-            Path old = Files.createTempDirectory(target.getParent(), "." + target.getFileName() + ".old-");
-            Files.delete(old);
+            Path old = freshSibling(target, ".old-");
             Files.move(target, old, StandardCopyOption.ATOMIC_MOVE);
             try {
                 Files.move(staging, target, StandardCopyOption.ATOMIC_MOVE);

@@ -166,6 +166,15 @@ class MainTest {
     }
 
     @Test
+    void unknownModelNameExitsOneNamingItAndWritesNothing(@TempDir Path dir) throws IOException {
+        Path p = ProfileFiles.valid(dir, "p.csv");
+        Runs r = Runs.run("diagnose", p.toString(), "--convection", "no-such-model", "--out",
+                dir.resolve("out").toString());
+        assertRefusedWithNothingWritten(r, dir, p);
+        assertTrue(r.err().contains("no-such-model"), r.err());
+    }
+
+    @Test
     void modelsListsEveryProviderAndModelWithOptionDefaults() {
         Runs r = Runs.run("models");
         assertEquals(0, r.code(), r.toString());
