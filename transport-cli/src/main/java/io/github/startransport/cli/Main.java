@@ -1,82 +1,160 @@
 package io.github.startransport.cli;
 
-import io.github.startransport.spi.ModelOptions;
-import io.github.startransport.spi.StabilityModel;
-import io.github.startransport.spi.StabilityResult;
-import io.github.startransport.spi.ThermoResult;
-import io.github.startransport.spi.ThermodynamicsModel;
+import io.github.startransport.spi.DataFormatException;
+import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.Transport;
-import io.github.startransport.spi.TransportProvider;
-import io.github.startransport.spi.ZoneState;
+import io.github.startransport.spi.TransportException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.ArgSpec;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Model.OptionSpec;
+import picocli.CommandLine.ParameterException;
+import picocli.CommandLine.Spec;
 
 import java.io.PrintStream;
-import java.util.Locale;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.util.function.Supplier;
 
 /**
- * A host-style program: discovers the physics through the SPI only and prints the stability
- * classification of a few example zones under both criteria.
+ * The command-line tool {@code startransport}: {@code diagnose} and {@code models}. It reaches
+ * the physics only through the SPI ({@link Transport#discover()}).
+ *
+ * <p>Exit codes: {@value #OK} success, {@value #BAD_INPUT} bad input (file, line or zone,
+ * column and what is wrong), {@value #USAGE} usage error.
  */
 public final class Main {
+    /** Exit code: success. */
+    public static final int OK = 0;
+    /** Exit code: bad input (a file, a value, an output folder). */
+    public static final int BAD_INPUT = 1;
+    /** Exit code: the command line itself is wrong. */
+    public static final int USAGE = 2;
+
     private Main() {
     }
 
+    /** The top-level command; it only dispatches. */
+    @Command(name = "startransport", mixinStandardHelpOptions = true, versionProvider = Version.class,
+            description = {"Energy-transport diagnostics of stellar model profiles.", ""},
+            footer = {"", "Exit codes: 0 success; 1 bad input; 2 usage error.",
+                "Run 'startransport diagnose --help' for the profile format and every option."})
+    static final class Root implements Runnable {
+        @Spec
+        private CommandSpec spec;
+
+        @Override
+        public void run() {
+            throw new ParameterException(spec.commandLine(), "missing command: diagnose or models");
+        }
+    }
+
+    /** The version from the jar's manifest. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String v = Main.class.getPackage().getImplementationVersion();
+            return new String[] {"startransport " + (v == null ? "(development build)" : v)};
+        }
+    }
+
+    /** Defaults that come from the providers found at run time: shown in help, used when no value is given. */
+    private static final class ProviderDefaults implements CommandLine.IDefaultValueProvider {
+        private final Cli cli;
+
+        ProviderDefaults(Cli cli) {
+            this.cli = cli;
+        }
+
+        @Override
+        public String defaultValue(ArgSpec arg) {
+            if (!(arg instanceof OptionSpec o)) {
+                return null;
+            }
+            switch (o.longestName()) {
+                case "--alpha" -> {
+                    String a = DiagnoseCommand.defaultAlpha(cli.transportOrNull());
+                    try {
+                        return a != null && Double.isFinite(Double.parseDouble(a)) ? a : null;
+                    } catch (NumberFormatException e) {
+                        return null;
+                    }
+                }
+                case "--convection" -> {
+                    return DiagnoseCommand.defaultName(cli.transportOrNull(), ModelFamily.CONVECTION);
+                }
+                case "--opacity" -> {
+                    return DiagnoseCommand.defaultName(cli.transportOrNull(), ModelFamily.OPACITY);
+                }
+                default -> {
+                    return null;
+                }
+            }
+        }
+    }
+
     /**
-     * @param args ignored
+     * Runs the tool and exits with its exit code.
+     *
+     * @param args the command line
      */
     public static void main(String[] args) {
-        System.exit(run(System.out, System.err));
+        System.exit(run(args, System.out, System.err));
     }
 
-    static int run(PrintStream out, PrintStream err) {
-        Transport transport;
-        try {
-            transport = Transport.discover();
-        } catch (RuntimeException e) {
-            err.println("startransport: " + e.getMessage());
-            return 1;
-        }
-        for (TransportProvider p : transport.providers()) {
-            out.println("provider " + p.name() + ": " + p.description());
-        }
-        ThermodynamicsModel eos = transport.thermodynamics(null, ModelOptions.defaults());
-        StabilityModel schwarzschild = transport.stability(null, ModelOptions.parse("criterion=schwarzschild"));
-        StabilityModel ledoux = transport.stability(null, ModelOptions.parse("criterion=ledoux"));
-        ZoneState z = new ZoneState();
-        ThermoResult thermo = new ThermoResult();
-        StabilityResult s = new StabilityResult();
-        StabilityResult l = new StabilityResult();
-        out.println();
-        out.println(String.format(Locale.ROOT, "%-34s %10s %9s %9s %9s  %-15s %-15s",
-                "example zone (invented)", "log T", "nabla_rad", "nabla_ad", "nabla_L", "schwarzschild", "ledoux"));
-        for (Example e : EXAMPLES) {
-            z.radius = e.r;
-            z.mass = e.m;
-            z.temperature = e.t;
-            z.density = e.rho;
-            z.luminosity = e.lum;
-            z.opacity = e.kappa;
-            z.hydrogen = e.x;
-            z.metals = e.zMetals;
-            z.nablaMu = e.nablaMu;
-            eos.complete(z, thermo);
-            schwarzschild.evaluate(z, s);
-            ledoux.evaluate(z, l);
-            out.println(String.format(Locale.ROOT, "%-34s %10.3f %9.4f %9.4f %9.4f  %-15s %-15s", e.label,
-                    Math.log10(e.t), s.nablaRad, s.nablaAd, s.nablaLedoux, s.regime.label(), l.regime.label()));
-        }
-        return 0;
+    /**
+     * Runs the tool in this JVM.
+     *
+     * @param args the command line
+     * @param out  standard output
+     * @param err  standard error
+     * @return the exit code
+     */
+    public static int run(String[] args, PrintStream out, PrintStream err) {
+        return run(args, out, err, System.console() != null, Transport::discover);
     }
 
-    private record Example(String label, double r, double m, double t, double rho, double lum, double kappa,
-                           double x, double zMetals, double nablaMu) {
+    /**
+     * @param args      the command line
+     * @param out       standard output
+     * @param err       standard error
+     * @param console   whether a person is watching (progress bars)
+     * @param discovery finds the providers
+     * @return the exit code
+     */
+    static int run(String[] args, PrintStream out, PrintStream err, boolean console, Supplier<Transport> discovery) {
+        if (System.getProperty("java.awt.headless") == null) {
+            System.setProperty("java.awt.headless", "true");
+        }
+        Cli cli = new Cli(out, err, console, discovery);
+        CommandLine cl = new CommandLine(new Root());
+        cl.addSubcommand(new CommandLine(new DiagnoseCommand(cli)));
+        cl.addSubcommand(new CommandLine(new ModelsCommand(cli)));
+        cl.setDefaultValueProvider(new ProviderDefaults(cli));
+        cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
+        cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
+        cl.setExecutionExceptionHandler((e, line, parsed) -> {
+            err.println("startransport: " + describe(e));
+            if (!(e instanceof TransportException || e instanceof BadInputException)) {
+                e.printStackTrace(err);
+            }
+            err.flush();
+            return BAD_INPUT;
+        });
+        int code = cl.execute(args);
+        out.flush();
+        err.flush();
+        return code;
     }
 
-    /** Invented demonstration zones, cgs. */
-    private static final Example[] EXAMPLES = {
-        new Example("hot core, high luminosity", 3e10, 4e33, 2.5e7, 20.0, 1.0e37, 0.35, 0.7, 0.02, 0.0),
-        new Example("radiative mantle", 2e11, 1.5e33, 6e6, 2.0, 3.8e33, 2.0, 0.7, 0.02, 0.0),
-        new Example("edge of a receding core, mu step", 4e10, 2e33, 2.0e7, 30.0, 1.7e36, 0.35, 0.5, 0.02, 0.5),
-        new Example("mu inversion (burning shell above)", 1e11, 1e33, 1.0e7, 5.0, 1.0e33, 1.0, 0.7, 0.02, -0.05),
-        new Example("neutrino-cooled core (L < 0)", 1e9, 5e32, 8.0e8, 1e5, -1.0e36, 0.2, 0.0, 0.02, 0.0),
-    };
+    private static String describe(Exception e) {
+        if (e instanceof DataFormatException || e instanceof BadInputException) {
+            return e.getMessage();
+        }
+        if (e instanceof TransportException) {
+            return e.getMessage();
+        }
+        return "internal error: " + e;
+    }
 }

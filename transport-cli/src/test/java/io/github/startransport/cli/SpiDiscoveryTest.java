@@ -11,11 +11,8 @@ import io.github.startransport.spi.TransportProvider;
 import io.github.startransport.spi.ZoneState;
 import org.junit.jupiter.api.Test;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
 import java.net.URL;
 import java.net.URLClassLoader;
-import java.nio.charset.StandardCharsets;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -56,19 +53,6 @@ class SpiDiscoveryTest {
             DiscoveryException e = assertThrows(DiscoveryException.class, () -> Transport.discover(empty));
             assertEquals(DiscoveryException.Kind.NO_PROVIDER, e.kind());
             assertTrue(e.getMessage().contains("transport-core"), e.getMessage());
-        }
-    }
-
-    @Test
-    void exampleProgramPrintsEveryRegimeItDemonstrates() {
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        int code = Main.run(new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8));
-        String text = out.toString(StandardCharsets.UTF_8);
-        assertEquals(0, code, err.toString(StandardCharsets.UTF_8));
-        assertTrue(text.contains("provider startransport-core"), text);
-        for (Regime regime : Regime.values()) {
-            assertTrue(text.contains(regime.label()), "no " + regime.label() + " zone in:\n" + text);
         }
     }
 }

@@ -1,0 +1,308 @@
+package io.github.startransport.cli;
+
+import io.github.startransport.spi.DiagnosisColumn;
+import io.github.startransport.spi.ProfileDiagnosis;
+import io.github.startransport.spi.Regime;
+import io.github.startransport.spi.Region;
+import org.jfree.chart.ChartUtils;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.LegendItem;
+import org.jfree.chart.LegendItemCollection;
+import org.jfree.chart.StandardChartTheme;
+import org.jfree.chart.axis.LogAxis;
+import org.jfree.chart.axis.LogarithmicAxis;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.ValueAxis;
+import org.jfree.chart.plot.IntervalMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.title.TextTitle;
+import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.RectangleEdge;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.Paint;
+import java.awt.Rectangle;
+import java.awt.Stroke;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.EnumMap;
+import java.util.EnumSet;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * The three plots of a diagnosis, drawn with JFreeChart and written as PNG at 1200 x 800.
+ *
+ * <p>On logarithmic axes a value that is zero or negative cannot be drawn; it leaves a gap in
+ * its line, and the plot's subtitle says so.
+ */
+final class DiagnosisCharts {
+    /** Width of every PNG (pixels). */
+    static final int WIDTH = 1200;
+    /** Height of every PNG (pixels). */
+    static final int HEIGHT = 800;
+
+    /** File name of the gradient plot. */
+    static final String GRADIENTS_PNG = "gradients.png";
+    /** File name of the convective velocity and mixing plot. */
+    static final String MIXING_PNG = "velocity-mixing.png";
+    /** File name of the opacity plot. */
+    static final String OPACITY_PNG = "opacity.png";
+
+    private static final Map<Regime, Color> SHADE = new EnumMap<>(Map.of(
+            Regime.CONVECTIVE, new Color(255, 170, 60, 70),
+            Regime.SEMICONVECTIVE, new Color(80, 190, 90, 70),
+            Regime.THERMOHALINE, new Color(90, 140, 230, 70),
+            Regime.RADIATIVE, new Color(0, 0, 0, 0)));
+
+    private static final String R_OVER_R = "r / R";
+
+    private DiagnosisCharts() {
+    }
+
+    /**
+     * Writes all three plots into a folder.
+     *
+     * @param diagnosis the diagnosis
+     * @param dir       an existing folder
+     * @throws IOException when a file cannot be written
+     */
+    static void writeAll(ProfileDiagnosis diagnosis, Path dir) throws IOException {
+        write(gradients(diagnosis), dir.resolve(GRADIENTS_PNG));
+        write(velocityAndMixing(diagnosis), dir.resolve(MIXING_PNG));
+        write(opacity(diagnosis), dir.resolve(OPACITY_PNG));
+    }
+
+    /**
+     * @param chart a chart
+     * @param file  the PNG to create
+     * @throws IOException when the file cannot be written
+     */
+    static void write(JFreeChart chart, Path file) throws IOException {
+        ChartUtils.saveChartAsPNG(file.toFile(), chart, WIDTH, HEIGHT);
+    }
+
+    /**
+     * @param d a diagnosis
+     * @return nabla_rad, nabla_ad, nabla_L and the actual nabla against r/R, regions shaded
+     */
+    static JFreeChart gradients(ProfileDiagnosis d) {
+        double[] x = radiusFraction(d);
+        XYSeriesCollection data = new XYSeriesCollection();
+        int hidden = 0;
+        hidden += add(data, "\u2207_rad (radiative)", x, d.column(DiagnosisColumn.NABLA_RAD), true);
+        hidden += add(data, "\u2207_ad (adiabatic)", x, d.column(DiagnosisColumn.NABLA_AD), true);
+        hidden += add(data, "\u2207_L (Ledoux)", x, d.column(DiagnosisColumn.NABLA_LEDOUX), true);
+        hidden += add(data, "\u2207 (actual)", x, d.column(DiagnosisColumn.NABLA), true);
+        ValueAxis y = logAxis("temperature gradient \u2207 = d ln T / d ln P (dimensionless)", data);
+        XYPlot plot = new XYPlot(data, fractionAxis(), y, new XYLineAndShapeRenderer(true, false));
+        JFreeChart chart = chart("Temperature gradients of " + d.source() + " (" + d.criterion().label()
+                + " criterion, \u03b1 = " + d.alpha() + ")", plot);
+        style(plot, 0, 4);
+        shadeRegions(d, plot);
+        note(chart, hidden, "gradient values \u2264 0");
+        return chart;
+    }
+
+    /**
+     * @param d a diagnosis
+     * @return v_conv (left axis) and D_mix (right axis) against r/R, regions shaded
+     */
+    static JFreeChart velocityAndMixing(ProfileDiagnosis d) {
+        double[] x = radiusFraction(d);
+        XYSeriesCollection velocity = new XYSeriesCollection();
+        XYSeriesCollection mixing = new XYSeriesCollection();
+        int hidden = add(velocity, "v_conv (left axis)", x, d.column(DiagnosisColumn.VELOCITY), true);
+        int hiddenMixing = add(mixing, "D_mix (right axis)", x, d.column(DiagnosisColumn.DIFFUSION), true);
+        XYPlot plot = new XYPlot(velocity, fractionAxis(),
+                logAxis("convective velocity v_conv (cm s\u207b\u00b9)", velocity),
+                new XYLineAndShapeRenderer(true, false));
+        plot.setRangeAxis(1, logAxis("mixing diffusion coefficient D_mix (cm\u00b2 s\u207b\u00b9)", mixing));
+        plot.setDataset(1, mixing);
+        plot.mapDatasetToRangeAxis(1, 1);
+        plot.setRenderer(1, new XYLineAndShapeRenderer(true, false));
+        plot.setRangeAxisLocation(1, org.jfree.chart.axis.AxisLocation.BOTTOM_OR_RIGHT);
+        JFreeChart chart = chart("Convective velocity and mixing in " + d.source(), plot);
+        style(plot, 0, 1);
+        style(plot, 1, 1);
+        shadeRegions(d, plot);
+        if (hidden == d.size() && hiddenMixing == d.size()) {
+            chart.addSubtitle(subtitle("no zone has v_conv > 0 or D_mix > 0: nothing to draw"));
+        } else {
+            note(chart, hidden + hiddenMixing, "zero values (zones without convection or mixing)");
+        }
+        return chart;
+    }
+
+    /**
+     * @param d a diagnosis
+     * @return kappa against log10 T
+     */
+    static JFreeChart opacity(ProfileDiagnosis d) {
+        double[] t = d.column(DiagnosisColumn.TEMPERATURE);
+        double[] logT = new double[t.length];
+        for (int k = 0; k < t.length; k++) {
+            logT[k] = Math.log10(t[k]);
+        }
+        XYSeriesCollection data = new XYSeriesCollection();
+        int hidden = add(data, "\u03ba (Rosseland mean, as used)", logT, d.column(DiagnosisColumn.OPACITY), false);
+        NumberAxis x = new NumberAxis("log\u2081\u2080 (T / K)");
+        x.setAutoRangeIncludesZero(false);
+        XYPlot plot = new XYPlot(data, x, logAxis("opacity \u03ba (cm\u00b2 g\u207b\u00b9)", data),
+                new XYLineAndShapeRenderer(true, false));
+        JFreeChart chart = chart("Opacity against temperature in " + d.source(), plot);
+        style(plot, 0, 1);
+        note(chart, hidden, "opacity values \u2264 0");
+        return chart;
+    }
+
+    private static double[] radiusFraction(ProfileDiagnosis d) {
+        double[] r = d.column(DiagnosisColumn.RADIUS);
+        double big = d.radius();
+        for (int k = 0; k < r.length; k++) {
+            r[k] /= big;
+        }
+        return r;
+    }
+
+    /** Adds a series; values a log axis cannot show become gaps. @return how many were left out */
+    private static int add(XYSeriesCollection data, String name, double[] x, double[] y, boolean sortByX) {
+        XYSeries s = new XYSeries(name, sortByX, true);
+        int hidden = 0;
+        for (int k = 0; k < x.length; k++) {
+            if (y[k] > 0 && Double.isFinite(y[k]) && Double.isFinite(x[k])) {
+                s.add(x[k], y[k]);
+            } else {
+                s.add(x[k], null);
+                hidden++;
+            }
+        }
+        data.addSeries(s);
+        return hidden;
+    }
+
+    private static NumberAxis fractionAxis() {
+        NumberAxis x = new NumberAxis("fractional radius " + R_OVER_R + " (dimensionless)");
+        x.setRange(0.0, 1.0);
+        return x;
+    }
+
+    /**
+     * A logarithmic axis: powers of ten over a wide range; over less than three decades, where
+     * those would be too few, ticks at 1, 2, ... 9 times a power of ten.
+     */
+    private static ValueAxis logAxis(String label, XYSeriesCollection data) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0.0;
+        for (int s = 0; s < data.getSeriesCount(); s++) {
+            for (int i = 0; i < data.getItemCount(s); i++) {
+                double y = data.getYValue(s, i);
+                if (y > 0 && Double.isFinite(y)) {
+                    lo = Math.min(lo, y);
+                    hi = Math.max(hi, y);
+                }
+            }
+        }
+        if (hi > 0 && Math.log10(hi / lo) < 3) {
+            LogarithmicAxis y = new LogarithmicAxis(label);
+            y.setStrictValuesFlag(false);
+            y.setAllowNegativesFlag(false);
+            y.setExpTickLabelsFlag(hi > 1e4 || lo < 1e-3);
+            return y;
+        }
+        LogAxis y = new LogAxis(label);
+        y.setBase(10);
+        y.setSmallestValue(1e-300);
+        y.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
+        return y;
+    }
+
+    /** Colours and line styles, set after the theme (which would otherwise replace them). */
+    private static void style(XYPlot plot, int index, int series) {
+        XYLineAndShapeRenderer r = (XYLineAndShapeRenderer) plot.getRenderer(index);
+        Paint[] paints = {new Color(200, 30, 30), new Color(30, 30, 30), new Color(30, 110, 200),
+            new Color(20, 150, 60)};
+        Stroke[] strokes = {new BasicStroke(2.5f),
+            new BasicStroke(2.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {10f, 6f}, 0f),
+            new BasicStroke(2.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {3f, 4f}, 0f),
+            new BasicStroke(3.5f)};
+        if (series == 1) {
+            r.setSeriesPaint(0, index == 0 ? new Color(200, 30, 30) : new Color(30, 110, 200));
+            r.setSeriesStroke(0, index == 0 ? strokes[0] : strokes[1]);
+            return;
+        }
+        for (int s = 0; s < series; s++) {
+            r.setSeriesPaint(s, paints[s % paints.length]);
+            r.setSeriesStroke(s, strokes[s % strokes.length]);
+        }
+    }
+
+    private static JFreeChart chart(String title, XYPlot plot) {
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setDomainGridlinePaint(new Color(200, 200, 200));
+        plot.setRangeGridlinePaint(new Color(200, 200, 200));
+        JFreeChart chart = new JFreeChart(title, new Font(Font.SANS_SERIF, Font.BOLD, 24), plot, true);
+        StandardChartTheme theme = (StandardChartTheme) StandardChartTheme.createJFreeTheme();
+        theme.setExtraLargeFont(new Font(Font.SANS_SERIF, Font.BOLD, 24));
+        theme.setLargeFont(new Font(Font.SANS_SERIF, Font.BOLD, 18));
+        theme.setRegularFont(new Font(Font.SANS_SERIF, Font.PLAIN, 16));
+        theme.setSmallFont(new Font(Font.SANS_SERIF, Font.PLAIN, 14));
+        theme.setPlotBackgroundPaint(Color.WHITE);
+        theme.setChartBackgroundPaint(Color.WHITE);
+        theme.setDomainGridlinePaint(new Color(210, 210, 210));
+        theme.setRangeGridlinePaint(new Color(210, 210, 210));
+        theme.apply(chart);
+        chart.getLegend().setPosition(RectangleEdge.BOTTOM);
+        for (int i = 0; i < plot.getRangeAxisCount(); i++) {
+            ValueAxis a = plot.getRangeAxis(i);
+            if (a != null) {
+                a.setTickLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 15));
+            }
+        }
+        return chart;
+    }
+
+    /** Shades each non-radiative region and adds one legend entry per regime shown. */
+    private static void shadeRegions(ProfileDiagnosis d, XYPlot plot) {
+        Set<Regime> shown = EnumSet.noneOf(Regime.class);
+        for (Region region : d.regions()) {
+            if (region.regime() == Regime.RADIATIVE) {
+                continue;
+            }
+            IntervalMarker m = new IntervalMarker(region.bottomRadiusFraction(), region.topRadiusFraction());
+            m.setPaint(SHADE.get(region.regime()));
+            m.setOutlinePaint(null);
+            plot.addDomainMarker(m, Layer.BACKGROUND);
+            shown.add(region.regime());
+        }
+        LegendItemCollection items = new LegendItemCollection();
+        LegendItemCollection series = plot.getLegendItems();
+        for (int i = 0; i < series.getItemCount(); i++) {
+            items.add(series.get(i));
+        }
+        for (Regime regime : shown) {
+            Color c = SHADE.get(regime);
+            LegendItem item = new LegendItem(regime.label() + " region", null, null, null,
+                    new Rectangle(-8, -8, 16, 16), new Color(c.getRed(), c.getGreen(), c.getBlue(), 140));
+            items.add(item);
+        }
+        plot.setFixedLegendItems(items);
+    }
+
+    private static void note(JFreeChart chart, int hidden, String what) {
+        if (hidden > 0) {
+            chart.addSubtitle(subtitle(hidden + " " + what + " not drawn on the logarithmic axis"));
+        }
+    }
+
+    private static TextTitle subtitle(String text) {
+        TextTitle t = new TextTitle(text, new Font(Font.SANS_SERIF, Font.ITALIC, 15));
+        t.setPaint(new Color(90, 90, 90));
+        return t;
+    }
+}

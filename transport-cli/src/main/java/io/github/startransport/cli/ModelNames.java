@@ -1,0 +1,25 @@
+package io.github.startransport.cli;
+
+/**
+ * Every model and option name this tool asks the physics for, in one place: when a provider
+ * renames one, this is the only file to change.
+ *
+ * <p>The tool never names a provider. Families without a name here are asked for their
+ * default ({@code null} name), which is the first provider's recommended model.
+ */
+final class ModelNames {
+    /** Option of the convection model: the mixing-length parameter alpha = l / H_P (dimensionless). */
+    static final String CONVECTION_ALPHA = "alpha";
+
+    /** Option of the convection model: {@code schwarzschild} or {@code ledoux}. */
+    static final String CONVECTION_CRITERION = "criterion";
+
+    /** The opacity model that reads a table file in the library's tidy CSV format. */
+    static final String OPACITY_TABLE_MODEL = "table";
+
+    /** Option of {@link #OPACITY_TABLE_MODEL}: path of the table file. */
+    static final String OPACITY_TABLE_FILE = "file";
+
+    private ModelNames() {
+    }
+}

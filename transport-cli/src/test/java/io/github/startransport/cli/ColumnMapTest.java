@@ -1,0 +1,50 @@
+package io.github.startransport.cli;
+
+import io.github.startransport.spi.ProfileColumn;
+import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+class ColumnMapTest {
+
+    @Test
+    void everyHeaderNameIsAcceptedOnOurSideInAnyCase() {
+        for (ProfileColumn c : ProfileColumn.values()) {
+            assertEquals(c, ColumnMap.ourColumn(c.header()));
+            assertEquals(c, ColumnMap.ourColumn(c.header().toUpperCase(java.util.Locale.ROOT)));
+        }
+        assertEquals(ProfileColumn.TEMPERATURE, ColumnMap.ourColumn("temperature"));
+        assertEquals(ProfileColumn.DENSITY, ColumnMap.ourColumn("Density"));
+        assertEquals(ProfileColumn.OPACITY, ColumnMap.ourColumn("kappa"));
+        assertNull(ColumnMap.ourColumn("temprature"));
+    }
+
+    @Test
+    void leftSideIsOursRightSideIsTheFiles() {
+        ColumnMap map = ColumnMap.parse("temperature=Temp, rho_g_cm3 = Dens");
+        assertEquals("Temp", map.fileHeader(ProfileColumn.TEMPERATURE));
+        assertEquals("Dens", map.fileHeader(ProfileColumn.DENSITY));
+        assertEquals("r_cm", map.fileHeader(ProfileColumn.RADIUS));
+        assertTrue(map.maps(ProfileColumn.TEMPERATURE));
+        assertFalse(map.maps(ProfileColumn.RADIUS));
+    }
+
+    @Test
+    void unknownNameOnOurSideIsRefusedByName() {
+        BadInputException e = assertThrows(BadInputException.class, () -> ColumnMap.parse("temprature=Temp"));
+        assertTrue(e.getMessage().contains("'temprature'"), e.getMessage());
+    }
+
+    @Test
+    void malformedItemsAndDoubleMappingsAreRefused() {
+        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature"));
+        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature=,density=D"));
+        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature=A,T_K=B"));
+        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature=A,density=A"));
+        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature=A,"));
+    }
+}
