@@ -209,7 +209,7 @@ final class DiagnosisCharts {
             }
         }
         if (hi > 0 && Math.log10(hi / lo) < 3) {
-            LogarithmicAxis y = new LogarithmicAxis(label);
+            LogarithmicAxis y = new OneTwoFiveLogAxis(label);
             y.setStrictValuesFlag(false);
             y.setAllowNegativesFlag(false);
             y.setExpTickLabelsFlag(hi > 1e4 || lo < 1e-3);
@@ -304,5 +304,46 @@ final class DiagnosisCharts {
         TextTitle t = new TextTitle(text, new Font(Font.SANS_SERIF, Font.ITALIC, 15));
         t.setPaint(new Color(90, 90, 90));
         return t;
+    }
+
+    /**
+     * A logarithmic axis for ranges of a few decades, labelled at 1, 2 and 5 times each power of
+     * ten, so that a reader can read values off a range narrower than two decades.
+     */
+    static final class OneTwoFiveLogAxis extends LogarithmicAxis {
+        private static final long serialVersionUID = 1L;
+
+        OneTwoFiveLogAxis(String label) {
+            super(label);
+        }
+
+        @Override
+        protected java.util.List<org.jfree.chart.axis.NumberTick> refreshTicksVertical(java.awt.Graphics2D g2,
+                java.awt.geom.Rectangle2D dataArea, org.jfree.chart.ui.RectangleEdge edge) {
+            java.util.List<org.jfree.chart.axis.NumberTick> ticks = new java.util.ArrayList<>();
+            double lo = getLowerBound();
+            double hi = getUpperBound();
+            org.jfree.chart.ui.TextAnchor anchor = edge == org.jfree.chart.ui.RectangleEdge.LEFT
+                    ? org.jfree.chart.ui.TextAnchor.CENTER_RIGHT : org.jfree.chart.ui.TextAnchor.CENTER_LEFT;
+            for (int e = (int) Math.floor(Math.log10(lo)); e <= (int) Math.ceil(Math.log10(hi)); e++) {
+                for (int m = 1; m <= 9; m++) {
+                    double v = m * Math.pow(10, e);
+                    if (v < lo || v > hi) {
+                        continue;
+                    }
+                    boolean labelled = m == 1 || m == 2 || m == 5;
+                    String text = labelled ? new java.text.DecimalFormat("0.###E0").format(v)
+                            .replace("E0", "") : "";
+                    if (labelled && e >= -3 && e <= 3) {
+                        text = java.math.BigDecimal.valueOf(v).round(new java.math.MathContext(1)).stripTrailingZeros()
+                                .toPlainString();
+                    }
+                    ticks.add(new org.jfree.chart.axis.NumberTick(
+                            labelled ? org.jfree.chart.axis.TickType.MAJOR : org.jfree.chart.axis.TickType.MINOR,
+                            v, text, anchor, anchor, 0.0));
+                }
+            }
+            return ticks;
+        }
     }
 }
