@@ -131,6 +131,10 @@ public final class Main {
         CommandLine cl = new CommandLine(new Root());
         cl.addSubcommand(new CommandLine(new DiagnoseCommand(cli)));
         cl.addSubcommand(new CommandLine(new ModelsCommand(cli)));
+        CommandLine table = new CommandLine(new TableCommand());
+        table.addSubcommand(new CommandLine(new TableCommand.Build(cli)));
+        table.addSubcommand(new CommandLine(new TableCommand.Check(cli)));
+        cl.addSubcommand(table);
         cl.setDefaultValueProvider(new ProviderDefaults(cli));
         cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
         cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));

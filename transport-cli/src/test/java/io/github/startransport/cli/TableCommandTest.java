@@ -1,0 +1,80 @@
+package io.github.startransport.cli;
+
+import io.github.startransport.spi.ModelOptions;
+import io.github.startransport.spi.OpacityModel;
+import io.github.startransport.spi.OpacityResult;
+import io.github.startransport.spi.Transport;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** {@code table build} and {@code table check} through the main entry point. */
+class TableCommandTest {
+
+    @Test
+    void buildWritesTheModelsValuesAtEveryNodeAndCheckReportsTheGrid(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("k.csv");
+        Runs r = Runs.run("table", "build", "--out", file.toString(), "--hydrogen", "0.2,0.7", "--metals", "0.02",
+                "--log-t", "4:7:7", "--log-r", "-6,-3,0");
+        assertEquals(0, r.code(), r.toString());
+        assertTrue(r.out().contains("2 (X, Z) tables, 42 values"), r.out());
+        // every row equals log10 of the model's own kappa at that node, where
+        // rho = 10^(log_R + 3 log_T - 18) (the format's definition of log_R)
+        OpacityModel model = Transport.discover().opacity(null, ModelOptions.defaults());
+        OpacityResult k = new OpacityResult();
+        List<String> rows = Files.readAllLines(file).stream().filter(l -> !l.startsWith("#")).toList();
+        assertEquals("X,Z,log_T,log_R,log_kappa", rows.get(0));
+        assertEquals(43, rows.size());
+        for (String row : rows.subList(1, rows.size())) {
+            String[] f = row.split(",");
+            double x = Double.parseDouble(f[0]);
+            double z = Double.parseDouble(f[1]);
+            double logT = Double.parseDouble(f[2]);
+            double logR = Double.parseDouble(f[3]);
+            model.evaluate(Math.pow(10, logT), Math.pow(10, logR + 3 * logT - 18), x, z, -1, k);
+            assertEquals(Math.log10(k.kappa), Double.parseDouble(f[4]), 1e-12, row);
+        }
+        Runs c = Runs.run("table", "check", file.toString());
+        assertEquals(0, c.code(), c.toString());
+        assertTrue(c.out().contains("0.7000 0.0200") && c.out().contains("100.00%"), c.out());
+    }
+
+    @Test
+    void checkOfAMalformedFileNamesLineAndColumn(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("bad.csv");
+        Files.writeString(file, "X,Z,log_T,log_R,log_kappa\n0.7,0.02,4.0,-3,1.0\n0.7,0.02,4.0,x,1.0\n");
+        Runs r = Runs.run("table", "check", file.toString());
+        assertEquals(1, r.code(), r.toString());
+        assertTrue(r.err().contains("bad.csv:3:"), r.err());
+        assertTrue(r.err().contains("log_R"), r.err());
+    }
+
+    @Test
+    void malformedAxisIsAUsageError(@TempDir Path dir) {
+        Path file = dir.resolve("never.csv");
+        Runs r = Runs.run("table", "build", "--out", file.toString(), "--log-t", "4:7");
+        assertEquals(2, r.code(), r.toString());
+        assertTrue(r.err().contains("--log-t"), r.err());
+        assertFalse(Files.exists(file));
+    }
+
+    @Test
+    void diagnoseReadsATableBuiltByTheTool(@TempDir Path dir) {
+        Path file = dir.resolve("k.csv");
+        assertEquals(0, Runs.run("table", "build", "--out", file.toString(), "--hydrogen", "0.6,0.7,0.8",
+                "--metals", "0.01,0.02,0.03", "--log-t", "3.9:7.3:69", "--log-r", "-7:1:33").code());
+        Runs r = Runs.run("diagnose", "--demo", "--opacity-table", file.toString(), "--out",
+                dir.resolve("out").toString());
+        assertEquals(0, r.code(), r.toString());
+        assertTrue(Files.exists(dir.resolve("out/zones.csv")));
+        assertTrue(r.out().contains("opacity table"), r.out());
+    }
+}
