@@ -300,7 +300,7 @@ final class DiagnoseCommand implements Callable<Integer> {
             if (job.read() == null) {
                 throw e;
             }
-            throw job.read().locate(e, true);
+            throw job.read().locate(e, false);
         }
         try {
             Files.createDirectories(dir);

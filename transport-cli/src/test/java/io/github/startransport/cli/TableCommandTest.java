@@ -77,4 +77,38 @@ class TableCommandTest {
         assertTrue(Files.exists(dir.resolve("out/zones.csv")));
         assertTrue(r.out().contains("opacity table"), r.out());
     }
+
+    @Test
+    void aZoneTheOpacityTableRefusesIsReportedAtItsLineInTheFile(@TempDir Path dir) throws IOException {
+        // a table that starts at log T = 5: cooler zones are outside it, and the table model refuses them
+        Path table = dir.resolve("hot.csv");
+        assertEquals(0, Runs.run("table", "build", "--out", table.toString(), "--hydrogen", "0.6,0.7,0.8",
+                "--metals", "0.01,0.02,0.03", "--log-t", "5:7.3:47", "--log-r", "-7:1:33").code());
+        io.github.startransport.spi.Profile p = Transport.discover().star(null, ModelOptions.parse("zones=40")).profile();
+        int n = p.size();
+        StringBuilder csv = new StringBuilder("# surface first\nr_cm,m_g,T_K,rho_g_cm3,P_dyn_cm2,L_erg_s,X,Z\n");
+        int innermostCool = -1;
+        for (int k = n - 1; k >= 0; k--) {
+            double t = p.value(io.github.startransport.spi.ProfileColumn.TEMPERATURE, k);
+            if (t < 1e5) {
+                innermostCool = k;
+            }
+            csv.append(p.value(io.github.startransport.spi.ProfileColumn.RADIUS, k)).append(',')
+                    .append(p.value(io.github.startransport.spi.ProfileColumn.MASS, k)).append(',')
+                    .append(t).append(',')
+                    .append(p.value(io.github.startransport.spi.ProfileColumn.DENSITY, k)).append(',')
+                    .append(p.value(io.github.startransport.spi.ProfileColumn.PRESSURE, k)).append(',')
+                    .append(p.value(io.github.startransport.spi.ProfileColumn.LUMINOSITY, k)).append(",0.7,0.02\n");
+        }
+        Path profile = dir.resolve("surface-first.csv");
+        Files.writeString(profile, csv);
+        Path out = dir.resolve("out");
+        Runs r = Runs.run("diagnose", profile.toString(), "--opacity-table", table.toString(), "--out", out.toString());
+        assertEquals(1, r.code(), r.toString());
+        // the diagnosis walks centre to surface, so the first refusal is the innermost cool zone;
+        // in this surface-first file it is data row n - innermostCool, on line 2 + that row
+        int expectedLine = 2 + (n - innermostCool);
+        assertTrue(r.err().contains("surface-first.csv:" + expectedLine + ":"), r.err() + " expected line " + expectedLine);
+        assertFalse(Files.exists(out));
+    }
 }

@@ -13,7 +13,9 @@ public interface ProfileDiagnoser {
      * @param profile the model
      * @param setup   the models to use
      * @return the diagnosis
-     * @throws InvalidInputException naming the zone and column when a zone cannot be diagnosed
+     * @throws InvalidInputException naming the zone and field when a zone cannot be diagnosed; the zone
+     *                               index counts in the order the profile was given (0-based), as in
+     *                               {@link Profile}'s own refusals
      */
     ProfileDiagnosis diagnose(Profile profile, DiagnosisSetup setup);
 
