@@ -10,14 +10,14 @@ import java.util.Map;
 import java.util.StringJoiner;
 
 /**
- * The {@code --columns} option: which header of a foreign profile file holds which of our
- * columns, written {@code OURS=THEIRS[,OURS=THEIRS...]}.
+ * The {@code --columns} option: maps the header of a profile file written by another program
+ * onto ours, written {@code THEIRS=OURS[,THEIRS=OURS...]}.
  *
- * <p>OURS is one of our header names ({@link ProfileColumn#header()}, e.g. {@code T_K}) or a
- * readable alias ({@code temperature}); both are matched without regard to case. THEIRS is the
- * other file's header name, matched exactly (after trimming). Example:
- * {@code --columns temperature=Temp,rho_g_cm3=Dens} reads our T_K from the file's column
- * {@code Temp} and our rho_g_cm3 from its column {@code Dens}.
+ * <p>THEIRS is the other file's header name, matched exactly (after trimming). OURS is one of our
+ * header names ({@link ProfileColumn#header()}, e.g. {@code T_K}) or a readable alias
+ * ({@code temperature}); both are matched without regard to case. Example:
+ * {@code --columns temperature=T_K,density=rho_g_cm3} reads our T_K from the file's column
+ * {@code temperature} and our rho_g_cm3 from its column {@code density}.
  */
 final class ColumnMap {
     /** Alias (lower case) to column; our header names are added in lower case too. */
@@ -81,7 +81,7 @@ final class ColumnMap {
     }
 
     /**
-     * @param text {@code OURS=THEIRS[,OURS=THEIRS...]}; {@code null} or blank gives {@link #none()}
+     * @param text {@code THEIRS=OURS[,THEIRS=OURS...]}; {@code null} or blank gives {@link #none()}
      * @return the map
      * @throws BadInputException when an item is malformed, names none of our columns, or maps a
      *                           column twice
@@ -93,16 +93,16 @@ final class ColumnMap {
         EnumMap<ProfileColumn, String> theirs = new EnumMap<>(ProfileColumn.class);
         for (String item : text.split(",", -1)) {
             int eq = item.indexOf('=');
-            String ours = eq < 0 ? "" : item.substring(0, eq).trim();
-            String their = eq < 0 ? "" : item.substring(eq + 1).trim();
+            String their = eq < 0 ? "" : item.substring(0, eq).trim();
+            String ours = eq < 0 ? "" : item.substring(eq + 1).trim();
             if (ours.isEmpty() || their.isEmpty()) {
-                throw new BadInputException("--columns: '" + item.trim() + "' is not of the form OURS=THEIRS"
-                        + " (for example temperature=Temp)");
+                throw new BadInputException("--columns: '" + item.trim() + "' is not of the form THEIRS=OURS"
+                        + " (for example Temp=T_K)");
             }
             ProfileColumn c = ourColumn(ours);
             if (c == null) {
-                throw new BadInputException("--columns: '" + ours + "' (left of '=') is not one of our profile"
-                        + " columns; the left side names ours, the right side the file's header. Our columns: "
+                throw new BadInputException("--columns: '" + ours + "' (right of '=') is not one of our profile"
+                        + " columns; the left side names the file's header, the right side ours. Our columns: "
                         + acceptedNames());
             }
             if (theirs.containsKey(c)) {

@@ -102,10 +102,10 @@ final class DiagnoseCommand implements Callable<Integer> {
     private Path opacityTable;
 
     @Option(names = "--columns", paramLabel = "MAP",
-            description = "Read a profile written by another program: OURS=THEIRS[,OURS=THEIRS...] says which of the"
-                    + " file's header names holds each of our columns, e.g. --columns temperature=Temp,rho_g_cm3=Dens."
-                    + " OURS is our header name or an alias (radius, mass, temperature, density, pressure,"
-                    + " luminosity, hydrogen, metals, kappa, cp, ...), any case; THEIRS is matched exactly.")
+            description = "Read a profile written by another program: THEIRS=OURS[,THEIRS=OURS...] maps the file's"
+                    + " header names onto our columns, e.g. --columns temperature=T_K,density=rho_g_cm3."
+                    + " THEIRS is matched exactly; OURS is our header name or an alias (radius, mass, temperature,"
+                    + " density, pressure, luminosity, hydrogen, metals, kappa, cp, ...), any case.")
     private String columns;
 
     /** @param cli where to print and how to find the physics */

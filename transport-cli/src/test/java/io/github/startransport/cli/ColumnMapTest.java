@@ -24,8 +24,8 @@ class ColumnMapTest {
     }
 
     @Test
-    void leftSideIsOursRightSideIsTheFiles() {
-        ColumnMap map = ColumnMap.parse("temperature=Temp, rho_g_cm3 = Dens");
+    void leftSideIsTheFilesRightSideIsOurs() {
+        ColumnMap map = ColumnMap.parse("Temp=temperature,Dens=rho_g_cm3");
         assertEquals("Temp", map.fileHeader(ProfileColumn.TEMPERATURE));
         assertEquals("Dens", map.fileHeader(ProfileColumn.DENSITY));
         assertEquals("r_cm", map.fileHeader(ProfileColumn.RADIUS));
@@ -35,16 +35,16 @@ class ColumnMapTest {
 
     @Test
     void unknownNameOnOurSideIsRefusedByName() {
-        BadInputException e = assertThrows(BadInputException.class, () -> ColumnMap.parse("temprature=Temp"));
+        BadInputException e = assertThrows(BadInputException.class, () -> ColumnMap.parse("Temp=temprature"));
         assertTrue(e.getMessage().contains("'temprature'"), e.getMessage());
     }
 
     @Test
     void malformedItemsAndDoubleMappingsAreRefused() {
         assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature"));
-        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature=,density=D"));
-        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature=A,T_K=B"));
-        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature=A,density=A"));
-        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature=A,"));
+        assertThrows(BadInputException.class, () -> ColumnMap.parse("=temperature,D=density"));
+        assertThrows(BadInputException.class, () -> ColumnMap.parse("A=temperature,B=T_K"));
+        assertThrows(BadInputException.class, () -> ColumnMap.parse("A=temperature,A=density"));
+        assertThrows(BadInputException.class, () -> ColumnMap.parse("A=temperature,"));
     }
 }

@@ -70,7 +70,7 @@ class MainTest {
                 new String[] {"diagnose", p.toString(), "--alpha", "many", "--out", out},
                 new String[] {"diagnose", p.toString(), "--opacity", "x", "--opacity-table", p.toString(), "--out", out},
                 new String[] {"diagnose", p.toString(), "--no-such-option", "--out", out},
-                new String[] {"diagnose", "--demo", "--columns", "temperature=T", "--out", out});
+                new String[] {"diagnose", "--demo", "--columns", "T=temperature", "--out", out});
         for (String[] args : cases) {
             Runs r = Runs.run(args);
             assertEquals(2, r.code(), String.join(" ", args) + "\n" + r);
@@ -91,11 +91,11 @@ class MainTest {
     @Test
     void unknownColumnInColumnsOptionExitsOneNamingIt(@TempDir Path dir) throws IOException {
         Path p = ProfileFiles.valid(dir, "p.csv");
-        Runs ours = Runs.run("diagnose", p.toString(), "--columns", "temprature=Temp", "--out",
+        Runs ours = Runs.run("diagnose", p.toString(), "--columns", "Temp=temprature", "--out",
                 dir.resolve("out").toString());
         assertRefusedWithNothingWritten(ours, dir, p);
         assertTrue(ours.err().contains("temprature"), ours.err());
-        Runs theirs = Runs.run("diagnose", p.toString(), "--columns", "temperature=Temp", "--out",
+        Runs theirs = Runs.run("diagnose", p.toString(), "--columns", "Temp=temperature", "--out",
                 dir.resolve("out").toString());
         assertRefusedWithNothingWritten(theirs, dir, p);
         assertTrue(theirs.err().contains("'Temp'") && theirs.err().contains(p.toString()), theirs.err());

@@ -64,13 +64,13 @@ class ProfileCsvReaderTest {
     }
 
     @Test
-    void columnsOptionMapsOurNamesOntoTheFilesHeader(@TempDir Path dir) throws Exception {
+    void columnsOptionMapsTheFilesHeaderOntoOurNames(@TempDir Path dir) throws Exception {
         Path file = ProfileFiles.write(dir, "foreign.csv",
                 "radius,Mass,Temp,Dens,Press,Lum,X,Z",
                 ProfileFiles.ROWS[0], ProfileFiles.ROWS[1], ProfileFiles.ROWS[2], ProfileFiles.ROWS[3],
                 ProfileFiles.ROWS[4]);
-        ColumnMap map = ColumnMap.parse("r_cm=radius, mass=Mass,TEMPERATURE=Temp,density=Dens,pressure=Press,"
-                + "L=Lum");
+        ColumnMap map = ColumnMap.parse("radius=r_cm, Mass=mass,Temp=TEMPERATURE,Dens=density,Press=pressure,"
+                + "Lum=L");
         Profile p = ProfileCsvReader.read(file, map).profile();
         assertArrayEquals(column(2), p.column(ProfileColumn.TEMPERATURE));
         assertArrayEquals(column(3), p.column(ProfileColumn.DENSITY));
@@ -92,7 +92,7 @@ class ProfileCsvReaderTest {
     void columnsOptionNamingAnAbsentFileColumnIsRefused(@TempDir Path dir) throws Exception {
         Path file = ProfileFiles.valid(dir, "p.csv");
         DataFormatException e = assertThrows(DataFormatException.class,
-                () -> ProfileCsvReader.read(file, ColumnMap.parse("temperature=Temp")));
+                () -> ProfileCsvReader.read(file, ColumnMap.parse("Temp=temperature")));
         assertEquals(2, e.line());
         assertTrue(e.reason().contains("'Temp'"), e.getMessage());
     }
@@ -140,7 +140,7 @@ class ProfileCsvReaderTest {
         Path file = ProfileFiles.write(dir, "p.csv", "r_cm,m_g,T_K,Dens,P_dyn_cm2,L_erg_s,X,Z", r[0], r[1],
                 "2.0e10,1.2e33,6.0e6,-5,3.0e15,3.5e33,0.7,0.02", r[3], r[4]);
         DataFormatException e = assertThrows(DataFormatException.class,
-                () -> ProfileCsvReader.read(file, ColumnMap.parse("density=Dens")));
+                () -> ProfileCsvReader.read(file, ColumnMap.parse("Dens=density")));
         assertEquals(4, e.line());
         assertEquals(4, e.column());
         assertTrue(e.reason().contains("Dens") && e.reason().contains("rho_g_cm3"), e.getMessage());
