@@ -28,15 +28,16 @@ public final class CompositionGradient {
             lnMu[k] = Math.log(GasRadiation.meanMolecularWeight(hydrogen[k], metals[k]));
             lnP[k] = Math.log(pressure[k]);
         }
-        out[0] = (lnMu[1] - lnMu[0]) / (lnP[1] - lnP[0]);
-        out[n - 1] = (lnMu[n - 1] - lnMu[n - 2]) / (lnP[n - 1] - lnP[n - 2]);
+        // "+ 0.0" turns the -0.0 of a uniform composition (0 / negative) into 0.0
+        out[0] = (lnMu[1] - lnMu[0]) / (lnP[1] - lnP[0]) + 0.0;
+        out[n - 1] = (lnMu[n - 1] - lnMu[n - 2]) / (lnP[n - 1] - lnP[n - 2]) + 0.0;
         for (int k = 1; k < n - 1; k++) {
             double h0 = lnP[k] - lnP[k - 1];
             double h1 = lnP[k + 1] - lnP[k];
             // the three weights sum to zero; written on differences so that a uniform composition
             // gives exactly 0 rather than rounding noise of either sign
             out[k] = (-h1 / (h0 * (h0 + h1))) * (lnMu[k - 1] - lnMu[k])
-                    + (h0 / (h1 * (h0 + h1))) * (lnMu[k + 1] - lnMu[k]);
+                    + (h0 / (h1 * (h0 + h1))) * (lnMu[k + 1] - lnMu[k]) + 0.0;
         }
     }
 }
