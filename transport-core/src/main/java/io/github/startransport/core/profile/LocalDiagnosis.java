@@ -116,7 +116,7 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
 
         EnumMap<DiagnosisColumn, double[]> out = new EnumMap<>(DiagnosisColumn.class);
         for (DiagnosisColumn c : DiagnosisColumn.values()) {
-            out.put(c, new double[n]);
+            out.put(c, new double[n]); // the profile's own columns replace theirs below
         }
         double[] g = out.get(DiagnosisColumn.GRAVITY);
         double[] hp = out.get(DiagnosisColumn.SCALE_HEIGHT);
@@ -199,19 +199,19 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         if (!p.has(ProfileColumn.NABLA_MU)) {
             warnings.add("nabla_mu was computed from the X and Z columns (fully ionised mu)");
         }
-        put(out, DiagnosisColumn.RADIUS, r);
-        put(out, DiagnosisColumn.MASS, m);
-        put(out, DiagnosisColumn.TEMPERATURE, t);
-        put(out, DiagnosisColumn.DENSITY, rho);
-        put(out, DiagnosisColumn.PRESSURE, pres);
-        put(out, DiagnosisColumn.LUMINOSITY, lum);
-        put(out, DiagnosisColumn.HYDROGEN, x);
-        put(out, DiagnosisColumn.METALS, z);
-        put(out, DiagnosisColumn.OPACITY, kappa);
-        put(out, DiagnosisColumn.CP, cp);
-        put(out, DiagnosisColumn.DELTA, delta);
-        put(out, DiagnosisColumn.NABLA_AD, nablaAd);
-        put(out, DiagnosisColumn.NABLA_MU, nablaMu);
+        out.put(DiagnosisColumn.RADIUS, r);
+        out.put(DiagnosisColumn.MASS, m);
+        out.put(DiagnosisColumn.TEMPERATURE, t);
+        out.put(DiagnosisColumn.DENSITY, rho);
+        out.put(DiagnosisColumn.PRESSURE, pres);
+        out.put(DiagnosisColumn.LUMINOSITY, lum);
+        out.put(DiagnosisColumn.HYDROGEN, x);
+        out.put(DiagnosisColumn.METALS, z);
+        out.put(DiagnosisColumn.OPACITY, kappa);
+        out.put(DiagnosisColumn.CP, cp);
+        out.put(DiagnosisColumn.DELTA, delta);
+        out.put(DiagnosisColumn.NABLA_AD, nablaAd);
+        out.put(DiagnosisColumn.NABLA_MU, nablaMu);
 
         List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, nablaMu, criterion);
         Timescales times = new Timescales(
@@ -229,10 +229,6 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] a = new double[n];
         java.util.Arrays.fill(a, value);
         return a;
-    }
-
-    private static void put(Map<DiagnosisColumn, double[]> out, DiagnosisColumn c, double[] values) {
-        System.arraycopy(values, 0, out.get(c), 0, values.length);
     }
 
     /** The quantity whose sign change separates regime a (inside) from regime b (outside). */
@@ -266,34 +262,15 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             if (regime == Regime.RADIATIVE) {
                 continue;
             }
-            double rb;
-            double mb;
-            double pb;
-            if (first == 0) {
-                rb = 0.0;
-                mb = 0.0;
-                pb = pres[0];
-            } else {
-                double[] f = separator(regime, regimes[first - 1], criterion, marginS, marginL, nablaMu);
-                rb = BoundaryFinder.root(r[first - 1], f[first - 1], r[first], f[first]);
-                double w = (rb - r[first - 1]) / (r[first] - r[first - 1]);
-                mb = m[first - 1] + w * (m[first] - m[first - 1]);
-                pb = Math.exp(Math.log(pres[first - 1]) + w * (Math.log(pres[first]) - Math.log(pres[first - 1])));
-            }
-            double rt;
-            double mt;
-            double pt;
-            if (last == n - 1) {
-                rt = radius;
-                mt = mass;
-                pt = pres[n - 1];
-            } else {
-                double[] f = separator(regime, regimes[last + 1], criterion, marginS, marginL, nablaMu);
-                rt = BoundaryFinder.root(r[last], f[last], r[last + 1], f[last + 1]);
-                double w = (rt - r[last]) / (r[last + 1] - r[last]);
-                mt = m[last] + w * (m[last + 1] - m[last]);
-                pt = Math.exp(Math.log(pres[last]) + w * (Math.log(pres[last + 1]) - Math.log(pres[last])));
-            }
+            // bottom at the centre, top at the surface, or between the zones either side of the edge
+            double[] bottom = first == 0 ? new double[] {0.0, 0.0, pres[0]}
+                    : edgeBetween(first - 1, first, separator(regime, regimes[first - 1], criterion, marginS, marginL,
+                    nablaMu), r, m, pres);
+            double[] top = last == n - 1 ? new double[] {radius, mass, pres[n - 1]}
+                    : edgeBetween(last, last + 1, separator(regime, regimes[last + 1], criterion, marginS, marginL,
+                    nablaMu), r, m, pres);
+            double rb = bottom[0];
+            double rt = top[0];
             OptionalDouble turnGlobal = OptionalDouble.empty();
             OptionalDouble turnLocal = OptionalDouble.empty();
             OptionalDouble vmax = OptionalDouble.empty();
@@ -311,13 +288,24 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                     }
                 }
             }
-            regions.add(new Region(regime, rb, rt, mb, mt, rb / radius, rt / radius, mb / mass, mt / mass,
-                    Math.log(pb / pt),
+            regions.add(new Region(regime, rb, rt, bottom[1], top[1], rb / radius, rt / radius, bottom[1] / mass,
+                    top[1] / mass, Math.log(bottom[2] / top[2]),
                     edge(r, marginS, first - 1, first), edge(r, marginS, last, last + 1),
                     edge(r, marginL, first - 1, first), edge(r, marginL, last, last + 1),
                     turnGlobal, turnLocal, vmax, first, last));
         }
         return regions;
+    }
+
+    /**
+     * r, m and P where {@code f} changes sign between zones a and b = a + 1: r by
+     * {@link BoundaryFinder#root}, m linear in r, ln P linear in r.
+     */
+    private static double[] edgeBetween(int a, int b, double[] f, double[] r, double[] m, double[] pres) {
+        double at = BoundaryFinder.root(r[a], f[a], r[b], f[b]);
+        double w = (at - r[a]) / (r[b] - r[a]);
+        double lnP = Math.log(pres[a]) + w * (Math.log(pres[b]) - Math.log(pres[a]));
+        return new double[] {at, m[a] + w * (m[b] - m[a]), Math.exp(lnP)};
     }
 
     /**
