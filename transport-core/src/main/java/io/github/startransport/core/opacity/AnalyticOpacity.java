@@ -6,10 +6,12 @@ import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
+import io.github.startransport.spi.OpacityColumns;
 import io.github.startransport.spi.OpacityModel;
 import io.github.startransport.spi.OpacityResult;
 import io.github.startransport.spi.OpacityStatus;
 import io.github.startransport.spi.OptionInfo;
+import io.github.startransport.spi.ZoneColumns;
 
 import java.util.List;
 
@@ -94,6 +96,21 @@ public final class AnalyticOpacity implements OpacityModel {
                     Double.toString(ff), "must be > 0");
         }
         return new AnalyticOpacity(bf, ff);
+    }
+
+    /** A loop over this model's own lookup with the output's working space: no allocation, no per-zone dispatch. */
+    @Override
+    public void evaluateColumns(ZoneColumns in, int from, int to, OpacityColumns out) {
+        in.checkRange(from, to, out.capacity);
+        final OpacityResult r = out.workResult;
+        final double[] t = in.temperature;
+        final double[] rho = in.density;
+        final double[] x = in.hydrogen;
+        final double[] z = in.metals;
+        for (int k = from; k < to; k++) {
+            evaluate(t[k], rho[k], x[k], z[k], k, r);
+            out.store(k, r);
+        }
     }
 
     @Override
