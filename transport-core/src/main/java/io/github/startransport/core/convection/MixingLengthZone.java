@@ -173,6 +173,7 @@ public final class MixingLengthZone {
         out.efficiency = gamma;
         out.diffusion = diffusion;
         if (!jacobian) {
+            guard(z, out, false);
             return;
         }
 
@@ -231,6 +232,24 @@ public final class MixingLengthZone {
             dConvective[i] = (dW * shareRad + w * dShareRad - convective * dNablaRad) * invNablaRad;
             dDiffusion[i] = diffusion * (dlnVelocity + dlnLength);
         }
+        guard(z, out, true);
+    }
+
+    /** Refuses a zone whose valid inputs overflow double precision somewhere on the way (see {@link ZoneChecks#finiteOutputs}). */
+    private static void guard(ZoneState z, ConvectionResult out, boolean jacobian) {
+        double probe = (out.nablaRad + out.nabla + out.nablaElement + out.velocity + out.convectiveFraction
+                + out.radiativeFraction + out.efficiency + out.lossParameter + out.scaleHeight + out.mixingLength
+                + out.diffusion) * 0.0;
+        if (jacobian) {
+            double a = 0.0;
+            double b = 0.0;
+            for (int i = 0; i < ZoneInput.COUNT; i++) {
+                a += out.dNabla[i] * 0.0 + out.dVelocity[i] * 0.0;
+                b += out.dConvectiveFraction[i] * 0.0 + out.dDiffusion[i] * 0.0;
+            }
+            probe += a + b;
+        }
+        ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
     }
 
     private static void stable(ZoneState z, Regime regime, double nablaRad, double semiconvection,
@@ -256,6 +275,7 @@ public final class MixingLengthZone {
             out.diffusion = 0.0;
             Arrays.fill(out.dDiffusion, 0.0);
         }
+        guard(z, out, true);
     }
 
     /** d ln H_P / d ln q_i, H_P = P r^2 / (rho G m). */

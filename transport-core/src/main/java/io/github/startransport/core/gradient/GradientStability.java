@@ -57,6 +57,11 @@ public final class GradientStability implements StabilityModel {
         double nablaRad = RadiativeGradient.valueAndDerivatives(z.opacity, z.luminosity, z.pressure, z.mass,
                 z.temperature, out.dNablaRad);
         double nablaL = LedouxGradient.valueAndDerivatives(z.nablaAd, z.phi, z.delta, z.nablaMu, out.dNablaLedoux);
+        double probe = nablaRad * 0.0 + nablaL * 0.0;
+        for (int i = 0; i < out.dNablaRad.length; i++) {
+            probe += out.dNablaRad[i] * 0.0 + out.dNablaLedoux[i] * 0.0;
+        }
+        ZoneChecks.finiteOutputs("nabla_rad", nablaRad, probe, z);
         out.nablaRad = nablaRad;
         out.nablaAd = z.nablaAd;
         out.nablaLedoux = nablaL;

@@ -149,14 +149,17 @@ public final class AnalyticOpacity implements OpacityModel {
         double wRad = 1.0 / (1.0 + rad / cd);
         double wCd = 1.0 / (1.0 + cd / rad);
         double kappa = rad * wRad;
-        if (!(kappa > 0.0) || kappa == Double.POSITIVE_INFINITY) {
+        double dRho = wRad * radRho + wCd * Conduction.D_LN_RHO;
+        double dT = wRad * radT + wCd * Conduction.D_LN_T;
+        if (!(kappa > 0.0) || kappa == Double.POSITIVE_INFINITY || !Double.isFinite(dRho) || !Double.isFinite(dT)) {
             throw new InvalidInputException("temperature", temperature, "K", zone,
-                    "such that the analytic opacity is finite and > 0 (got " + kappa + " cm^2 g^-1 at rho = "
-                            + density + " g cm^-3)");
+                    "such that the analytic opacity is finite and > 0 with finite slopes (got " + kappa
+                            + " cm^2 g^-1, d ln kappa / d ln rho = " + dRho + ", d ln kappa / d ln T = " + dT
+                            + " at rho = " + density + " g cm^-3)");
         }
         out.kappa = kappa;
-        out.dLnKappaDLnRho = wRad * radRho + wCd * Conduction.D_LN_RHO;
-        out.dLnKappaDLnT = wRad * radT + wCd * Conduction.D_LN_T;
+        out.dLnKappaDLnRho = dRho;
+        out.dLnKappaDLnT = dT;
         out.status = OpacityStatus.INSIDE;
     }
 
