@@ -29,6 +29,51 @@ public interface ConvectionModel {
     void solve(ZoneState zone, ConvectionResult out);
 
     /**
+     * Solves one zone for the values only: every field of {@code out} as {@link #solve} sets it,
+     * bit for bit, except the four derivative arrays, which are left unspecified. The default
+     * calls {@link #solve}; implementations skip the Jacobian.
+     *
+     * @param zone input state (read only)
+     * @param out  caller-owned result, overwritten
+     * @throws InvalidInputException when a read field is non-finite or unphysical
+     */
+    default void solveValues(ZoneState zone, ConvectionResult out) {
+        solve(zone, out);
+    }
+
+    /**
+     * Solves zones [from, to) of a profile held in columns: zone k gets bit for bit what
+     * {@link #solve} gives for {@code in.load(k, state)}. A host may split one profile across
+     * threads by giving each a disjoint range and its own output (or working space).
+     *
+     * <p>The default loops over {@link #solve} with the output's working space and allocates
+     * nothing; implementations override it with a loop over their static kernel, so that the
+     * call site is not shared by every implementation of this interface.
+     *
+     * @param in       input columns (read only)
+     * @param from     first zone, inclusive
+     * @param to       last zone, exclusive
+     * @param out      output columns, overwritten in [from, to)
+     * @param jacobian whether to fill the derivative columns; when false they are left untouched
+     * @throws InvalidInputException naming the zone (column index) of the first bad input, or a bad range;
+     *                               zones before it have been written
+     */
+    default void solveColumns(ZoneColumns in, int from, int to, ConvectionColumns out, boolean jacobian) {
+        in.checkRange(from, to, out.capacity);
+        ZoneState zone = out.workZone;
+        ConvectionResult r = out.workResult;
+        for (int k = from; k < to; k++) {
+            in.load(k, zone);
+            if (jacobian) {
+                solve(zone, r);
+            } else {
+                solveValues(zone, r);
+            }
+            out.store(k, r, jacobian);
+        }
+    }
+
+    /**
      * The efficiency parameter of exponentially decaying overshoot beyond a convective
      * boundary: the velocity scale height is f H_P.
      *

@@ -20,6 +20,30 @@ public interface OpacityModel {
     void evaluate(double temperature, double density, double hydrogen, double metals, int zone, OpacityResult out);
 
     /**
+     * Evaluates zones [from, to) at the columns' T, rho, X, Z: zone k gets bit for bit what
+     * {@link #evaluate} gives with zone index k. The default loops over {@link #evaluate} and
+     * allocates nothing; implementations may override it.
+     *
+     * @param in   input columns (temperature, density, hydrogen, metals are read)
+     * @param from first zone, inclusive
+     * @param to   last zone, exclusive
+     * @param out  output columns, overwritten in [from, to)
+     * @throws InvalidInputException naming the zone (column index) of the first bad input, or a bad range
+     */
+    default void evaluateColumns(ZoneColumns in, int from, int to, OpacityColumns out) {
+        in.checkRange(from, to, out.capacity);
+        OpacityResult r = out.workResult;
+        double[] t = in.temperature;
+        double[] rho = in.density;
+        double[] x = in.hydrogen;
+        double[] z = in.metals;
+        for (int k = from; k < to; k++) {
+            evaluate(t[k], rho[k], x[k], z[k], k, r);
+            out.store(k, r);
+        }
+    }
+
+    /**
      * Evaluates at the zone's T, rho, X, Z and writes kappa into {@link ZoneState#opacity}.
      *
      * @param zone    the zone

@@ -1,11 +1,13 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.spi.ConvectionColumns;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
+import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneState;
 
 /**
@@ -100,6 +102,31 @@ public final class LocalMixingLength implements ConvectionModel {
     public void solve(ZoneState zone, ConvectionResult out) {
         MixingLengthZone.solve(zone, settings.alpha(), settings.geometry(), 0.0, settings.centreLimit(),
                 settings.criterion(), settings.semiconvection(), settings.thermohaline(), out);
+    }
+
+    @Override
+    public void solveValues(ZoneState zone, ConvectionResult out) {
+        MixingLengthZone.solve(zone, settings.alpha(), settings.geometry(), 0.0, settings.centreLimit(),
+                settings.criterion(), settings.semiconvection(), settings.thermohaline(), out, false);
+    }
+
+    /** A loop over the static kernel with the output's working space: no allocation, no per-zone dispatch. */
+    @Override
+    public void solveColumns(ZoneColumns in, int from, int to, ConvectionColumns out, boolean jacobian) {
+        in.checkRange(from, to, out.capacity);
+        final ZoneState zone = out.workZone;
+        final ConvectionResult r = out.workResult;
+        final double alpha = settings.alpha();
+        final MixingLengthGeometry geometry = settings.geometry();
+        final CentreLimit limit = settings.centreLimit();
+        final Criterion criterion = settings.criterion();
+        final double semiconvection = settings.semiconvection();
+        final double thermohaline = settings.thermohaline();
+        for (int k = from; k < to; k++) {
+            MixingLengthZone.solve(in.load(k, zone), alpha, geometry, 0.0, limit, criterion, semiconvection,
+                    thermohaline, r, jacobian);
+            out.store(k, r, jacobian);
+        }
     }
 
     @Override

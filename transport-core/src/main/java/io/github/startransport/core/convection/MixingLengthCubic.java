@@ -52,11 +52,16 @@ public final class MixingLengthCubic {
      * @return the efficiency Gamma (dimensionless), 0 when s &lt;= 0
      */
     public static double efficiency(double a0, double s) {
+        return efficiency(a0, s, MAX_STEPS);
+    }
+
+    /** {@link #efficiency(double, double)} with at most {@code maxSteps} Newton steps (for the bound's test). */
+    static double efficiency(double a0, double s, int maxSteps) {
         if (!(s > 0.0)) {
             return 0.0;
         }
         double g = Math.min(s, Math.min(Math.sqrt(s), Math.cbrt(s / a0)));
-        for (int i = 0; i < MAX_STEPS; i++) {
+        for (int i = 0; i < maxSteps; i++) {
             double f = ((a0 * g + 1.0) * g + 1.0) * g - s;
             double step = f / ((3.0 * a0 * g + 2.0) * g + 1.0);
             g -= step;

@@ -87,6 +87,28 @@ public final class MixingLengthZone {
     public static void solve(ZoneState z, double alpha, MixingLengthGeometry geometry, double eddyShape,
                              CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
                              ConvectionResult out) {
+        solve(z, alpha, geometry, eddyShape, limit, criterion, semiconvection, thermohaline, out, true);
+    }
+
+    /**
+     * Solves one zone, with or without the Jacobian of a convective zone. Every value is the same,
+     * bit for bit, either way; without the Jacobian the derivative arrays of a convective zone are
+     * left unspecified (a stable zone's are still filled: they cost next to nothing).
+     *
+     * @param z              the zone (read only)
+     * @param alpha          mixing-length parameter l / H_P (dimensionless), &gt; 0 (validated by the caller)
+     * @param geometry       geometry constants
+     * @param eddyShape      y of the transparency correction (dimensionless), or 0 for none
+     * @param limit          near-centre limit of the mixing length
+     * @param criterion      stability criterion
+     * @param semiconvection alpha_sc of {@link MixingCoefficients#semiconvective} (dimensionless)
+     * @param thermohaline   C_t of {@link MixingCoefficients#thermohaline} (dimensionless)
+     * @param out            the result, overwritten
+     * @param jacobian       whether to compute the derivatives of a convective zone
+     */
+    public static void solve(ZoneState z, double alpha, MixingLengthGeometry geometry, double eddyShape,
+                             CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
+                             ConvectionResult out, boolean jacobian) {
         check(z);
         final double t = z.temperature;
         final double rho = z.density;
@@ -150,6 +172,10 @@ public final class MixingLengthZone {
         out.radiativeFraction = nabla / nablaRad;
         out.efficiency = gamma;
         out.diffusion = diffusion;
+        if (!jacobian) {
+            guard(z, out, false);
+            return;
+        }
 
         final double sensitivity = MixingLengthCubic.sensitivity(a0, gamma);
         final double gamma3 = gamma * gamma * gamma;
@@ -164,21 +190,35 @@ public final class MixingLengthZone {
         final double[] dVelocity = out.dVelocity;
         final double[] dConvective = out.dConvectiveFraction;
         final double[] dDiffusion = out.dDiffusion;
+        // 1 / q_i for the inputs with a non-zero elasticity (validated > 0), 0 for the others;
+        // held in dVelocity until iteration i overwrites entry i
+        dVelocity[ZoneInput.T] = 1.0 / t;
+        dVelocity[ZoneInput.RHO] = 1.0 / rho;
+        dVelocity[ZoneInput.P] = 1.0 / p;
+        dVelocity[ZoneInput.L] = 0.0;
+        dVelocity[ZoneInput.M] = 1.0 / m;
+        dVelocity[ZoneInput.R] = 1.0 / r;
+        dVelocity[ZoneInput.KAPPA] = 1.0 / kappa;
+        dVelocity[ZoneInput.CP] = 1.0 / cp;
+        dVelocity[ZoneInput.NABLA_AD] = 0.0;
+        dVelocity[ZoneInput.DELTA] = 1.0 / delta;
+        dVelocity[ZoneInput.NABLA_MU] = 0.0;
+        dVelocity[ZoneInput.PHI] = 0.0;
+        dVelocity[ZoneInput.ALPHA] = 1.0 / alpha;
+        final double[] lengthTable = capped ? LENGTH_CAPPED : LENGTH_SCALED;
         for (int i = 0; i < ZoneInput.COUNT; i++) {
             final double dNablaRad = dRad[i];
             final double dNablaAd = i == ZoneInput.NABLA_AD ? 1.0 : 0.0;
             final double dW = dNablaRad - dNablaAd;
-            // elasticities d ln X / d ln q_i, then per unit of q_i
-            final double eHp = scaleHeightElasticity(i);
-            final double eGravity = gravityElasticity(i);
-            final double eLength = (i == ZoneInput.ALPHA ? 1.0 : 0.0)
-                    + (capped ? (i == ZoneInput.R ? 1.0 : 0.0) : eHp);
-            final double eLossBase = lossBaseElasticity(i) + 0.5 * (eHp - eGravity) - 2.0 * eLength;
-            final double eOmega = (i == ZoneInput.KAPPA || i == ZoneInput.RHO ? 1.0 : 0.0) + eLength;
+            // elasticities d ln X / d ln q_i (constant tables), then per unit of q_i
+            final double eHp = SCALE_HEIGHT[i];
+            final double eGravity = GRAVITY[i];
+            final double eLength = lengthTable[i];
+            final double eLossBase = LOSS_BASE[i] + 0.5 * (eHp - eGravity) - 2.0 * eLength;
+            final double eOmega = OMEGA_OWN[i] + eLength;
             final double eQ = lossElasticity * eOmega;
-            final double eVelocityScale = 0.5 * (eGravity + (i == ZoneInput.DELTA ? 1.0 : 0.0) - eHp);
-            final double perUnit = eLength == 0.0 && eLossBase == 0.0 && eVelocityScale == 0.0 && eQ == 0.0
-                    ? 0.0 : 1.0 / inputValue(z, alpha, i);
+            final double eVelocityScale = 0.5 * (eGravity + DELTA_OWN[i] - eHp);
+            final double perUnit = dVelocity[i];
             final double dlnLength = eLength * perUnit;
             final double dlnULoss = (eLossBase + eQ) * perUnit;
             final double dA0 = a0 * eQ * perUnit;
@@ -192,6 +232,24 @@ public final class MixingLengthZone {
             dConvective[i] = (dW * shareRad + w * dShareRad - convective * dNablaRad) * invNablaRad;
             dDiffusion[i] = diffusion * (dlnVelocity + dlnLength);
         }
+        guard(z, out, true);
+    }
+
+    /** Refuses a zone whose valid inputs overflow double precision somewhere on the way (see {@link ZoneChecks#finiteOutputs}). */
+    private static void guard(ZoneState z, ConvectionResult out, boolean jacobian) {
+        double probe = (out.nablaRad + out.nabla + out.nablaElement + out.velocity + out.convectiveFraction
+                + out.radiativeFraction + out.efficiency + out.lossParameter + out.scaleHeight + out.mixingLength
+                + out.diffusion) * 0.0;
+        if (jacobian) {
+            double a = 0.0;
+            double b = 0.0;
+            for (int i = 0; i < ZoneInput.COUNT; i++) {
+                a += out.dNabla[i] * 0.0 + out.dVelocity[i] * 0.0;
+                b += out.dConvectiveFraction[i] * 0.0 + out.dDiffusion[i] * 0.0;
+            }
+            probe += a + b;
+        }
+        ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
     }
 
     private static void stable(ZoneState z, Regime regime, double nablaRad, double semiconvection,
@@ -217,41 +275,33 @@ public final class MixingLengthZone {
             out.diffusion = 0.0;
             Arrays.fill(out.dDiffusion, 0.0);
         }
-    }
-
-    private static double inputValue(ZoneState z, double alpha, int i) {
-        return i == ZoneInput.ALPHA ? alpha : z.get(i);
+        guard(z, out, true);
     }
 
     /** d ln H_P / d ln q_i, H_P = P r^2 / (rho G m). */
-    private static double scaleHeightElasticity(int i) {
-        switch (i) {
-            case ZoneInput.P: return 1.0;
-            case ZoneInput.RHO: return -1.0;
-            case ZoneInput.R: return 2.0;
-            case ZoneInput.M: return -1.0;
-            default: return 0.0;
-        }
-    }
-
+    private static final double[] SCALE_HEIGHT = table(ZoneInput.P, 1.0, ZoneInput.RHO, -1.0, ZoneInput.R, 2.0,
+            ZoneInput.M, -1.0);
     /** d ln g / d ln q_i, g = G m / r^2. */
-    private static double gravityElasticity(int i) {
-        switch (i) {
-            case ZoneInput.M: return 1.0;
-            case ZoneInput.R: return -2.0;
-            default: return 0.0;
-        }
-    }
-
+    private static final double[] GRAVITY = table(ZoneInput.M, 1.0, ZoneInput.R, -2.0);
     /** d ln U / d ln q_i from the factor T^3 / (c_P kappa rho^2 sqrt(delta)) of U. */
-    private static double lossBaseElasticity(int i) {
-        switch (i) {
-            case ZoneInput.T: return 3.0;
-            case ZoneInput.CP: return -1.0;
-            case ZoneInput.KAPPA: return -1.0;
-            case ZoneInput.RHO: return -2.0;
-            case ZoneInput.DELTA: return -0.5;
-            default: return 0.0;
+    private static final double[] LOSS_BASE = table(ZoneInput.T, 3.0, ZoneInput.CP, -1.0, ZoneInput.KAPPA, -1.0,
+            ZoneInput.RHO, -2.0, ZoneInput.DELTA, -0.5);
+    /** d ln l / d ln q_i for l = alpha H_P. */
+    private static final double[] LENGTH_SCALED = table(ZoneInput.ALPHA, 1.0, ZoneInput.P, 1.0, ZoneInput.RHO, -1.0,
+            ZoneInput.R, 2.0, ZoneInput.M, -1.0);
+    /** d ln l / d ln q_i for l = alpha r. */
+    private static final double[] LENGTH_CAPPED = table(ZoneInput.ALPHA, 1.0, ZoneInput.R, 1.0);
+    /** d ln (kappa rho) / d ln q_i: the part of omega = kappa rho l other than l. */
+    private static final double[] OMEGA_OWN = table(ZoneInput.KAPPA, 1.0, ZoneInput.RHO, 1.0);
+    /** d ln delta / d ln q_i. */
+    private static final double[] DELTA_OWN = table(ZoneInput.DELTA, 1.0);
+
+    /** A table over the inputs: zero except at the (index, value) pairs given. */
+    private static double[] table(double... pairs) {
+        double[] e = new double[ZoneInput.COUNT];
+        for (int k = 0; k < pairs.length; k += 2) {
+            e[(int) pairs[k]] = pairs[k + 1];
         }
+        return e;
     }
 }

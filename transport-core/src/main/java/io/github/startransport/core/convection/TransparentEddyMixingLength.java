@@ -1,6 +1,7 @@
 package io.github.startransport.core.convection;
 
 import io.github.startransport.spi.Checks;
+import io.github.startransport.spi.ConvectionColumns;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
@@ -9,6 +10,7 @@ import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.OptionInfo;
+import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneState;
 
 import java.util.ArrayList;
@@ -124,6 +126,31 @@ public final class TransparentEddyMixingLength implements ConvectionModel {
     public void solve(ZoneState zone, ConvectionResult out) {
         MixingLengthZone.solve(zone, settings.alpha(), settings.geometry(), eddyShape, settings.centreLimit(),
                 settings.criterion(), settings.semiconvection(), settings.thermohaline(), out);
+    }
+
+    @Override
+    public void solveValues(ZoneState zone, ConvectionResult out) {
+        MixingLengthZone.solve(zone, settings.alpha(), settings.geometry(), eddyShape, settings.centreLimit(),
+                settings.criterion(), settings.semiconvection(), settings.thermohaline(), out, false);
+    }
+
+    /** A loop over the static kernel with the output's working space: no allocation, no per-zone dispatch. */
+    @Override
+    public void solveColumns(ZoneColumns in, int from, int to, ConvectionColumns out, boolean jacobian) {
+        in.checkRange(from, to, out.capacity);
+        final ZoneState zone = out.workZone;
+        final ConvectionResult r = out.workResult;
+        final double alpha = settings.alpha();
+        final MixingLengthGeometry geometry = settings.geometry();
+        final CentreLimit limit = settings.centreLimit();
+        final Criterion criterion = settings.criterion();
+        final double semiconvection = settings.semiconvection();
+        final double thermohaline = settings.thermohaline();
+        for (int k = from; k < to; k++) {
+            MixingLengthZone.solve(in.load(k, zone), alpha, geometry, eddyShape, limit, criterion, semiconvection,
+                    thermohaline, r, jacobian);
+            out.store(k, r, jacobian);
+        }
     }
 
     @Override

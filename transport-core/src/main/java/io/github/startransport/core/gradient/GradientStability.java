@@ -5,8 +5,10 @@ import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.OptionInfo;
+import io.github.startransport.spi.StabilityColumns;
 import io.github.startransport.spi.StabilityModel;
 import io.github.startransport.spi.StabilityResult;
+import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneState;
 
 import java.util.List;
@@ -55,6 +57,11 @@ public final class GradientStability implements StabilityModel {
         double nablaRad = RadiativeGradient.valueAndDerivatives(z.opacity, z.luminosity, z.pressure, z.mass,
                 z.temperature, out.dNablaRad);
         double nablaL = LedouxGradient.valueAndDerivatives(z.nablaAd, z.phi, z.delta, z.nablaMu, out.dNablaLedoux);
+        double probe = nablaRad * 0.0 + nablaL * 0.0;
+        for (int i = 0; i < out.dNablaRad.length; i++) {
+            probe += out.dNablaRad[i] * 0.0 + out.dNablaLedoux[i] * 0.0;
+        }
+        ZoneChecks.finiteOutputs("nabla_rad", nablaRad, probe, z);
         out.nablaRad = nablaRad;
         out.nablaAd = z.nablaAd;
         out.nablaLedoux = nablaL;
@@ -62,6 +69,18 @@ public final class GradientStability implements StabilityModel {
         out.marginLedoux = nablaRad - nablaL;
         out.criterion = criterion;
         out.regime = StabilityClassifier.classify(criterion, nablaRad, z.nablaAd, nablaL, z.nablaMu);
+    }
+
+    /** A loop over the static kernels with the output's working space: no allocation, no per-zone dispatch. */
+    @Override
+    public void evaluateColumns(ZoneColumns in, int from, int to, StabilityColumns out) {
+        in.checkRange(from, to, out.capacity);
+        final ZoneState zone = out.workZone;
+        final StabilityResult r = out.workResult;
+        for (int k = from; k < to; k++) {
+            evaluate(in.load(k, zone), r);
+            out.store(k, r);
+        }
     }
 
     @Override

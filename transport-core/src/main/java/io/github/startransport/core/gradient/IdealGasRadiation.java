@@ -56,6 +56,12 @@ public final class IdealGasRadiation implements ThermodynamicsModel {
         out.delta = GasRadiation.delta(beta);
         out.phi = 1.0;
         out.gamma1 = GasRadiation.gamma1(beta);
+        double probe = (out.pressure + out.nablaAd + out.cp + out.delta + out.gamma1) * 0.0;
+        if (!(beta > 0.0) || probe != 0.0) {
+            throw new io.github.startransport.spi.InvalidInputException("density", density, "g cm^-3", zone,
+                    "large enough at T = " + temperature + " K that gas pressure is resolved in double precision "
+                            + "(beta = P_gas / P = " + beta + ", c_P = " + out.cp + ", P = " + p + ")");
+        }
     }
 
     @Override

@@ -42,4 +42,23 @@ public final class ZoneChecks {
         Checks.closedInterval("hydrogen", hydrogen, 0.0, 1.0, "1", zone);
         Checks.closedInterval("metals", metals, 0.0, 1.0 - hydrogen, "1", zone);
     }
+
+    /**
+     * Refuses a zone whose inputs are each valid but together overflow double precision: the
+     * caller passes the sum of its outputs each multiplied by 0, which is NaN exactly when one of
+     * them is not finite.
+     *
+     * @param output name of the output checked (for the message)
+     * @param value  its value (for the message)
+     * @param probe  sum over the outputs of (output * 0)
+     * @param z      the zone
+     * @throws io.github.startransport.spi.InvalidInputException when the probe is not 0
+     */
+    public static void finiteOutputs(String output, double value, double probe, ZoneState z) {
+        if (probe != 0.0) {
+            throw new io.github.startransport.spi.InvalidInputException(output, value, "1", z.zone,
+                    "finite with all its derivatives, but the zone's inputs overflow double precision ("
+                            + z + ")");
+        }
+    }
 }

@@ -6,10 +6,12 @@ import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
+import io.github.startransport.spi.OpacityColumns;
 import io.github.startransport.spi.OpacityModel;
 import io.github.startransport.spi.OpacityResult;
 import io.github.startransport.spi.OpacityStatus;
 import io.github.startransport.spi.OptionInfo;
+import io.github.startransport.spi.ZoneColumns;
 
 import java.util.List;
 
@@ -99,6 +101,21 @@ public final class AnalyticOpacity implements OpacityModel {
         return new AnalyticOpacity(bf, ff);
     }
 
+    /** A loop over this model's own lookup with the output's working space: no allocation, no per-zone dispatch. */
+    @Override
+    public void evaluateColumns(ZoneColumns in, int from, int to, OpacityColumns out) {
+        in.checkRange(from, to, out.capacity);
+        final OpacityResult r = out.workResult;
+        final double[] t = in.temperature;
+        final double[] rho = in.density;
+        final double[] x = in.hydrogen;
+        final double[] z = in.metals;
+        for (int k = from; k < to; k++) {
+            evaluate(t[k], rho[k], x[k], z[k], k, r);
+            out.store(k, r);
+        }
+    }
+
     @Override
     public void evaluate(double temperature, double density, double hydrogen, double metals, int zone,
                          OpacityResult out) {
@@ -135,14 +152,17 @@ public final class AnalyticOpacity implements OpacityModel {
         double wRad = 1.0 / (1.0 + rad / cd);
         double wCd = 1.0 / (1.0 + cd / rad);
         double kappa = rad * wRad;
-        if (!(kappa > 0.0) || kappa == Double.POSITIVE_INFINITY) {
+        double dRho = wRad * radRho + wCd * Conduction.D_LN_RHO;
+        double dT = wRad * radT + wCd * Conduction.D_LN_T;
+        if (!(kappa > 0.0) || kappa == Double.POSITIVE_INFINITY || !Double.isFinite(dRho) || !Double.isFinite(dT)) {
             throw new InvalidInputException("temperature", temperature, "K", zone,
-                    "such that the analytic opacity is finite and > 0 (got " + kappa + " cm^2 g^-1 at rho = "
-                            + density + " g cm^-3)");
+                    "such that the analytic opacity is finite and > 0 with finite slopes (got " + kappa
+                            + " cm^2 g^-1, d ln kappa / d ln rho = " + dRho + ", d ln kappa / d ln T = " + dT
+                            + " at rho = " + density + " g cm^-3)");
         }
         out.kappa = kappa;
-        out.dLnKappaDLnRho = wRad * radRho + wCd * Conduction.D_LN_RHO;
-        out.dLnKappaDLnT = wRad * radT + wCd * Conduction.D_LN_T;
+        out.dLnKappaDLnRho = dRho;
+        out.dLnKappaDLnT = dT;
         out.status = OpacityStatus.INSIDE;
     }
 

@@ -304,7 +304,7 @@ public final class OpacityTableSet {
             double dRowB1 = c8 * db0 + c10 * dg0 + c12 * db1 + c14 * dg1;
             double dRowE1 = c9 * db0 + c11 * dg0 + c13 * db1 + c15 * dg1;
             double fy = a0 * dRowB0 + e0 * dRowE0 + a1 * dRowB1 + e1 * dRowE1;
-            finish(f, clampX ? 0.0 : fx, clampY ? 0.0 : fy, outside, policy, out);
+            finish(f, clampX ? 0.0 : fx, clampY ? 0.0 : fy, outside, policy, temperature, density, zone, out);
             return;
         }
 
@@ -338,12 +338,20 @@ public final class OpacityTableSet {
                 fy += w * out.dLnKappaDLnRho;
             }
         }
-        finish(f, fx, fy, outside, policy, out);
+        finish(f, fx, fy, outside, policy, temperature, density, zone, out);
     }
 
-    private static void finish(double f, double fx, double fy, boolean outside, OutOfRangePolicy policy,
-                               OpacityResult out) {
-        out.kappa = Math.exp(f * LN_10);
+    private void finish(double f, double fx, double fy, boolean outside, OutOfRangePolicy policy,
+                        double temperature, double density, int zone, OpacityResult out) {
+        double kappa = Math.exp(f * LN_10);
+        if (!(kappa > 0.0 && kappa < Double.POSITIVE_INFINITY && Double.isFinite(fx) && Double.isFinite(fy))) {
+            // only an extrapolation far outside the tables gets here
+            throw new InvalidInputException("temperature", temperature, "K", zone,
+                    "close enough to the tables of " + source + " that the extrapolated opacity is finite and > 0 "
+                            + "(got log10 kappa = " + f + " at rho = " + density + " g cm^-3; outOfRange="
+                            + policy.name().toLowerCase(java.util.Locale.ROOT) + ")");
+        }
+        out.kappa = kappa;
         out.dLnKappaDLnRho = fy;
         out.dLnKappaDLnT = fx - 3.0 * fy;
         out.status = !outside ? OpacityStatus.INSIDE

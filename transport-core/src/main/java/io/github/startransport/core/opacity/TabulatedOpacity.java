@@ -3,9 +3,11 @@ package io.github.startransport.core.opacity;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
+import io.github.startransport.spi.OpacityColumns;
 import io.github.startransport.spi.OpacityModel;
 import io.github.startransport.spi.OpacityResult;
 import io.github.startransport.spi.OptionInfo;
+import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.OutOfRangePolicy;
 
 import java.nio.file.Path;
@@ -54,6 +56,21 @@ public final class TabulatedOpacity implements OpacityModel {
         String file = options.getString(NAME, "file", "");
         OpacityTableSet set = file.isBlank() ? DemoTable.set() : OpacityTableReader.read(Path.of(file));
         return new TabulatedOpacity(set, policy);
+    }
+
+    /** A loop over this model's own lookup with the output's working space: no allocation, no per-zone dispatch. */
+    @Override
+    public void evaluateColumns(ZoneColumns in, int from, int to, OpacityColumns out) {
+        in.checkRange(from, to, out.capacity);
+        final OpacityResult r = out.workResult;
+        final double[] t = in.temperature;
+        final double[] rho = in.density;
+        final double[] x = in.hydrogen;
+        final double[] z = in.metals;
+        for (int k = from; k < to; k++) {
+            set.evaluate(t[k], rho[k], x[k], z[k], policy, k, r);
+            out.store(k, r);
+        }
     }
 
     @Override

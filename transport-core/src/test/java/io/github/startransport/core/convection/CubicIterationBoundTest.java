@@ -1,0 +1,59 @@
+package io.github.startransport.core.convection;
+
+import org.junit.jupiter.api.Test;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The Newton iteration of the mixing-length cubic is bounded: over a dense log grid of a0 and S far
+ * beyond any physical zone (a0 from 1e-100 to 1e3, S from 1e-300 to 1e100, where a0 Gamma^3 stays inside double range),
+ * the root after {@link #BOUND} steps is already the root after {@link MixingLengthCubic#MAX_STEPS},
+ * and that root satisfies the cubic to rounding. The start is an upper bound within a factor 3 of the
+ * root (see the class comment), so Newton on the convex cubic needs few steps (common practice, no source).
+ */
+class CubicIterationBoundTest {
+    static final int BOUND = 10;
+
+    @Test
+    void newtonConvergesWithinTheBoundOnTheWorstInputs() {
+        int worst = 0;
+        double worstA0 = 0;
+        double worstS = 0;
+        for (double la0 = -100; la0 <= 3; la0 += 0.137) {
+            for (double ls = -300; ls <= 100; ls += 0.213) {
+                double a0 = Math.pow(10, la0);
+                double s = Math.pow(10, ls);
+                double root = MixingLengthCubic.efficiency(a0, s, MixingLengthCubic.MAX_STEPS);
+                int steps = 0;
+                while (Double.doubleToRawLongBits(MixingLengthCubic.efficiency(a0, s, steps))
+                        != Double.doubleToRawLongBits(root)) {
+                    steps++;
+                }
+                if (steps > worst) {
+                    worst = steps;
+                    worstA0 = a0;
+                    worstS = s;
+                }
+                assertTrue(root > 0.0 && Double.isFinite(root), "a0 = " + a0 + ", S = " + s);
+                // residual relative to the largest term: rounding only
+                double scale = Math.max(s, 1.0 * root);
+                assertTrue(Math.abs(MixingLengthCubic.residual(a0, s, root)) <= 1e-12 * scale,
+                        "a0 = " + a0 + ", S = " + s + ", Gamma = " + root);
+            }
+        }
+        System.out.printf("mixing-length cubic: worst case %d Newton steps (a0 = %.3g, S = %.3g), bound %d%n",
+                worst, worstA0, worstS, BOUND);
+        assertTrue(worst <= BOUND, "worst " + worst + " steps at a0 = " + worstA0 + ", S = " + worstS);
+    }
+
+    @Test
+    void specialValuesStopAtOnce() {
+        assertEquals(0.0, MixingLengthCubic.efficiency(2.25, 0.0));
+        assertEquals(0.0, MixingLengthCubic.efficiency(2.25, -1.0));
+        assertEquals(0.0, MixingLengthCubic.efficiency(2.25, Double.NaN));
+        // infinite S: no finite root; the loop still ends (at most MAX_STEPS steps)
+        double g = MixingLengthCubic.efficiency(2.25, Double.POSITIVE_INFINITY);
+        assertTrue(!(g > 0.0 && Double.isFinite(g)) || g > 1e100);
+    }
+}
