@@ -15,7 +15,11 @@ import io.github.startransport.spi.Regime;
  *       where nabla_mu &lt; 0 and radiative elsewhere. A zone the Ledoux test would call
  *       semiconvective is convective here by definition.</li>
  * </ul>
- * Equality counts as stable (a zone exactly at the margin carries its flux by radiation).
+ * Equality counts as stable (a zone exactly at the margin carries its flux by radiation). The two
+ * slow-mixing regimes are strict: semiconvective needs nabla_ad &lt; nabla_rad &lt; nabla_L and
+ * thermohaline nabla_rad &lt; nabla_ad, because their mixing coefficients diverge at those
+ * margins (Langer, Sugimoto &amp; Fricke 1983; Kippenhahn, Ruschenplatt &amp; Thomas 1980); a zone
+ * exactly on such a margin is radiative.
  */
 public final class StabilityClassifier {
     private StabilityClassifier() {
@@ -32,18 +36,19 @@ public final class StabilityClassifier {
     public static Regime classify(Criterion criterion, double nablaRad, double nablaAd, double nablaLedoux,
                                   double nablaMu) {
         boolean schwarzschildUnstable = nablaRad > nablaAd;
+        boolean fingers = nablaMu < 0.0 && nablaRad < nablaAd;
         if (criterion == Criterion.SCHWARZSCHILD) {
             if (schwarzschildUnstable) {
                 return Regime.CONVECTIVE;
             }
-            return nablaMu < 0.0 ? Regime.THERMOHALINE : Regime.RADIATIVE;
+            return fingers ? Regime.THERMOHALINE : Regime.RADIATIVE;
         }
         if (nablaRad > nablaLedoux) {
             return Regime.CONVECTIVE;
         }
-        if (schwarzschildUnstable) {
+        if (schwarzschildUnstable && nablaRad < nablaLedoux) {
             return Regime.SEMICONVECTIVE;
         }
-        return nablaMu < 0.0 ? Regime.THERMOHALINE : Regime.RADIATIVE;
+        return fingers ? Regime.THERMOHALINE : Regime.RADIATIVE;
     }
 }

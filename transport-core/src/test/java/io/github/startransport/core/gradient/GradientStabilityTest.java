@@ -87,6 +87,17 @@ class GradientStabilityTest {
     }
 
     @Test
+    void zonesExactlyOnASlowMixingMarginAreRadiative() {
+        // the semiconvective and thermohaline coefficients diverge at nabla_rad = nabla_L and
+        // nabla_rad = nabla_ad (Langer, Sugimoto & Fricke 1983; Kippenhahn, Ruschenplatt & Thomas 1980)
+        assertEquals(Regime.RADIATIVE, StabilityClassifier.classify(Criterion.LEDOUX, 0.7, 0.4, 0.7, 0.3));
+        assertEquals(Regime.RADIATIVE, StabilityClassifier.classify(Criterion.SCHWARZSCHILD, 0.4, 0.4, 0.35, -0.05));
+        assertEquals(Regime.SEMICONVECTIVE, StabilityClassifier.classify(Criterion.LEDOUX, Math.nextDown(0.7), 0.4, 0.7, 0.3));
+        assertEquals(Regime.THERMOHALINE,
+                StabilityClassifier.classify(Criterion.SCHWARZSCHILD, Math.nextDown(0.4), 0.4, 0.35, -0.05));
+    }
+
+    @Test
     void negativeLuminosityIsRadiative() {
         // energy flowing inward (e.g. a neutrino-cooled core): nabla_rad < 0 < nabla_ad
         ZoneState z = zone(-0.3, 0.4, 0.0);
