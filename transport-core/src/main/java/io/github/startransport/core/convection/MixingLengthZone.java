@@ -270,6 +270,10 @@ public final class MixingLengthZone {
         // d ln l / d ln q for H_P's inputs (0 when l = alpha r), and d ln q' of q = omega's share
         final double lengthHp = capped ? 0.0 : 1.0;
         final double le = lossElasticity;
+        final double[][] cNabla = columns == null ? null : columns.dNabla;
+        final double[][] cVelocity = columns == null ? null : columns.dVelocity;
+        final double[][] cConvective = columns == null ? null : columns.dConvectiveFraction;
+        final double[][] cDiffusion = columns == null ? null : columns.dDiffusion;
         double probe = 0.0;
 
         // T: nabla_rad ~ T^-4, U ~ T^3
@@ -277,10 +281,10 @@ public final class MixingLengthZone {
             double dR = -4.0 * nablaRad * invT;
             double mu = 3.0 * invT;
             double lnV = vR * dR + vMu * mu;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.T, k, nR * dR + nMu * mu)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.T, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.T, k, cR * dR + cMu * mu)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.T, k, diffusion * lnV);
+            probe += put(out.dNabla, cNabla, ZoneInput.T, k, nR * dR + nMu * mu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.T, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.T, k, cR * dR + cMu * mu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.T, k, diffusion * lnV);
         }
         // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
         {
@@ -289,10 +293,10 @@ public final class MixingLengthZone {
             double mu = -2.5 * invRho - 2.0 * lambda + nu;
             double sigma = 0.5 * invRho;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.RHO, k, nMu * mu + nNu * nu)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.RHO, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.RHO, k, cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.RHO, k, diffusion * (lnV + lambda));
+            probe += put(out.dNabla, cNabla, ZoneInput.RHO, k, nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.RHO, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.RHO, k, cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.RHO, k, diffusion * (lnV + lambda));
         }
         // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
         {
@@ -302,19 +306,19 @@ public final class MixingLengthZone {
             double mu = 0.5 * invP - 2.0 * lambda + nu;
             double sigma = -0.5 * invP;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.P, k, nR * dR + nMu * mu + nNu * nu)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.P, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.P, k, cR * dR + cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.P, k, diffusion * (lnV + lambda));
+            probe += put(out.dNabla, cNabla, ZoneInput.P, k, nR * dR + nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.P, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.P, k, cR * dR + cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.P, k, diffusion * (lnV + lambda));
         }
         // L: nabla_rad only
         {
             double dR = perL;
             double lnV = vR * dR;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.L, k, nR * dR)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.L, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.L, k, cR * dR)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.L, k, diffusion * lnV);
+            probe += put(out.dNabla, cNabla, ZoneInput.L, k, nR * dR)
+                    + put(out.dVelocity, cVelocity, ZoneInput.L, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.L, k, cR * dR)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.L, k, diffusion * lnV);
         }
         // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
         {
@@ -324,10 +328,10 @@ public final class MixingLengthZone {
             double mu = -invM - 2.0 * lambda + nu;
             double sigma = invM;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.M, k, nR * dR + nMu * mu + nNu * nu)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.M, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.M, k, cR * dR + cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.M, k, diffusion * (lnV + lambda));
+            probe += put(out.dNabla, cNabla, ZoneInput.M, k, nR * dR + nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.M, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.M, k, cR * dR + cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.M, k, diffusion * (lnV + lambda));
         }
         // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
         {
@@ -336,10 +340,10 @@ public final class MixingLengthZone {
             double mu = 2.0 * invR - 2.0 * lambda + nu;
             double sigma = -2.0 * invR;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.R, k, nMu * mu + nNu * nu)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.R, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.R, k, cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.R, k, diffusion * (lnV + lambda));
+            probe += put(out.dNabla, cNabla, ZoneInput.R, k, nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.R, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.R, k, cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.R, k, diffusion * (lnV + lambda));
         }
         // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
         {
@@ -347,43 +351,43 @@ public final class MixingLengthZone {
             double nu = le * invKappa;
             double mu = -invKappa + nu;
             double lnV = vR * dR + vMu * mu + vNu * nu;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.KAPPA, k, nR * dR + nMu * mu + nNu * nu)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.KAPPA, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.KAPPA, k, cR * dR + cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.KAPPA, k, diffusion * lnV);
+            probe += put(out.dNabla, cNabla, ZoneInput.KAPPA, k, nR * dR + nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.KAPPA, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.KAPPA, k, cR * dR + cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.KAPPA, k, diffusion * lnV);
         }
         // c_P: U ~ 1/c_P
         {
             double mu = -invCp;
             double lnV = vMu * mu;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.CP, k, nMu * mu)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.CP, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.CP, k, cMu * mu)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.CP, k, diffusion * lnV);
+            probe += put(out.dNabla, cNabla, ZoneInput.CP, k, nMu * mu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.CP, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.CP, k, cMu * mu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.CP, k, diffusion * lnV);
         }
         // nabla_ad: dA = 1
         {
             double lnV = -vR;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.NABLA_AD, k, nA)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.NABLA_AD, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.NABLA_AD, k, cA)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.NABLA_AD, k, diffusion * lnV);
+            probe += put(out.dNabla, cNabla, ZoneInput.NABLA_AD, k, nA)
+                    + put(out.dVelocity, cVelocity, ZoneInput.NABLA_AD, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.NABLA_AD, k, cA)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.NABLA_AD, k, diffusion * lnV);
         }
         // delta: U ~ delta^-1/2, sigma = +1/2
         {
             double mu = -0.5 * invDelta;
             double lnV = vMu * mu + 0.5 * invDelta;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.DELTA, k, nMu * mu)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.DELTA, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.DELTA, k, cMu * mu)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.DELTA, k, diffusion * lnV);
+            probe += put(out.dNabla, cNabla, ZoneInput.DELTA, k, nMu * mu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.DELTA, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.DELTA, k, cMu * mu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.DELTA, k, diffusion * lnV);
         }
         // nabla_mu and phi do not enter a convective zone
         for (int i = ZoneInput.NABLA_MU; i <= ZoneInput.PHI; i++) {
-            put(out.dNabla, col(columns, 0), i, k, 0.0);
-            put(out.dVelocity, col(columns, 1), i, k, 0.0);
-            put(out.dConvectiveFraction, col(columns, 2), i, k, 0.0);
-            put(out.dDiffusion, col(columns, 3), i, k, 0.0);
+            put(out.dNabla, cNabla, i, k, 0.0);
+            put(out.dVelocity, cVelocity, i, k, 0.0);
+            put(out.dConvectiveFraction, cConvective, i, k, 0.0);
+            put(out.dDiffusion, cDiffusion, i, k, 0.0);
         }
         // alpha: l ~ alpha, U ~ l^-2, omega ~ l
         {
@@ -391,25 +395,12 @@ public final class MixingLengthZone {
             double nu = le * lambda;
             double mu = -2.0 * lambda + nu;
             double lnV = vMu * mu + vNu * nu + lambda;
-            probe += put(out.dNabla, col(columns, 0), ZoneInput.ALPHA, k, nMu * mu + nNu * nu)
-                    + put(out.dVelocity, col(columns, 1), ZoneInput.ALPHA, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, col(columns, 2), ZoneInput.ALPHA, k, cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, col(columns, 3), ZoneInput.ALPHA, k, diffusion * (lnV + lambda));
+            probe += put(out.dNabla, cNabla, ZoneInput.ALPHA, k, nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.ALPHA, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.ALPHA, k, cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.ALPHA, k, diffusion * (lnV + lambda));
         }
         return probe;
-    }
-
-    /** Column c (0 nabla, 1 v, 2 F_conv/F, 3 D) of the batch output, or null for a per-zone call. */
-    private static double[][] col(ConvectionColumns columns, int c) {
-        if (columns == null) {
-            return null;
-        }
-        switch (c) {
-            case 0: return columns.dNabla;
-            case 1: return columns.dVelocity;
-            case 2: return columns.dConvectiveFraction;
-            default: return columns.dDiffusion;
-        }
     }
 
     /** Writes one Jacobian entry to the per-zone array or to zone k of the column; returns value * 0. */
