@@ -29,11 +29,13 @@ public enum MixingLengthGeometry {
     private final double velocity;
     private final double flux;
     private final double loss;
+    private final double coefficient;
 
     MixingLengthGeometry(double velocity, double flux, double loss) {
         this.velocity = velocity;
         this.flux = flux;
         this.loss = loss;
+        this.coefficient = 3.0 * flux * loss / 16.0;
     }
 
     /** @return a, the factor of the velocity relation (dimensionless) */
@@ -54,6 +56,14 @@ public enum MixingLengthGeometry {
     /** @return k = 32 / (3 b c), the coefficient of the cubic (8/9 for the Böhm-Vitense set) */
     public double cubicFactor() {
         return 32.0 / (3.0 * flux * loss);
+    }
+
+    /**
+     * @return 2 / k = 3 b c / 16, the coefficient a0 of the cubic of {@link MixingLengthCubic} without a
+     *         transparency correction (9/4 for the Böhm-Vitense set)
+     */
+    public double cubicCoefficient() {
+        return coefficient;
     }
 
     /** @return the option value, e.g. {@code "bohm-vitense-1958"} */

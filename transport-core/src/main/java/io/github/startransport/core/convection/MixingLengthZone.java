@@ -6,6 +6,7 @@ import io.github.startransport.core.gradient.RadiativeGradient;
 import io.github.startransport.core.gradient.StabilityClassifier;
 import io.github.startransport.core.gradient.ZoneChecks;
 import io.github.startransport.spi.Checks;
+import io.github.startransport.spi.ConvectionColumns;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.Regime;
@@ -109,6 +110,24 @@ public final class MixingLengthZone {
     public static void solve(ZoneState z, double alpha, MixingLengthGeometry geometry, double eddyShape,
                              CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
                              ConvectionResult out, boolean jacobian) {
+        solve(z, alpha, geometry, eddyShape, limit, criterion, semiconvection, thermohaline, out, jacobian, null, 0);
+    }
+
+    /**
+     * {@link #solve(ZoneState, double, MixingLengthGeometry, double, CentreLimit, Criterion, double, double,
+     * ConvectionResult, boolean)} for a batch call: the Jacobian of a convective zone goes straight into zone
+     * k of {@code columns} (by the same arithmetic, so bit for bit the per-zone values); everything else
+     * goes into {@code out} as in the per-zone call.
+     *
+     * @param columns the batch output whose derivative columns receive a convective zone's Jacobian, or
+     *                null to write it into {@code out}
+     * @param k       the zone's column index
+     * @return true when the Jacobian went into {@code columns} (a convective zone with {@code jacobian});
+     *         false when {@code out} holds the whole result
+     */
+    static boolean solve(ZoneState z, double alpha, MixingLengthGeometry geometry, double eddyShape,
+                         CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
+                         ConvectionResult out, boolean jacobian, ConvectionColumns columns, int k) {
         check(z);
         final double t = z.temperature;
         final double rho = z.density;
@@ -122,9 +141,9 @@ public final class MixingLengthZone {
         final double nablaMu = z.nablaMu;
         final double phi = z.phi;
 
-        // nabla_rad and its derivatives; dNabla holds them until the end
-        final double[] dRad = out.dNabla;
-        final double nablaRad = RadiativeGradient.valueAndDerivatives(kappa, z.luminosity, p, m, t, dRad);
+        // nabla_rad per unit L, then nabla_rad: the same arithmetic as RadiativeGradient.valueAndDerivatives
+        final double perL = RadiativeGradient.value(kappa, 1.0, p, m, t);
+        final double nablaRad = perL * z.luminosity;
         final double gravity = G * m / (r * r);
         final double scaleHeight = p / (rho * gravity);
         final boolean capped = limit == CentreLimit.RADIUS && r < scaleHeight;
@@ -147,109 +166,275 @@ public final class MixingLengthZone {
         final double yw2 = eddyShape * omega * omega;
         final double q = transparent ? yw2 / (1.0 + yw2) : 1.0;
         final double uLoss = q * u;
-        final double a0 = 2.0 * q / geometry.cubicFactor();
+        final double a0 = q * geometry.cubicCoefficient();
         final double s = w / (4.0 * uLoss * uLoss);
         final double gamma = regime == Regime.CONVECTIVE ? MixingLengthCubic.efficiency(a0, s) : 0.0;
         if (!(gamma > 0.0)) {
+            RadiativeGradient.valueAndDerivatives(kappa, z.luminosity, p, m, t, out.dNabla);
             stable(z, regime, nablaRad, semiconvection, thermohaline, out);
-            return;
+            return false;
         }
 
         final double den = MixingLengthCubic.denominator(a0, gamma);
-        final double shareRad = a0 * gamma * gamma / den;    // (nabla_rad - nabla) / W
-        final double shareSuper = (gamma + 1.0) / den;        // (nabla - nabla_ad) / W
+        final double invDen = 1.0 / den;
+        final double invNablaRad = 1.0 / nablaRad;
+        final double shareRad = a0 * gamma * gamma * invDen;    // (nabla_rad - nabla) / W
+        final double shareSuper = (gamma + 1.0) * invDen;        // (nabla - nabla_ad) / W
         final double nabla = nablaAd + w * shareSuper;
         final double velocityScale = Math.sqrt(a * gravity * delta / scaleHeight);
         final double x = 2.0 * uLoss * gamma;
         final double velocity = length * velocityScale * x;
-        final double convective = w * shareRad / nablaRad;
+        final double convective = w * shareRad * invNablaRad;
         final double diffusion = MixingCoefficients.convective(velocity, length);
 
         out.nabla = nabla;
-        out.nablaElement = nablaAd + w / den;
+        out.nablaElement = nablaAd + w * invDen;
         out.velocity = velocity;
         out.convectiveFraction = convective;
-        out.radiativeFraction = nabla / nablaRad;
+        out.radiativeFraction = nabla * invNablaRad;
         out.efficiency = gamma;
         out.diffusion = diffusion;
-        if (!jacobian) {
-            guard(z, out, false);
-            return;
+        double probe = 0.0;
+        if (jacobian) {
+            probe = convectiveJacobian(t, rho, p, m, r, kappa, cp, delta, alpha, capped,
+                    transparent ? 2.0 / (1.0 + yw2) : 0.0, nablaRad, invNablaRad, perL, w, a0, s, uLoss, gamma,
+                    invDen, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
         }
-
-        final double sensitivity = MixingLengthCubic.sensitivity(a0, gamma);
-        final double gamma3 = gamma * gamma * gamma;
-        final double den2 = den * den;
-        final double lossElasticity = transparent ? 2.0 / (1.0 + yw2) : 0.0; // d ln q / d ln omega
-        // reciprocals once, so that the loop below multiplies only
-        final double invGamma = 1.0 / gamma;
-        final double invDen2 = 1.0 / den2;
-        final double invNablaRad = 1.0 / nablaRad;
-        final double invFourULoss2 = 1.0 / (4.0 * uLoss * uLoss);
-        final double[] dNabla = out.dNabla;
-        final double[] dVelocity = out.dVelocity;
-        final double[] dConvective = out.dConvectiveFraction;
-        final double[] dDiffusion = out.dDiffusion;
-        // 1 / q_i for the inputs with a non-zero elasticity (validated > 0), 0 for the others;
-        // held in dVelocity until iteration i overwrites entry i
-        dVelocity[ZoneInput.T] = 1.0 / t;
-        dVelocity[ZoneInput.RHO] = 1.0 / rho;
-        dVelocity[ZoneInput.P] = 1.0 / p;
-        dVelocity[ZoneInput.L] = 0.0;
-        dVelocity[ZoneInput.M] = 1.0 / m;
-        dVelocity[ZoneInput.R] = 1.0 / r;
-        dVelocity[ZoneInput.KAPPA] = 1.0 / kappa;
-        dVelocity[ZoneInput.CP] = 1.0 / cp;
-        dVelocity[ZoneInput.NABLA_AD] = 0.0;
-        dVelocity[ZoneInput.DELTA] = 1.0 / delta;
-        dVelocity[ZoneInput.NABLA_MU] = 0.0;
-        dVelocity[ZoneInput.PHI] = 0.0;
-        dVelocity[ZoneInput.ALPHA] = 1.0 / alpha;
-        final double[] lengthTable = capped ? LENGTH_CAPPED : LENGTH_SCALED;
-        for (int i = 0; i < ZoneInput.COUNT; i++) {
-            final double dNablaRad = dRad[i];
-            final double dNablaAd = i == ZoneInput.NABLA_AD ? 1.0 : 0.0;
-            final double dW = dNablaRad - dNablaAd;
-            // elasticities d ln X / d ln q_i (constant tables), then per unit of q_i
-            final double eHp = SCALE_HEIGHT[i];
-            final double eGravity = GRAVITY[i];
-            final double eLength = lengthTable[i];
-            final double eLossBase = LOSS_BASE[i] + 0.5 * (eHp - eGravity) - 2.0 * eLength;
-            final double eOmega = OMEGA_OWN[i] + eLength;
-            final double eQ = lossElasticity * eOmega;
-            final double eVelocityScale = 0.5 * (eGravity + DELTA_OWN[i] - eHp);
-            final double perUnit = dVelocity[i];
-            final double dlnLength = eLength * perUnit;
-            final double dlnULoss = (eLossBase + eQ) * perUnit;
-            final double dA0 = a0 * eQ * perUnit;
-            final double dS = dW * invFourULoss2 - 2.0 * s * dlnULoss;
-            final double dGamma = (dS - gamma3 * dA0) * sensitivity;
-            final double dShareRad = (dA0 * gamma * gamma * (gamma + 1.0)
-                    + a0 * gamma * (gamma + 2.0) * dGamma) * invDen2;
-            dNabla[i] = shareSuper * dNablaRad + shareRad * dNablaAd - w * dShareRad;
-            final double dlnVelocity = dlnLength + eVelocityScale * perUnit + dlnULoss + dGamma * invGamma;
-            dVelocity[i] = velocity * dlnVelocity;
-            dConvective[i] = (dW * shareRad + w * dShareRad - convective * dNablaRad) * invNablaRad;
-            dDiffusion[i] = diffusion * (dlnVelocity + dlnLength);
-        }
-        guard(z, out, true);
+        guard(z, out, probe);
+        return jacobian && columns != null;
     }
 
-    /** Refuses a zone whose valid inputs overflow double precision somewhere on the way (see {@link ZoneChecks#finiteOutputs}). */
-    private static void guard(ZoneState z, ConvectionResult out, boolean jacobian) {
-        double probe = (out.nablaRad + out.nabla + out.nablaElement + out.velocity + out.convectiveFraction
+    /**
+     * The Jacobian of a convective zone, written as a few coefficients per output times the
+     * derivatives of the "base" quantities each input moves: nabla_rad (R), nabla_ad (A),
+     * ln U' (mu), ln a0 (nu), ln l (lambda) and ln sqrt(a g delta / H_P) (sigma). From the chain
+     * rule through the cubic (see the class comment):
+     * <pre>
+     *   dS     = (dR - dA) / (4 U'^2) - 2 S mu,   d a0 = a0 nu,   dGamma = (dS - Gamma^3 d a0) / (3 a0 Gamma^2 + 2 Gamma + 1)
+     *   d(a0 Gamma^2 / D) = (d a0 Gamma^2 (Gamma + 1) + a0 Gamma (Gamma + 2) dGamma) / D^2
+     *   d nabla = (Gamma + 1)/D dR + a0 Gamma^2/D dA - W d(a0 Gamma^2 / D)
+     *   d ln v  = lambda + sigma + mu + dGamma / Gamma,   d ln D_conv = d ln v + lambda
+     *   d(F_conv/F) = (dW a0 Gamma^2/D + W d(a0 Gamma^2 / D) - (F_conv/F) dR) / nabla_rad
+     * </pre>
+     * Each input moves only some of these (H_P = P r^2 / (G m rho), g = G m / r^2,
+     * U proportional to T^3 sqrt(H_P / (g delta)) / (c_P kappa rho^2 l^2), omega = kappa rho l,
+     * ln q = ln (y omega^2 / (1 + y omega^2))), so each entry is written with its nonzero terms
+     * only. The values go to {@code out}'s arrays, or to zone k of {@code columns} when that is
+     * not null, by the same arithmetic (bit-identical either way).
+     */
+    private static double convectiveJacobian(double t, double rho, double p, double m, double r, double kappa,
+                                           double cp, double delta, double alpha, boolean capped,
+                                           double lossElasticity, double nablaRad, double invNablaRad, double perL,
+                                           double w, double a0, double s, double uLoss, double gamma, double invDen,
+                                           double shareRad, double shareSuper, double velocity, double convective,
+                                           double diffusion, ConvectionResult out, ConvectionColumns columns,
+                                           int k) {
+        final double invT = 1.0 / t;
+        final double invRho = 1.0 / rho;
+        final double invP = 1.0 / p;
+        final double invM = 1.0 / m;
+        final double invR = 1.0 / r;
+        final double invKappa = 1.0 / kappa;
+        final double invCp = 1.0 / cp;
+        final double invDelta = 1.0 / delta;
+        final double invAlpha = 1.0 / alpha;
+        final double invGamma = 1.0 / gamma;
+        final double sensitivity = MixingLengthCubic.sensitivity(a0, gamma);
+        final double invFourULoss2 = 1.0 / (4.0 * uLoss * uLoss);
+
+        // dGamma = gR dR - gR dA + gMu mu + gNu nu
+        final double gR = sensitivity * invFourULoss2;
+        final double gMu = -2.0 * s * sensitivity;
+        final double gNu = -sensitivity * gamma * gamma * gamma * a0;
+        // d(shareRad) = sR (dR - dA) + sMu mu + sNu nu
+        final double shareSlope = a0 * gamma * (gamma + 2.0) * invDen * invDen;
+        final double sR = shareSlope * gR;
+        final double sMu = shareSlope * gMu;
+        final double sNu = a0 * gamma * gamma * (gamma + 1.0) * invDen * invDen + shareSlope * gNu;
+        // d nabla = nR dR + nA dA + nMu mu + nNu nu
+        final double nR = shareSuper - w * sR;
+        final double nA = shareRad + w * sR;
+        final double nMu = -w * sMu;
+        final double nNu = -w * sNu;
+        // d ln v = vR dR - vR dA + vMu mu + vNu nu + lambda + sigma
+        final double vR = gR * invGamma;
+        final double vMu = 1.0 + gMu * invGamma;
+        final double vNu = gNu * invGamma;
+        // d(F_conv/F) = cR dR + cA dA + cMu mu + cNu nu
+        final double cR = (shareRad + w * sR - convective) * invNablaRad;
+        final double cA = -nA * invNablaRad;
+        final double cMu = w * sMu * invNablaRad;
+        final double cNu = w * sNu * invNablaRad;
+
+        // per input: base derivatives per unit of the input
+        // d ln l / d ln q for H_P's inputs (0 when l = alpha r), and d ln q' of q = omega's share
+        final double lengthHp = capped ? 0.0 : 1.0;
+        final double le = lossElasticity;
+        final double[][] cNabla = columns == null ? null : columns.dNabla;
+        final double[][] cVelocity = columns == null ? null : columns.dVelocity;
+        final double[][] cConvective = columns == null ? null : columns.dConvectiveFraction;
+        final double[][] cDiffusion = columns == null ? null : columns.dDiffusion;
+        double probe = 0.0;
+
+        // T: nabla_rad ~ T^-4, U ~ T^3
+        {
+            double dR = -4.0 * nablaRad * invT;
+            double mu = 3.0 * invT;
+            double lnV = vR * dR + vMu * mu;
+            probe += put(out.dNabla, cNabla, ZoneInput.T, k, nR * dR + nMu * mu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.T, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.T, k, cR * dR + cMu * mu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.T, k, diffusion * lnV);
+        }
+        // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
+        {
+            double lambda = -lengthHp * invRho;
+            double nu = le * (invRho + lambda);
+            double mu = -2.5 * invRho - 2.0 * lambda + nu;
+            double sigma = 0.5 * invRho;
+            double lnV = vMu * mu + vNu * nu + lambda + sigma;
+            probe += put(out.dNabla, cNabla, ZoneInput.RHO, k, nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.RHO, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.RHO, k, cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.RHO, k, diffusion * (lnV + lambda));
+        }
+        // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
+        {
+            double dR = nablaRad * invP;
+            double lambda = lengthHp * invP;
+            double nu = le * lambda;
+            double mu = 0.5 * invP - 2.0 * lambda + nu;
+            double sigma = -0.5 * invP;
+            double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
+            probe += put(out.dNabla, cNabla, ZoneInput.P, k, nR * dR + nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.P, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.P, k, cR * dR + cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.P, k, diffusion * (lnV + lambda));
+        }
+        // L: nabla_rad only
+        {
+            double dR = perL;
+            double lnV = vR * dR;
+            probe += put(out.dNabla, cNabla, ZoneInput.L, k, nR * dR)
+                    + put(out.dVelocity, cVelocity, ZoneInput.L, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.L, k, cR * dR)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.L, k, diffusion * lnV);
+        }
+        // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
+        {
+            double dR = -nablaRad * invM;
+            double lambda = -lengthHp * invM;
+            double nu = le * lambda;
+            double mu = -invM - 2.0 * lambda + nu;
+            double sigma = invM;
+            double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
+            probe += put(out.dNabla, cNabla, ZoneInput.M, k, nR * dR + nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.M, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.M, k, cR * dR + cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.M, k, diffusion * (lnV + lambda));
+        }
+        // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
+        {
+            double lambda = (1.0 + lengthHp) * invR;
+            double nu = le * lambda;
+            double mu = 2.0 * invR - 2.0 * lambda + nu;
+            double sigma = -2.0 * invR;
+            double lnV = vMu * mu + vNu * nu + lambda + sigma;
+            probe += put(out.dNabla, cNabla, ZoneInput.R, k, nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.R, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.R, k, cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.R, k, diffusion * (lnV + lambda));
+        }
+        // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
+        {
+            double dR = nablaRad * invKappa;
+            double nu = le * invKappa;
+            double mu = -invKappa + nu;
+            double lnV = vR * dR + vMu * mu + vNu * nu;
+            probe += put(out.dNabla, cNabla, ZoneInput.KAPPA, k, nR * dR + nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.KAPPA, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.KAPPA, k, cR * dR + cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.KAPPA, k, diffusion * lnV);
+        }
+        // c_P: U ~ 1/c_P
+        {
+            double mu = -invCp;
+            double lnV = vMu * mu;
+            probe += put(out.dNabla, cNabla, ZoneInput.CP, k, nMu * mu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.CP, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.CP, k, cMu * mu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.CP, k, diffusion * lnV);
+        }
+        // nabla_ad: dA = 1
+        {
+            double lnV = -vR;
+            probe += put(out.dNabla, cNabla, ZoneInput.NABLA_AD, k, nA)
+                    + put(out.dVelocity, cVelocity, ZoneInput.NABLA_AD, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.NABLA_AD, k, cA)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.NABLA_AD, k, diffusion * lnV);
+        }
+        // delta: U ~ delta^-1/2, sigma = +1/2
+        {
+            double mu = -0.5 * invDelta;
+            double lnV = vMu * mu + 0.5 * invDelta;
+            probe += put(out.dNabla, cNabla, ZoneInput.DELTA, k, nMu * mu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.DELTA, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.DELTA, k, cMu * mu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.DELTA, k, diffusion * lnV);
+        }
+        // nabla_mu and phi do not enter a convective zone
+        for (int i = ZoneInput.NABLA_MU; i <= ZoneInput.PHI; i++) {
+            put(out.dNabla, cNabla, i, k, 0.0);
+            put(out.dVelocity, cVelocity, i, k, 0.0);
+            put(out.dConvectiveFraction, cConvective, i, k, 0.0);
+            put(out.dDiffusion, cDiffusion, i, k, 0.0);
+        }
+        // alpha: l ~ alpha, U ~ l^-2, omega ~ l
+        {
+            double lambda = invAlpha;
+            double nu = le * lambda;
+            double mu = -2.0 * lambda + nu;
+            double lnV = vMu * mu + vNu * nu + lambda;
+            probe += put(out.dNabla, cNabla, ZoneInput.ALPHA, k, nMu * mu + nNu * nu)
+                    + put(out.dVelocity, cVelocity, ZoneInput.ALPHA, k, velocity * lnV)
+                    + put(out.dConvectiveFraction, cConvective, ZoneInput.ALPHA, k, cMu * mu + cNu * nu)
+                    + put(out.dDiffusion, cDiffusion, ZoneInput.ALPHA, k, diffusion * (lnV + lambda));
+        }
+        return probe;
+    }
+
+    /** Writes one Jacobian entry to the per-zone array or to zone k of the column; returns value * 0. */
+    private static double put(double[] flat, double[][] columns, int i, int k, double value) {
+        if (columns == null) {
+            flat[i] = value;
+        } else {
+            columns[i][k] = value;
+        }
+        return value * 0.0;
+    }
+
+    /**
+     * Refuses a zone whose valid inputs overflow double precision somewhere on the way (see
+     * {@link ZoneChecks#finiteOutputs}).
+     *
+     * @param probe sum of (entry * 0) over the derivatives already written, or 0
+     */
+    private static void guard(ZoneState z, ConvectionResult out, double probe) {
+        probe += (out.nablaRad + out.nabla + out.nablaElement + out.velocity + out.convectiveFraction
                 + out.radiativeFraction + out.efficiency + out.lossParameter + out.scaleHeight + out.mixingLength
                 + out.diffusion) * 0.0;
-        if (jacobian) {
-            double a = 0.0;
-            double b = 0.0;
-            for (int i = 0; i < ZoneInput.COUNT; i++) {
-                a += out.dNabla[i] * 0.0 + out.dVelocity[i] * 0.0;
-                b += out.dConvectiveFraction[i] * 0.0 + out.dDiffusion[i] * 0.0;
-            }
-            probe += a + b;
-        }
         ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
+    }
+
+    /** Sum of (entry * 0) over a stable zone's derivative arrays: NaN exactly when one is not finite. */
+    private static double derivativeProbe(ConvectionResult out) {
+        double a = 0.0;
+        double b = 0.0;
+        for (int i = 0; i < ZoneInput.COUNT; i++) {
+            a += out.dNabla[i] * 0.0 + out.dVelocity[i] * 0.0;
+            b += out.dConvectiveFraction[i] * 0.0 + out.dDiffusion[i] * 0.0;
+        }
+        return a + b;
     }
 
     private static void stable(ZoneState z, Regime regime, double nablaRad, double semiconvection,
@@ -275,33 +460,6 @@ public final class MixingLengthZone {
             out.diffusion = 0.0;
             Arrays.fill(out.dDiffusion, 0.0);
         }
-        guard(z, out, true);
-    }
-
-    /** d ln H_P / d ln q_i, H_P = P r^2 / (rho G m). */
-    private static final double[] SCALE_HEIGHT = table(ZoneInput.P, 1.0, ZoneInput.RHO, -1.0, ZoneInput.R, 2.0,
-            ZoneInput.M, -1.0);
-    /** d ln g / d ln q_i, g = G m / r^2. */
-    private static final double[] GRAVITY = table(ZoneInput.M, 1.0, ZoneInput.R, -2.0);
-    /** d ln U / d ln q_i from the factor T^3 / (c_P kappa rho^2 sqrt(delta)) of U. */
-    private static final double[] LOSS_BASE = table(ZoneInput.T, 3.0, ZoneInput.CP, -1.0, ZoneInput.KAPPA, -1.0,
-            ZoneInput.RHO, -2.0, ZoneInput.DELTA, -0.5);
-    /** d ln l / d ln q_i for l = alpha H_P. */
-    private static final double[] LENGTH_SCALED = table(ZoneInput.ALPHA, 1.0, ZoneInput.P, 1.0, ZoneInput.RHO, -1.0,
-            ZoneInput.R, 2.0, ZoneInput.M, -1.0);
-    /** d ln l / d ln q_i for l = alpha r. */
-    private static final double[] LENGTH_CAPPED = table(ZoneInput.ALPHA, 1.0, ZoneInput.R, 1.0);
-    /** d ln (kappa rho) / d ln q_i: the part of omega = kappa rho l other than l. */
-    private static final double[] OMEGA_OWN = table(ZoneInput.KAPPA, 1.0, ZoneInput.RHO, 1.0);
-    /** d ln delta / d ln q_i. */
-    private static final double[] DELTA_OWN = table(ZoneInput.DELTA, 1.0);
-
-    /** A table over the inputs: zero except at the (index, value) pairs given. */
-    private static double[] table(double... pairs) {
-        double[] e = new double[ZoneInput.COUNT];
-        for (int k = 0; k < pairs.length; k += 2) {
-            e[(int) pairs[k]] = pairs[k + 1];
-        }
-        return e;
+        guard(z, out, derivativeProbe(out));
     }
 }

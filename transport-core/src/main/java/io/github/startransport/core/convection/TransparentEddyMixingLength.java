@@ -134,7 +134,10 @@ public final class TransparentEddyMixingLength implements ConvectionModel {
                 settings.criterion(), settings.semiconvection(), settings.thermohaline(), out, false);
     }
 
-    /** A loop over the static kernel with the output's working space: no allocation, no per-zone dispatch. */
+    /**
+     * A loop over the static kernel with the output's working space: no allocation, no per-zone dispatch.
+     * A convective zone's Jacobian is written straight into the output columns.
+     */
     @Override
     public void solveColumns(ZoneColumns in, int from, int to, ConvectionColumns out, boolean jacobian) {
         in.checkRange(from, to, out.capacity);
@@ -147,9 +150,9 @@ public final class TransparentEddyMixingLength implements ConvectionModel {
         final double semiconvection = settings.semiconvection();
         final double thermohaline = settings.thermohaline();
         for (int k = from; k < to; k++) {
-            MixingLengthZone.solve(in.load(k, zone), alpha, geometry, eddyShape, limit, criterion, semiconvection,
-                    thermohaline, r, jacobian);
-            out.store(k, r, jacobian);
+            boolean written = MixingLengthZone.solve(in.load(k, zone), alpha, geometry, eddyShape, limit, criterion,
+                    semiconvection, thermohaline, r, jacobian, out, k);
+            out.store(k, r, jacobian && !written);
         }
     }
 
