@@ -49,6 +49,8 @@ public final class OpacityTableSet {
     private final boolean fast;
     private final double[] logT;
     private final double[] logR;
+    private final double logTInvStep;
+    private final double logRInvStep;
 
     /**
      * @param source      where the tables came from, for messages
@@ -90,6 +92,8 @@ public final class OpacityTableSet {
         fast = shared;
         logT = grids[0].logT;
         logR = grids[0].logR;
+        logTInvStep = grids[0].logTInvStep;
+        logRInvStep = grids[0].logRInvStep;
     }
 
     /** @return where the tables came from */
@@ -222,8 +226,8 @@ public final class OpacityTableSet {
                 clampY = policy == OutOfRangePolicy.CLAMP;
             }
             int nR = logR.length;
-            int ix = OpacityGrid.interval(logT, x);
-            int iy = OpacityGrid.interval(logR, y);
+            int ix = OpacityGrid.locate(logT, logTInvStep, x);
+            int iy = OpacityGrid.locate(logR, logRInvStep, y);
             int p = 4 * (ix * nR + iy);
             int q = p + 4 * nR;
             double c0 = 0, c1 = 0, c2 = 0, c3 = 0, c4 = 0, c5 = 0, c6 = 0, c7 = 0;
@@ -382,8 +386,8 @@ public final class OpacityTableSet {
             y = outOfRangeR(policy, density, zone, lr, ay);
             clampY = policy == OutOfRangePolicy.CLAMP;
         }
-        int ix = OpacityGrid.interval(ax, x);
-        int iy = OpacityGrid.interval(ay, y);
+        int ix = OpacityGrid.locate(ax, g.logTInvStep, x);
+        int iy = OpacityGrid.locate(ay, g.logRInvStep, y);
         int fb = g.fallbackRow(ix, iy);
         // a point on the lower edge of an unusable cell may belong to the usable cell below it
         if (fb != -1 && y == ay[iy] && iy > 0 && g.fallbackRow(ix, iy - 1) == -1) {
