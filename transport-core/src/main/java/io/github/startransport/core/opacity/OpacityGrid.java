@@ -23,7 +23,10 @@ final class OpacityGrid {
     final double[] logT;
     /** log10 R nodes, strictly increasing, R = rho / T_6^3 (log g cm^-3 K^-3 10^18). May be shared. */
     final double[] logR;
-    /** f, f_x, f_y, f_xy for node (i, j) at 4 (i nR + j). */
+    /**
+     * f, f_x, f_y, f_xy for node (i, j) at 4 (i nR + j); {@code null} in a copy made by
+     * {@link #withoutNodes} for a set that holds the node data itself.
+     */
     final double[] node;
     /**
      * For cell (i, j) at i (nR - 1) + j: -1 if usable, else the row index j' of the nearest usable cell in
@@ -100,6 +103,27 @@ final class OpacityGrid {
         fallback = count == nT * nR ? null : fallbacks(values, nT, nR);
     }
 
+    /** A copy sharing everything but the node data, which it does not hold. */
+    private OpacityGrid(OpacityGrid g) {
+        hydrogen = g.hydrogen;
+        metals = g.metals;
+        logT = g.logT;
+        logR = g.logR;
+        node = null;
+        fallback = g.fallback;
+        present = g.present;
+        logTInvStep = g.logTInvStep;
+        logRInvStep = g.logRInvStep;
+    }
+
+    /**
+     * @return this grid's description (composition, axes, coverage) without its node data, for a set that
+     *         keeps the node data of all its tables in one array of its own (this grid is not modified)
+     */
+    OpacityGrid withoutNodes() {
+        return new OpacityGrid(this);
+    }
+
     private static int[] fallbacks(double[][] v, int nT, int nR) {
         int cells = nR - 1;
         int[] fb = new int[(nT - 1) * cells];
@@ -169,14 +193,14 @@ final class OpacityGrid {
         return fallback == null ? -1 : fallback[i * (logR.length - 1) + j];
     }
 
-    /** @return f at node (i, j) (log10 cm^2 g^-1); NaN when absent */
+    /** @return f at node (i, j) (log10 cm^2 g^-1); NaN when absent. Only on a grid that holds its nodes. */
     double value(int i, int j) {
         return node[4 * (i * logR.length + j)];
     }
 
-    /** @return doubles held by this grid's node data (axes not included) */
+    /** @return doubles held by this grid's node data (axes not included; 0 without node data) */
     int nodeDoubles() {
-        return node.length;
+        return node == null ? 0 : node.length;
     }
 
     /**
