@@ -47,6 +47,8 @@ public final class OpacityTableSet {
     private final double[] zInv;
     private final double[][] rowXInv;
     private final boolean fast;
+    /** Whether every row of equal Z has the same X nodes (then the X weights are found once per lookup). */
+    private final boolean sameX;
     private final double[] logT;
     private final double[] logR;
     private final double logTInvStep;
@@ -91,6 +93,11 @@ public final class OpacityTableSet {
         for (int r = 0; r < rowXs.length; r++) {
             rowXInv[r] = inverseDenominators(rowXs[r]);
         }
+        boolean same = true;
+        for (double[] r : rowXs) {
+            same &= Arrays.equals(r, rowXs[0]);
+        }
+        sameX = same;
         boolean shared = allowFast;
         for (OpacityGrid g : grids) {
             shared &= g.complete() && g.logT == grids[0].logT && g.logR == grids[0].logR;
@@ -261,24 +268,38 @@ public final class OpacityTableSet {
             double[] d = packed;
             double c0 = 0, c1 = 0, c2 = 0, c3 = 0, c4 = 0, c5 = 0, c6 = 0, c7 = 0;
             double c8 = 0, c9 = 0, c10 = 0, c11 = 0, c12 = 0, c13 = 0, c14 = 0, c15 = 0;
+            // weights along X: once for the set when every Z row has the same X nodes, else once per row
+            double wx0 = 0, wx1 = 0, wx2 = 0, wx3 = 0;
+            int kxLo = 0;
+            int kxHi = -1;
+            boolean xKnown = false;
             for (int kz = kzLo; kz <= kzHi; kz++) {
                 double wz = weight(zs, zInv, iz, zq, kz);
                 if (wz == 0.0) {
                     continue;
                 }
-                double[] xs = rowXs[kz];
-                int nx = xs.length;
-                double xq = hydrogen;
-                if (hydrogen < xs[0] || hydrogen > xs[nx - 1]) {
-                    outside = true;
-                    xq = outOfRange(policy, "hydrogen", hydrogen, "1", zone, xs[0], xs[nx - 1], "X at Z = " + zs[kz]);
+                if (!xKnown) {
+                    double[] xs = rowXs[kz];
+                    int nx = xs.length;
+                    double xq = hydrogen;
+                    if (hydrogen < xs[0] || hydrogen > xs[nx - 1]) {
+                        outside = true;
+                        xq = outOfRange(policy, "hydrogen", hydrogen, "1", zone, xs[0], xs[nx - 1], "X at Z = " + zs[kz]);
+                    }
+                    int ixx = nx == 1 ? 0 : OpacityGrid.interval(xs, xq);
+                    kxLo = nx <= 2 ? 0 : Math.max(0, ixx - 1);
+                    kxHi = nx <= 2 ? nx - 1 : Math.min(nx - 1, ixx + 2); // at most 4 nodes
+                    double[] inv = rowXInv[kz];
+                    wx0 = weight(xs, inv, ixx, xq, kxLo);
+                    wx1 = kxLo + 1 <= kxHi ? weight(xs, inv, ixx, xq, kxLo + 1) : 0.0;
+                    wx2 = kxLo + 2 <= kxHi ? weight(xs, inv, ixx, xq, kxLo + 2) : 0.0;
+                    wx3 = kxLo + 3 <= kxHi ? weight(xs, inv, ixx, xq, kxLo + 3) : 0.0;
+                    xKnown = sameX;
                 }
-                int ixx = nx == 1 ? 0 : OpacityGrid.interval(xs, xq);
-                int kxLo = nx <= 2 ? 0 : Math.max(0, ixx - 1);
-                int kxHi = nx <= 2 ? nx - 1 : Math.min(nx - 1, ixx + 2);
                 int base = rowStart[kz];
                 for (int kx = kxLo; kx <= kxHi; kx++) {
-                    double w = wz * weight(xs, rowXInv[kz], ixx, xq, kx);
+                    int m = kx - kxLo;
+                    double w = wz * (m == 0 ? wx0 : m == 1 ? wx1 : m == 2 ? wx2 : wx3);
                     if (w == 0.0) {
                         continue;
                     }
