@@ -23,7 +23,10 @@ final class OpacityGrid {
     final double[] logT;
     /** log10 R nodes, strictly increasing, R = rho / T_6^3 (log g cm^-3 K^-3 10^18). May be shared. */
     final double[] logR;
-    /** f, f_x, f_y, f_xy for node (i, j) at 4 (i nR + j). */
+    /**
+     * f, f_x, f_y, f_xy for node (i, j) at 4 (i nR + j); {@code null} in a copy made by
+     * {@link #withoutNodes} for a set that holds the node data itself.
+     */
     final double[] node;
     /**
      * For cell (i, j) at i (nR - 1) + j: -1 if usable, else the row index j' of the nearest usable cell in
@@ -32,6 +35,10 @@ final class OpacityGrid {
     final int[] fallback;
     /** Number of nodes present (tabulated values). */
     final int present;
+    /** 1 / spacing of {@link #logT} if it is evenly spaced (see {@link #inverseStep}), else 0 (per dex). */
+    final double logTInvStep;
+    /** 1 / spacing of {@link #logR} if it is evenly spaced, else 0 (per dex). */
+    final double logRInvStep;
 
     /**
      * @param hydrogen X
@@ -45,6 +52,8 @@ final class OpacityGrid {
         this.metals = metals;
         this.logT = logT;
         this.logR = logR;
+        this.logTInvStep = inverseStep(logT);
+        this.logRInvStep = inverseStep(logR);
         int nT = logT.length;
         int nR = logR.length;
         double[][] fx = new double[nT][nR];
@@ -92,6 +101,27 @@ final class OpacityGrid {
             }
         }
         fallback = count == nT * nR ? null : fallbacks(values, nT, nR);
+    }
+
+    /** A copy sharing everything but the node data, which it does not hold. */
+    private OpacityGrid(OpacityGrid g) {
+        hydrogen = g.hydrogen;
+        metals = g.metals;
+        logT = g.logT;
+        logR = g.logR;
+        node = null;
+        fallback = g.fallback;
+        present = g.present;
+        logTInvStep = g.logTInvStep;
+        logRInvStep = g.logRInvStep;
+    }
+
+    /**
+     * @return this grid's description (composition, axes, coverage) without its node data, for a set that
+     *         keeps the node data of all its tables in one array of its own (this grid is not modified)
+     */
+    OpacityGrid withoutNodes() {
+        return new OpacityGrid(this);
     }
 
     private static int[] fallbacks(double[][] v, int nT, int nR) {
@@ -163,14 +193,67 @@ final class OpacityGrid {
         return fallback == null ? -1 : fallback[i * (logR.length - 1) + j];
     }
 
-    /** @return f at node (i, j) (log10 cm^2 g^-1); NaN when absent */
+    /** @return f at node (i, j) (log10 cm^2 g^-1); NaN when absent. Only on a grid that holds its nodes. */
     double value(int i, int j) {
         return node[4 * (i * logR.length + j)];
     }
 
-    /** @return doubles held by this grid's node data (axes not included) */
+    /** @return doubles held by this grid's node data (axes not included; 0 without node data) */
     int nodeDoubles() {
-        return node.length;
+        return node == null ? 0 : node.length;
+    }
+
+    /**
+     * Largest relative departure of a node from the even spacing a[0] + k h, h = (a[n-1] - a[0]) / (n - 1),
+     * for which an axis still counts as evenly spaced (our own choice: decimal steps such as 0.05 are not
+     * exact in binary, so rounding leaves departures of order 1e-16 h; anything up to a quarter step would
+     * still keep {@link #locate} at one correction step).
+     */
+    static final double EVEN_TOLERANCE = 1e-9;
+
+    /**
+     * @param a axis, strictly increasing, length &gt;= 2 (not modified)
+     * @return 1 / h when every node lies within {@link #EVEN_TOLERANCE} h of a[0] + k h, else 0 (units of 1/a)
+     */
+    static double inverseStep(double[] a) {
+        int n = a.length;
+        double h = (a[n - 1] - a[0]) / (n - 1);
+        if (!(h > 0.0) || !Double.isFinite(h)) {
+            return 0.0;
+        }
+        for (int k = 0; k < n; k++) {
+            if (!(Math.abs(a[k] - (a[0] + k * h)) <= EVEN_TOLERANCE * h)) {
+                return 0.0;
+            }
+        }
+        return 1.0 / h;
+    }
+
+    /**
+     * The same interval index as {@link #interval}, found in O(1) on an evenly spaced axis: the index
+     * (q - a[0]) / h is guessed, clamped to [0, n-2], and then corrected against the stored nodes
+     * themselves (at most one step when the axis is evenly spaced), so the result is identical to the binary
+     * search whatever the rounding of the guess. Falls back to {@link #interval} when invStep is 0.
+     *
+     * @param a       axis, strictly increasing, length &gt;= 2 (not modified)
+     * @param invStep {@link #inverseStep} of the axis (units of 1/a)
+     * @param q       query (units of a), not NaN
+     * @return i in [0, n-2] with a[i] &lt;= q &lt; a[i+1] inside the axis
+     */
+    static int locate(double[] a, double invStep, double q) {
+        if (invStep == 0.0) {
+            return interval(a, q);
+        }
+        int last = a.length - 2;
+        double guess = (q - a[0]) * invStep;
+        int i = guess <= 0.0 ? 0 : guess >= last ? last : (int) guess;
+        while (i > 0 && a[i] > q) {
+            i--;
+        }
+        while (i < last && a[i + 1] <= q) {
+            i++;
+        }
+        return i;
     }
 
     /**

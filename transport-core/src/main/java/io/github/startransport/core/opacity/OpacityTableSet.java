@@ -47,8 +47,18 @@ public final class OpacityTableSet {
     private final double[] zInv;
     private final double[][] rowXInv;
     private final boolean fast;
+    /** Whether every row of equal Z has the same X nodes (then the X weights are found once per lookup). */
+    private final boolean sameX;
     private final double[] logT;
     private final double[] logR;
+    private final double logTInvStep;
+    private final double logRInvStep;
+    /**
+     * Fast path only: the node data of every table interleaved node by node, f, f_x, f_y, f_xy of table k
+     * at node (i, j) at 4 ((i nR + j) T + k), T the number of tables, so that the corners a lookup needs lie
+     * in two short runs of memory instead of 2 T scattered ones. {@code null} otherwise.
+     */
+    private final double[] packed;
 
     /**
      * @param source      where the tables came from, for messages
@@ -83,6 +93,11 @@ public final class OpacityTableSet {
         for (int r = 0; r < rowXs.length; r++) {
             rowXInv[r] = inverseDenominators(rowXs[r]);
         }
+        boolean same = true;
+        for (double[] r : rowXs) {
+            same &= Arrays.equals(r, rowXs[0]);
+        }
+        sameX = same;
         boolean shared = allowFast;
         for (OpacityGrid g : grids) {
             shared &= g.complete() && g.logT == grids[0].logT && g.logR == grids[0].logR;
@@ -90,6 +105,27 @@ public final class OpacityTableSet {
         fast = shared;
         logT = grids[0].logT;
         logR = grids[0].logR;
+        packed = fast ? interleave(grids) : null;
+        if (fast) { // the node data now lives in packed only
+            for (int k = 0; k < grids.length; k++) {
+                grids[k] = grids[k].withoutNodes();
+            }
+        }
+        logTInvStep = grids[0].logTInvStep;
+        logRInvStep = grids[0].logRInvStep;
+    }
+
+    private static double[] interleave(OpacityGrid[] grids) {
+        int tables = grids.length;
+        int nodes = grids[0].logT.length * grids[0].logR.length;
+        double[] d = new double[4 * tables * nodes];
+        for (int k = 0; k < tables; k++) {
+            double[] src = grids[k].node;
+            for (int n = 0; n < nodes; n++) {
+                System.arraycopy(src, 4 * n, d, 4 * (n * tables + k), 4);
+            }
+        }
+        return d;
     }
 
     /** @return where the tables came from */
@@ -112,11 +148,12 @@ public final class OpacityTableSet {
     }
 
     /**
-     * @return doubles held after loading: 4 per grid node, the distinct axis arrays, X and Z of each
-     *         table and the composition axes (the int fallback arrays of tables with holes count 1/2 each)
+     * @return doubles held after loading: 4 per grid node (in the tables, or interleaved in this set on the
+     *         fast path), the distinct axis arrays, X and Z of each table and the composition axes (the int
+     *         fallback arrays of tables with holes count 1/2 each)
      */
     public long heldDoubles() {
-        long n = 0;
+        long n = packed == null ? 0 : packed.length;
         List<double[]> axes = new ArrayList<>();
         for (OpacityGrid g : grids) {
             n += g.nodeDoubles() + 2;
@@ -222,50 +259,68 @@ public final class OpacityTableSet {
                 clampY = policy == OutOfRangePolicy.CLAMP;
             }
             int nR = logR.length;
-            int ix = OpacityGrid.interval(logT, x);
-            int iy = OpacityGrid.interval(logR, y);
-            int p = 4 * (ix * nR + iy);
-            int q = p + 4 * nR;
+            int ix = OpacityGrid.locate(logT, logTInvStep, x);
+            int iy = OpacityGrid.locate(logR, logRInvStep, y);
+            int tables = grids.length;
+            int right = 4 * tables;            // from node (i, j) to (i, j + 1)
+            int p0 = 4 * (ix * nR + iy) * tables;
+            int q0 = p0 + 4 * nR * tables;     // node (i + 1, j)
+            double[] d = packed;
             double c0 = 0, c1 = 0, c2 = 0, c3 = 0, c4 = 0, c5 = 0, c6 = 0, c7 = 0;
             double c8 = 0, c9 = 0, c10 = 0, c11 = 0, c12 = 0, c13 = 0, c14 = 0, c15 = 0;
+            // weights along X: once for the set when every Z row has the same X nodes, else once per row
+            double wx0 = 0, wx1 = 0, wx2 = 0, wx3 = 0;
+            int kxLo = 0;
+            int kxHi = -1;
+            boolean xKnown = false;
             for (int kz = kzLo; kz <= kzHi; kz++) {
                 double wz = weight(zs, zInv, iz, zq, kz);
                 if (wz == 0.0) {
                     continue;
                 }
-                double[] xs = rowXs[kz];
-                int nx = xs.length;
-                double xq = hydrogen;
-                if (hydrogen < xs[0] || hydrogen > xs[nx - 1]) {
-                    outside = true;
-                    xq = outOfRange(policy, "hydrogen", hydrogen, "1", zone, xs[0], xs[nx - 1], "X at Z = " + zs[kz]);
+                if (!xKnown) {
+                    double[] xs = rowXs[kz];
+                    int nx = xs.length;
+                    double xq = hydrogen;
+                    if (hydrogen < xs[0] || hydrogen > xs[nx - 1]) {
+                        outside = true;
+                        xq = outOfRange(policy, "hydrogen", hydrogen, "1", zone, xs[0], xs[nx - 1], "X at Z = " + zs[kz]);
+                    }
+                    int ixx = nx == 1 ? 0 : OpacityGrid.interval(xs, xq);
+                    kxLo = nx <= 2 ? 0 : Math.max(0, ixx - 1);
+                    kxHi = nx <= 2 ? nx - 1 : Math.min(nx - 1, ixx + 2); // at most 4 nodes
+                    double[] inv = rowXInv[kz];
+                    wx0 = weight(xs, inv, ixx, xq, kxLo);
+                    wx1 = kxLo + 1 <= kxHi ? weight(xs, inv, ixx, xq, kxLo + 1) : 0.0;
+                    wx2 = kxLo + 2 <= kxHi ? weight(xs, inv, ixx, xq, kxLo + 2) : 0.0;
+                    wx3 = kxLo + 3 <= kxHi ? weight(xs, inv, ixx, xq, kxLo + 3) : 0.0;
+                    xKnown = sameX;
                 }
-                int ixx = nx == 1 ? 0 : OpacityGrid.interval(xs, xq);
-                int kxLo = nx <= 2 ? 0 : Math.max(0, ixx - 1);
-                int kxHi = nx <= 2 ? nx - 1 : Math.min(nx - 1, ixx + 2);
                 int base = rowStart[kz];
                 for (int kx = kxLo; kx <= kxHi; kx++) {
-                    double w = wz * weight(xs, rowXInv[kz], ixx, xq, kx);
+                    int m = kx - kxLo;
+                    double w = wz * (m == 0 ? wx0 : m == 1 ? wx1 : m == 2 ? wx2 : wx3);
                     if (w == 0.0) {
                         continue;
                     }
-                    double[] d = grids[base + kx].node;
+                    int p = p0 + 4 * (base + kx);
+                    int q = q0 + 4 * (base + kx);
                     c0 += w * d[p];
                     c1 += w * d[p + 1];
                     c2 += w * d[p + 2];
                     c3 += w * d[p + 3];
-                    c4 += w * d[p + 4];
-                    c5 += w * d[p + 5];
-                    c6 += w * d[p + 6];
-                    c7 += w * d[p + 7];
+                    c4 += w * d[p + right];
+                    c5 += w * d[p + right + 1];
+                    c6 += w * d[p + right + 2];
+                    c7 += w * d[p + right + 3];
                     c8 += w * d[q];
                     c9 += w * d[q + 1];
                     c10 += w * d[q + 2];
                     c11 += w * d[q + 3];
-                    c12 += w * d[q + 4];
-                    c13 += w * d[q + 5];
-                    c14 += w * d[q + 6];
-                    c15 += w * d[q + 7];
+                    c12 += w * d[q + right];
+                    c13 += w * d[q + right + 1];
+                    c14 += w * d[q + right + 2];
+                    c15 += w * d[q + right + 3];
                 }
             }
             double hx = logT[ix + 1] - logT[ix];
@@ -382,8 +437,8 @@ public final class OpacityTableSet {
             y = outOfRangeR(policy, density, zone, lr, ay);
             clampY = policy == OutOfRangePolicy.CLAMP;
         }
-        int ix = OpacityGrid.interval(ax, x);
-        int iy = OpacityGrid.interval(ay, y);
+        int ix = OpacityGrid.locate(ax, g.logTInvStep, x);
+        int iy = OpacityGrid.locate(ay, g.logRInvStep, y);
         int fb = g.fallbackRow(ix, iy);
         // a point on the lower edge of an unusable cell may belong to the usable cell below it
         if (fb != -1 && y == ay[iy] && iy > 0 && g.fallbackRow(ix, iy - 1) == -1) {
