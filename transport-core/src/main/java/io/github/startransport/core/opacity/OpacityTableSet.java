@@ -403,7 +403,7 @@ public final class OpacityTableSet {
             // only an extrapolation far outside the tables gets here
             throw new InvalidInputException("temperature", temperature, "K", zone,
                     "close enough to the tables of " + source + " that the extrapolated opacity is finite and > 0 "
-                            + "(got log10 kappa = " + f + " at rho = " + density + " g cm^-3; outOfRange="
+                            + "(got log10 kappa = " + f + " at rho = " + density + " g cm^-3; out-of-range="
                             + policy.name().toLowerCase(java.util.Locale.ROOT) + ")");
         }
         out.kappa = kappa;
@@ -456,7 +456,7 @@ public final class OpacityTableSet {
                         "outside the hole declared in " + source + " for X = " + g.hydrogen + ", Z = " + g.metals
                                 + " (log_T = " + lt + ", log_R = " + lr + ", cell log_T " + ax[ix] + ".." + ax[ix + 1]
                                 + ", log_R " + ay[iy] + ".." + ay[iy + 1] + (fb == -2
-                                ? "; no usable cell in this log_T column)" : "; outOfRange=refuse)"));
+                                ? "; no usable cell in this log_T column)" : "; out-of-range=refuse)"));
             }
             if (policy == OutOfRangePolicy.CLAMP) {
                 y = fb < iy ? ay[fb + 1] : ay[fb];
@@ -591,7 +591,7 @@ public final class OpacityTableSet {
             default:
                 throw new InvalidInputException(field, value, unit, zone,
                         "inside the tables of " + source + ": " + axis + " in [" + lo + ", " + hi
-                                + "] (outOfRange=refuse)");
+                                + "] (out-of-range=refuse)");
         }
     }
 
@@ -610,7 +610,7 @@ public final class OpacityTableSet {
             default:
                 throw new InvalidInputException("density", density, "g cm^-3", zone,
                         "such that log_R = log10(rho) - 3 log10(T) + 18 = " + lr + " lies inside the tables of "
-                                + source + ": log_R in [" + lo + ", " + hi + "] (outOfRange=refuse)");
+                                + source + ": log_R in [" + lo + ", " + hi + "] (out-of-range=refuse)");
         }
     }
 
