@@ -30,17 +30,24 @@ public enum MixingLengthGeometry {
     private final double flux;
     private final double loss;
     private final double coefficient;
+    private final double rootVelocity;
 
     MixingLengthGeometry(double velocity, double flux, double loss) {
         this.velocity = velocity;
         this.flux = flux;
         this.loss = loss;
         this.coefficient = 3.0 * flux * loss / 16.0;
+        this.rootVelocity = Math.sqrt(velocity);
     }
 
     /** @return a, the factor of the velocity relation (dimensionless) */
     public double velocityFactor() {
         return velocity;
+    }
+
+    /** @return sqrt(a) (dimensionless), kept so that a zone's solve takes no square root of a constant */
+    double rootVelocityFactor() {
+        return rootVelocity;
     }
 
     /** @return b, the factor of the convective flux (dimensionless) */

@@ -58,6 +58,7 @@ public final class MixingLengthZone {
 
     private static final double G = Codata2018.GRAVITATIONAL_CONSTANT;
     private static final double SIGMA = Codata2018.STEFAN_BOLTZMANN;
+    private static final double INV_G = 1.0 / G;
 
     /**
      * Validates the zone fields the convection models read: those of the stability test plus
@@ -67,9 +68,26 @@ public final class MixingLengthZone {
      * @throws io.github.startransport.spi.InvalidInputException naming the first bad field
      */
     public static void check(ZoneState z) {
-        ZoneChecks.forStability(z);
-        Checks.positive("radius", z.radius, "cm", z.zone);
-        Checks.positive("cp", z.cp, "erg g^-1 K^-1", z.zone);
+        // one combined test on the normal path; the detailed checks (which name the first bad field)
+        // only when it fails, so the refusal is exactly theirs
+        final double inf = Double.POSITIVE_INFINITY;
+        final boolean ok = (z.temperature > 0.0) & (z.temperature < inf)
+                & (z.density > 0.0) & (z.density < inf)
+                & (z.pressure > 0.0) & (z.pressure < inf)
+                & (Math.abs(z.luminosity) < inf)
+                & (z.mass > 0.0) & (z.mass < inf)
+                & (z.opacity > 0.0) & (z.opacity < inf)
+                & (z.nablaAd > 0.0) & (z.nablaAd < 1.0)
+                & (z.delta > 0.0) & (z.delta < inf)
+                & (z.phi > 0.0) & (z.phi < inf)
+                & (Math.abs(z.nablaMu) < inf)
+                & (z.radius > 0.0) & (z.radius < inf)
+                & (z.cp > 0.0) & (z.cp < inf);
+        if (!ok) {
+            ZoneChecks.forStability(z);
+            Checks.positive("radius", z.radius, "cm", z.zone);
+            Checks.positive("cp", z.cp, "erg g^-1 K^-1", z.zone);
+        }
     }
 
     /**
@@ -141,16 +159,40 @@ public final class MixingLengthZone {
         final double nablaMu = z.nablaMu;
         final double phi = z.phi;
 
+        // the reciprocals of the inputs first, all independent of each other; the value chain below
+        // is then products and two independent square roots up to U
+        final double invT = 1.0 / t;
+        final double invRho = 1.0 / rho;
+        final double invP = 1.0 / p;
+        final double invM = 1.0 / m;
+        final double invR = 1.0 / r;
+        final double invKappa = 1.0 / kappa;
+        final double invCp = 1.0 / cp;
+        final double invDelta = 1.0 / delta;
+        final double invAlpha = 1.0 / alpha;
+
         // nabla_rad per unit L, then nabla_rad: the same arithmetic as RadiativeGradient.valueAndDerivatives
         final double perL = RadiativeGradient.value(kappa, 1.0, p, m, t);
         final double nablaRad = perL * z.luminosity;
-        final double gravity = G * m / (r * r);
-        final double scaleHeight = p / (rho * gravity);
+        // g = G m / r^2 and 1/g; H_P = (P / rho) / g and 1/H_P
+        final double gravity = (G * m) * (invR * invR);
+        final double invGravity = (r * r) * (invM * INV_G);
+        final double pressureHeight = p * invRho;
+        final double scaleHeight = pressureHeight * invGravity;
         final boolean capped = limit == CentreLimit.RADIUS && r < scaleHeight;
         final double length = alpha * (capped ? r : scaleHeight);
-        final double a = geometry.velocityFactor();
-        final double u = geometry.lossFactor() * SIGMA * t * t * t * Math.sqrt(scaleHeight / (a * gravity * delta))
-                / (2.0 * cp * kappa * rho * rho * length * length);
+        // sqrt(H_P / (a g delta)) = sqrt(P / (rho delta)) / (g sqrt(a)) and its inverse, the velocity
+        // scale sqrt(a g delta / H_P) = g sqrt(a) sqrt(delta rho / P): two independent roots
+        final double rootA = geometry.rootVelocityFactor();
+        final double thermal = Math.sqrt(pressureHeight * invDelta);
+        final double buoyant = Math.sqrt((delta * rho) * invP);
+        final double velocityScale = gravity * (rootA * buoyant);
+        // U = c sigma T^3 sqrt(H_P / (a g delta)) / (2 c_P kappa rho^2 l^2) as numerator / denominator,
+        // so that U and 1/U are two independent divisions
+        final double uNumerator = geometry.lossFactor() * SIGMA * t * t * t * (thermal * invGravity);
+        final double uDenominator = 2.0 * rootA * cp * kappa * rho * rho * length * length;
+        final double u = uNumerator / uDenominator;
+        final double invU = uDenominator / uNumerator;
         final double nablaL = LedouxGradient.value(nablaAd, phi, delta, nablaMu);
         final Regime regime = StabilityClassifier.classify(criterion, nablaRad, nablaAd, nablaL, nablaMu);
 
@@ -164,10 +206,18 @@ public final class MixingLengthZone {
         final boolean transparent = eddyShape > 0.0;
         final double omega = kappa * rho * length;
         final double yw2 = eddyShape * omega * omega;
-        final double q = transparent ? yw2 / (1.0 + yw2) : 1.0;
+        // q = y omega^2 / (1 + y omega^2) and 1/q = 1 + 1/(y omega^2), independent of each other
+        final double thin = transparent ? 1.0 / (1.0 + yw2) : 0.0;
+        final double q = transparent ? yw2 * thin : 1.0;
+        final double invQ = transparent ? 1.0 + 1.0 / yw2 : 1.0;
         final double uLoss = q * u;
+        final double invULoss = invQ * invU;
         final double a0 = q * geometry.cubicCoefficient();
-        final double s = w / (4.0 * uLoss * uLoss);
+        final double fourULoss2 = 4.0 * uLoss * uLoss;
+        final double invFourULoss2 = 0.25 * invULoss * invULoss;
+        final double s = w * invFourULoss2;
+        // 1/S, ready before the root: with Gamma D = S it gives 1/Gamma = D / S without a division
+        final double invS = fourULoss2 / w;
         final double gamma = regime == Regime.CONVECTIVE ? MixingLengthCubic.efficiency(a0, s) : 0.0;
         if (!(gamma > 0.0)) {
             RadiativeGradient.valueAndDerivatives(kappa, z.luminosity, p, m, t, out.dNabla);
@@ -181,7 +231,6 @@ public final class MixingLengthZone {
         final double shareRad = a0 * gamma * gamma * invDen;    // (nabla_rad - nabla) / W
         final double shareSuper = (gamma + 1.0) * invDen;        // (nabla - nabla_ad) / W
         final double nabla = nablaAd + w * shareSuper;
-        final double velocityScale = Math.sqrt(a * gravity * delta / scaleHeight);
         final double x = 2.0 * uLoss * gamma;
         final double velocity = length * velocityScale * x;
         final double convective = w * shareRad * invNablaRad;
@@ -196,9 +245,9 @@ public final class MixingLengthZone {
         out.diffusion = diffusion;
         double probe = 0.0;
         if (jacobian) {
-            probe = convectiveJacobian(t, rho, p, m, r, kappa, cp, delta, alpha, capped,
-                    transparent ? 2.0 / (1.0 + yw2) : 0.0, nablaRad, invNablaRad, perL, w, a0, s, uLoss, gamma,
-                    invDen, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
+            probe = convectiveJacobian(invT, invRho, invP, invM, invR, invKappa, invCp, invDelta, invAlpha, capped,
+                    2.0 * thin, nablaRad, invNablaRad, perL, w, a0, s, invFourULoss2,
+                    gamma, den * invS, invDen, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
         }
         guard(z, out, probe);
         return jacobian && columns != null;
@@ -222,25 +271,15 @@ public final class MixingLengthZone {
      * only. The values go to {@code out}'s arrays, or to zone k of {@code columns} when that is
      * not null, by the same arithmetic (bit-identical either way).
      */
-    private static double convectiveJacobian(double t, double rho, double p, double m, double r, double kappa,
-                                           double cp, double delta, double alpha, boolean capped,
-                                           double lossElasticity, double nablaRad, double invNablaRad, double perL,
-                                           double w, double a0, double s, double uLoss, double gamma, double invDen,
+    private static double convectiveJacobian(double invT, double invRho, double invP, double invM, double invR,
+                                           double invKappa, double invCp, double invDelta, double invAlpha,
+                                           boolean capped, double lossElasticity, double nablaRad,
+                                           double invNablaRad, double perL, double w, double a0, double s,
+                                           double invFourULoss2, double gamma, double invGamma, double invDen,
                                            double shareRad, double shareSuper, double velocity, double convective,
                                            double diffusion, ConvectionResult out, ConvectionColumns columns,
                                            int k) {
-        final double invT = 1.0 / t;
-        final double invRho = 1.0 / rho;
-        final double invP = 1.0 / p;
-        final double invM = 1.0 / m;
-        final double invR = 1.0 / r;
-        final double invKappa = 1.0 / kappa;
-        final double invCp = 1.0 / cp;
-        final double invDelta = 1.0 / delta;
-        final double invAlpha = 1.0 / alpha;
-        final double invGamma = 1.0 / gamma;
         final double sensitivity = MixingLengthCubic.sensitivity(a0, gamma);
-        final double invFourULoss2 = 1.0 / (4.0 * uLoss * uLoss);
 
         // dGamma = gR dR - gR dA + gMu mu + gNu nu
         final double gR = sensitivity * invFourULoss2;
@@ -274,14 +313,18 @@ public final class MixingLengthZone {
         final double[][] cVelocity = columns == null ? null : columns.dVelocity;
         final double[][] cConvective = columns == null ? null : columns.dConvectiveFraction;
         final double[][] cDiffusion = columns == null ? null : columns.dDiffusion;
-        double probe = 0.0;
+        // four partial sums, so that the finite-value probe is a short tree rather than one long chain
+        double probe0 = 0.0;
+        double probe1 = 0.0;
+        double probe2 = 0.0;
+        double probe3 = 0.0;
 
         // T: nabla_rad ~ T^-4, U ~ T^3
         {
             double dR = -4.0 * nablaRad * invT;
             double mu = 3.0 * invT;
             double lnV = vR * dR + vMu * mu;
-            probe += put(out.dNabla, cNabla, ZoneInput.T, k, nR * dR + nMu * mu)
+            probe0 += put(out.dNabla, cNabla, ZoneInput.T, k, nR * dR + nMu * mu)
                     + put(out.dVelocity, cVelocity, ZoneInput.T, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.T, k, cR * dR + cMu * mu)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.T, k, diffusion * lnV);
@@ -293,7 +336,7 @@ public final class MixingLengthZone {
             double mu = -2.5 * invRho - 2.0 * lambda + nu;
             double sigma = 0.5 * invRho;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, cNabla, ZoneInput.RHO, k, nMu * mu + nNu * nu)
+            probe1 += put(out.dNabla, cNabla, ZoneInput.RHO, k, nMu * mu + nNu * nu)
                     + put(out.dVelocity, cVelocity, ZoneInput.RHO, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.RHO, k, cMu * mu + cNu * nu)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.RHO, k, diffusion * (lnV + lambda));
@@ -306,7 +349,7 @@ public final class MixingLengthZone {
             double mu = 0.5 * invP - 2.0 * lambda + nu;
             double sigma = -0.5 * invP;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, cNabla, ZoneInput.P, k, nR * dR + nMu * mu + nNu * nu)
+            probe2 += put(out.dNabla, cNabla, ZoneInput.P, k, nR * dR + nMu * mu + nNu * nu)
                     + put(out.dVelocity, cVelocity, ZoneInput.P, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.P, k, cR * dR + cMu * mu + cNu * nu)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.P, k, diffusion * (lnV + lambda));
@@ -315,7 +358,7 @@ public final class MixingLengthZone {
         {
             double dR = perL;
             double lnV = vR * dR;
-            probe += put(out.dNabla, cNabla, ZoneInput.L, k, nR * dR)
+            probe3 += put(out.dNabla, cNabla, ZoneInput.L, k, nR * dR)
                     + put(out.dVelocity, cVelocity, ZoneInput.L, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.L, k, cR * dR)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.L, k, diffusion * lnV);
@@ -328,7 +371,7 @@ public final class MixingLengthZone {
             double mu = -invM - 2.0 * lambda + nu;
             double sigma = invM;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, cNabla, ZoneInput.M, k, nR * dR + nMu * mu + nNu * nu)
+            probe0 += put(out.dNabla, cNabla, ZoneInput.M, k, nR * dR + nMu * mu + nNu * nu)
                     + put(out.dVelocity, cVelocity, ZoneInput.M, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.M, k, cR * dR + cMu * mu + cNu * nu)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.M, k, diffusion * (lnV + lambda));
@@ -340,7 +383,7 @@ public final class MixingLengthZone {
             double mu = 2.0 * invR - 2.0 * lambda + nu;
             double sigma = -2.0 * invR;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, cNabla, ZoneInput.R, k, nMu * mu + nNu * nu)
+            probe1 += put(out.dNabla, cNabla, ZoneInput.R, k, nMu * mu + nNu * nu)
                     + put(out.dVelocity, cVelocity, ZoneInput.R, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.R, k, cMu * mu + cNu * nu)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.R, k, diffusion * (lnV + lambda));
@@ -351,7 +394,7 @@ public final class MixingLengthZone {
             double nu = le * invKappa;
             double mu = -invKappa + nu;
             double lnV = vR * dR + vMu * mu + vNu * nu;
-            probe += put(out.dNabla, cNabla, ZoneInput.KAPPA, k, nR * dR + nMu * mu + nNu * nu)
+            probe2 += put(out.dNabla, cNabla, ZoneInput.KAPPA, k, nR * dR + nMu * mu + nNu * nu)
                     + put(out.dVelocity, cVelocity, ZoneInput.KAPPA, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.KAPPA, k, cR * dR + cMu * mu + cNu * nu)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.KAPPA, k, diffusion * lnV);
@@ -360,7 +403,7 @@ public final class MixingLengthZone {
         {
             double mu = -invCp;
             double lnV = vMu * mu;
-            probe += put(out.dNabla, cNabla, ZoneInput.CP, k, nMu * mu)
+            probe3 += put(out.dNabla, cNabla, ZoneInput.CP, k, nMu * mu)
                     + put(out.dVelocity, cVelocity, ZoneInput.CP, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.CP, k, cMu * mu)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.CP, k, diffusion * lnV);
@@ -368,7 +411,7 @@ public final class MixingLengthZone {
         // nabla_ad: dA = 1
         {
             double lnV = -vR;
-            probe += put(out.dNabla, cNabla, ZoneInput.NABLA_AD, k, nA)
+            probe0 += put(out.dNabla, cNabla, ZoneInput.NABLA_AD, k, nA)
                     + put(out.dVelocity, cVelocity, ZoneInput.NABLA_AD, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.NABLA_AD, k, cA)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.NABLA_AD, k, diffusion * lnV);
@@ -377,7 +420,7 @@ public final class MixingLengthZone {
         {
             double mu = -0.5 * invDelta;
             double lnV = vMu * mu + 0.5 * invDelta;
-            probe += put(out.dNabla, cNabla, ZoneInput.DELTA, k, nMu * mu)
+            probe1 += put(out.dNabla, cNabla, ZoneInput.DELTA, k, nMu * mu)
                     + put(out.dVelocity, cVelocity, ZoneInput.DELTA, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.DELTA, k, cMu * mu)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.DELTA, k, diffusion * lnV);
@@ -395,12 +438,12 @@ public final class MixingLengthZone {
             double nu = le * lambda;
             double mu = -2.0 * lambda + nu;
             double lnV = vMu * mu + vNu * nu + lambda;
-            probe += put(out.dNabla, cNabla, ZoneInput.ALPHA, k, nMu * mu + nNu * nu)
+            probe2 += put(out.dNabla, cNabla, ZoneInput.ALPHA, k, nMu * mu + nNu * nu)
                     + put(out.dVelocity, cVelocity, ZoneInput.ALPHA, k, velocity * lnV)
                     + put(out.dConvectiveFraction, cConvective, ZoneInput.ALPHA, k, cMu * mu + cNu * nu)
                     + put(out.dDiffusion, cDiffusion, ZoneInput.ALPHA, k, diffusion * (lnV + lambda));
         }
-        return probe;
+        return (probe0 + probe1) + (probe2 + probe3);
     }
 
     /** Writes one Jacobian entry to the per-zone array or to zone k of the column; returns value * 0. */
@@ -420,9 +463,10 @@ public final class MixingLengthZone {
      * @param probe sum of (entry * 0) over the derivatives already written, or 0
      */
     private static void guard(ZoneState z, ConvectionResult out, double probe) {
-        probe += (out.nablaRad + out.nabla + out.nablaElement + out.velocity + out.convectiveFraction
-                + out.radiativeFraction + out.efficiency + out.lossParameter + out.scaleHeight + out.mixingLength
-                + out.diffusion) * 0.0;
+        // a short tree of sums (any non-finite term makes it NaN)
+        probe += ((((out.nablaRad + out.nabla) + (out.nablaElement + out.velocity))
+                + ((out.convectiveFraction + out.radiativeFraction) + (out.efficiency + out.lossParameter)))
+                + ((out.scaleHeight + out.mixingLength) + out.diffusion)) * 0.0;
         ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
     }
 
