@@ -59,6 +59,9 @@ public final class MixingLengthZone {
     private static final double G = Codata2018.GRAVITATIONAL_CONSTANT;
     private static final double SIGMA = Codata2018.STEFAN_BOLTZMANN;
     private static final double INV_G = 1.0 / G;
+    /** Bit pattern of 2^-256: {@link #offset} maps [2^-256, 2^256) onto [0, 2^61). */
+    private static final long ORDINARY_LOW = 767L << 52;
+    private static final int ORDINARY_SHIFT = 61;
 
     /**
      * Validates the zone fields the convection models read: those of the stability test plus
@@ -146,7 +149,6 @@ public final class MixingLengthZone {
     static boolean solve(ZoneState z, double alpha, MixingLengthGeometry geometry, double eddyShape,
                          CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
                          ConvectionResult out, boolean jacobian, ConvectionColumns columns, int k) {
-        check(z);
         final double t = z.temperature;
         final double rho = z.density;
         final double p = z.pressure;
@@ -159,17 +161,57 @@ public final class MixingLengthZone {
         final double nablaMu = z.nablaMu;
         final double phi = z.phi;
 
-        // the reciprocals of the inputs first, all independent of each other; the value chain below
-        // is then products and two independent square roots up to U
-        final double invT = 1.0 / t;
-        final double invRho = 1.0 / rho;
-        final double invP = 1.0 / p;
-        final double invM = 1.0 / m;
-        final double invR = 1.0 / r;
-        final double invKappa = 1.0 / kappa;
-        final double invCp = 1.0 / cp;
-        final double invDelta = 1.0 / delta;
-        final double invAlpha = 1.0 / alpha;
+        // Normal path: every input that is inverted lies in [2^-256, 2^256) (one test on the bit
+        // patterns, which also proves it finite and > 0) and the other fields are valid. Otherwise the
+        // detailed checks run, which refuse naming the first bad field.
+        final long spread = offset(t) | offset(rho) | offset(p) | offset(m) | offset(r) | offset(kappa)
+                | offset(cp) | offset(delta) | offset(alpha);
+        final double inf = Double.POSITIVE_INFINITY;
+        final boolean ordinary = ((spread >>> ORDINARY_SHIFT) == 0L) & (Math.abs(z.luminosity) < inf)
+                & (nablaAd > 0.0) & (nablaAd < 1.0) & (phi > 0.0) & (phi < inf) & (Math.abs(nablaMu) < inf);
+        if (!ordinary) {
+            check(z);
+        }
+
+        // The reciprocals of the inputs first, independent of the value chain, which is then products
+        // and two independent square roots up to U. On the normal path three reciprocals come from one
+        // division (1/x = y z / (x y z)), whose products cannot overflow or underflow there.
+        final double invT;
+        final double invRho;
+        final double invP;
+        final double invM;
+        final double invR;
+        final double invKappa;
+        final double invCp;
+        final double invDelta;
+        final double invAlpha;
+        if (ordinary) {
+            final double rhoP = rho * p;
+            final double invRhoPDelta = 1.0 / (rhoP * delta);
+            final double mR = m * r;
+            final double invMRT = 1.0 / (mR * t);
+            final double kappaCp = kappa * cp;
+            final double invKappaCpAlpha = 1.0 / (kappaCp * alpha);
+            invRho = (p * delta) * invRhoPDelta;
+            invP = (rho * delta) * invRhoPDelta;
+            invDelta = rhoP * invRhoPDelta;
+            invM = (r * t) * invMRT;
+            invR = (m * t) * invMRT;
+            invT = mR * invMRT;
+            invKappa = (cp * alpha) * invKappaCpAlpha;
+            invCp = (kappa * alpha) * invKappaCpAlpha;
+            invAlpha = kappaCp * invKappaCpAlpha;
+        } else {
+            invT = 1.0 / t;
+            invRho = 1.0 / rho;
+            invP = 1.0 / p;
+            invM = 1.0 / m;
+            invR = 1.0 / r;
+            invKappa = 1.0 / kappa;
+            invCp = 1.0 / cp;
+            invDelta = 1.0 / delta;
+            invAlpha = 1.0 / alpha;
+        }
 
         // nabla_rad per unit L, then nabla_rad: the same arithmetic as RadiativeGradient.valueAndDerivatives
         final double perL = RadiativeGradient.value(kappa, 1.0, p, m, t);
@@ -216,8 +258,20 @@ public final class MixingLengthZone {
         final double fourULoss2 = 4.0 * uLoss * uLoss;
         final double invFourULoss2 = 0.25 * invULoss * invULoss;
         final double s = w * invFourULoss2;
+        // 1/W and 1/nabla_rad from one division when their product is far from overflow and underflow
+        final double wNablaRad = w * nablaRad;
+        final double invW;
+        final double invNablaRad;
+        if (wNablaRad > 1e-300 && wNablaRad < 1e300) {
+            final double both = 1.0 / wNablaRad;
+            invW = nablaRad * both;
+            invNablaRad = w * both;
+        } else {
+            invW = 1.0 / w;
+            invNablaRad = 1.0 / nablaRad;
+        }
         // 1/S, ready before the root: with Gamma D = S it gives 1/Gamma = D / S without a division
-        final double invS = fourULoss2 / w;
+        final double invS = fourULoss2 * invW;
         final double gamma = regime == Regime.CONVECTIVE ? MixingLengthCubic.efficiency(a0, s) : 0.0;
         if (!(gamma > 0.0)) {
             RadiativeGradient.valueAndDerivatives(kappa, z.luminosity, p, m, t, out.dNabla);
@@ -225,9 +279,21 @@ public final class MixingLengthZone {
             return false;
         }
 
+        // D and the cubic's slope 3 a0 Gamma^2 + 2 Gamma + 1 are both >= 1: their reciprocals from one
+        // division unless the product is near overflow
         final double den = MixingLengthCubic.denominator(a0, gamma);
-        final double invDen = 1.0 / den;
-        final double invNablaRad = 1.0 / nablaRad;
+        final double slope = (3.0 * a0 * gamma + 2.0) * gamma + 1.0;
+        final double denSlope = den * slope;
+        final double invDen;
+        final double sensitivity;
+        if (denSlope < 1e300) {
+            final double both = 1.0 / denSlope;
+            invDen = slope * both;
+            sensitivity = den * both;
+        } else {
+            invDen = 1.0 / den;
+            sensitivity = 1.0 / slope;
+        }
         final double shareRad = a0 * gamma * gamma * invDen;    // (nabla_rad - nabla) / W
         final double shareSuper = (gamma + 1.0) * invDen;        // (nabla - nabla_ad) / W
         final double nabla = nablaAd + w * shareSuper;
@@ -246,8 +312,8 @@ public final class MixingLengthZone {
         double probe = 0.0;
         if (jacobian) {
             probe = convectiveJacobian(invT, invRho, invP, invM, invR, invKappa, invCp, invDelta, invAlpha, capped,
-                    2.0 * thin, nablaRad, invNablaRad, perL, w, a0, s, invFourULoss2,
-                    gamma, den * invS, invDen, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
+                    2.0 * thin, nablaRad, invNablaRad, perL, w, a0, s, invFourULoss2, gamma, den * invS, invDen,
+                    sensitivity, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
         }
         guard(z, out, probe);
         return jacobian && columns != null;
@@ -276,10 +342,10 @@ public final class MixingLengthZone {
                                            boolean capped, double lossElasticity, double nablaRad,
                                            double invNablaRad, double perL, double w, double a0, double s,
                                            double invFourULoss2, double gamma, double invGamma, double invDen,
+                                           double sensitivity,
                                            double shareRad, double shareSuper, double velocity, double convective,
                                            double diffusion, ConvectionResult out, ConvectionColumns columns,
                                            int k) {
-        final double sensitivity = MixingLengthCubic.sensitivity(a0, gamma);
 
         // dGamma = gR dR - gR dA + gMu mu + gNu nu
         final double gR = sensitivity * invFourULoss2;
@@ -444,6 +510,11 @@ public final class MixingLengthZone {
                     + put(out.dDiffusion, cDiffusion, ZoneInput.ALPHA, k, diffusion * (lnV + lambda));
         }
         return (probe0 + probe1) + (probe2 + probe3);
+    }
+
+    /** Bit pattern of x minus that of 2^-256: in [0, 2^61) exactly when 2^-256 &lt;= x &lt; 2^256. */
+    private static long offset(double x) {
+        return Double.doubleToRawLongBits(x) - ORDINARY_LOW;
     }
 
     /** Writes one Jacobian entry to the per-zone array or to zone k of the column; returns value * 0. */
