@@ -375,26 +375,25 @@ public final class MixingLengthZone {
         // d ln l / d ln q for H_P's inputs (0 when l = alpha r), and d ln q' of q = omega's share
         final double lengthHp = capped ? 0.0 : 1.0;
         final double le = lossElasticity;
-        final double[][] cNabla = columns == null ? null : columns.dNabla;
-        final double[][] cVelocity = columns == null ? null : columns.dVelocity;
-        final double[][] cConvective = columns == null ? null : columns.dConvectiveFraction;
-        final double[][] cDiffusion = columns == null ? null : columns.dDiffusion;
-        // four partial sums, so that the finite-value probe is a short tree rather than one long chain
-        double probe0 = 0.0;
-        double probe1 = 0.0;
-        double probe2 = 0.0;
-        double probe3 = 0.0;
-
+        // the 44 entries that can be nonzero, input by input: d nabla, d v, d(F_conv/F), d D
+        final double nablaT;
+        final double velT;
+        final double fracT;
+        final double diffT;
         // T: nabla_rad ~ T^-4, U ~ T^3
         {
             double dR = -4.0 * nablaRad * invT;
             double mu = 3.0 * invT;
             double lnV = vR * dR + vMu * mu;
-            probe0 += put(out.dNabla, cNabla, ZoneInput.T, k, nR * dR + nMu * mu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.T, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.T, k, cR * dR + cMu * mu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.T, k, diffusion * lnV);
+            nablaT = nR * dR + nMu * mu;
+            velT = velocity * lnV;
+            fracT = cR * dR + cMu * mu;
+            diffT = diffusion * lnV;
         }
+        final double nablaRho;
+        final double velRho;
+        final double fracRho;
+        final double diffRho;
         // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
         {
             double lambda = -lengthHp * invRho;
@@ -402,11 +401,15 @@ public final class MixingLengthZone {
             double mu = -2.5 * invRho - 2.0 * lambda + nu;
             double sigma = 0.5 * invRho;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            probe1 += put(out.dNabla, cNabla, ZoneInput.RHO, k, nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.RHO, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.RHO, k, cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.RHO, k, diffusion * (lnV + lambda));
+            nablaRho = nMu * mu + nNu * nu;
+            velRho = velocity * lnV;
+            fracRho = cMu * mu + cNu * nu;
+            diffRho = diffusion * (lnV + lambda);
         }
+        final double nablaP;
+        final double velP;
+        final double fracP;
+        final double diffP;
         // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
         {
             double dR = nablaRad * invP;
@@ -415,20 +418,28 @@ public final class MixingLengthZone {
             double mu = 0.5 * invP - 2.0 * lambda + nu;
             double sigma = -0.5 * invP;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            probe2 += put(out.dNabla, cNabla, ZoneInput.P, k, nR * dR + nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.P, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.P, k, cR * dR + cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.P, k, diffusion * (lnV + lambda));
+            nablaP = nR * dR + nMu * mu + nNu * nu;
+            velP = velocity * lnV;
+            fracP = cR * dR + cMu * mu + cNu * nu;
+            diffP = diffusion * (lnV + lambda);
         }
+        final double nablaL;
+        final double velL;
+        final double fracL;
+        final double diffL;
         // L: nabla_rad only
         {
             double dR = perL;
             double lnV = vR * dR;
-            probe3 += put(out.dNabla, cNabla, ZoneInput.L, k, nR * dR)
-                    + put(out.dVelocity, cVelocity, ZoneInput.L, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.L, k, cR * dR)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.L, k, diffusion * lnV);
+            nablaL = nR * dR;
+            velL = velocity * lnV;
+            fracL = cR * dR;
+            diffL = diffusion * lnV;
         }
+        final double nablaM;
+        final double velM;
+        final double fracM;
+        final double diffM;
         // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
         {
             double dR = -nablaRad * invM;
@@ -437,11 +448,15 @@ public final class MixingLengthZone {
             double mu = -invM - 2.0 * lambda + nu;
             double sigma = invM;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            probe0 += put(out.dNabla, cNabla, ZoneInput.M, k, nR * dR + nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.M, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.M, k, cR * dR + cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.M, k, diffusion * (lnV + lambda));
+            nablaM = nR * dR + nMu * mu + nNu * nu;
+            velM = velocity * lnV;
+            fracM = cR * dR + cMu * mu + cNu * nu;
+            diffM = diffusion * (lnV + lambda);
         }
+        final double nablaRadius;
+        final double velRadius;
+        final double fracRadius;
+        final double diffRadius;
         // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
         {
             double lambda = (1.0 + lengthHp) * invR;
@@ -449,67 +464,114 @@ public final class MixingLengthZone {
             double mu = 2.0 * invR - 2.0 * lambda + nu;
             double sigma = -2.0 * invR;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            probe1 += put(out.dNabla, cNabla, ZoneInput.R, k, nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.R, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.R, k, cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.R, k, diffusion * (lnV + lambda));
+            nablaRadius = nMu * mu + nNu * nu;
+            velRadius = velocity * lnV;
+            fracRadius = cMu * mu + cNu * nu;
+            diffRadius = diffusion * (lnV + lambda);
         }
+        final double nablaKappa;
+        final double velKappa;
+        final double fracKappa;
+        final double diffKappa;
         // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
         {
             double dR = nablaRad * invKappa;
             double nu = le * invKappa;
             double mu = -invKappa + nu;
             double lnV = vR * dR + vMu * mu + vNu * nu;
-            probe2 += put(out.dNabla, cNabla, ZoneInput.KAPPA, k, nR * dR + nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.KAPPA, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.KAPPA, k, cR * dR + cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.KAPPA, k, diffusion * lnV);
+            nablaKappa = nR * dR + nMu * mu + nNu * nu;
+            velKappa = velocity * lnV;
+            fracKappa = cR * dR + cMu * mu + cNu * nu;
+            diffKappa = diffusion * lnV;
         }
+        final double nablaCp;
+        final double velCp;
+        final double fracCp;
+        final double diffCp;
         // c_P: U ~ 1/c_P
         {
             double mu = -invCp;
             double lnV = vMu * mu;
-            probe3 += put(out.dNabla, cNabla, ZoneInput.CP, k, nMu * mu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.CP, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.CP, k, cMu * mu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.CP, k, diffusion * lnV);
+            nablaCp = nMu * mu;
+            velCp = velocity * lnV;
+            fracCp = cMu * mu;
+            diffCp = diffusion * lnV;
         }
+        final double nablaNablaAd;
+        final double velNablaAd;
+        final double fracNablaAd;
+        final double diffNablaAd;
         // nabla_ad: dA = 1
         {
             double lnV = -vR;
-            probe0 += put(out.dNabla, cNabla, ZoneInput.NABLA_AD, k, nA)
-                    + put(out.dVelocity, cVelocity, ZoneInput.NABLA_AD, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.NABLA_AD, k, cA)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.NABLA_AD, k, diffusion * lnV);
+            nablaNablaAd = nA;
+            velNablaAd = velocity * lnV;
+            fracNablaAd = cA;
+            diffNablaAd = diffusion * lnV;
         }
+        final double nablaDelta;
+        final double velDelta;
+        final double fracDelta;
+        final double diffDelta;
         // delta: U ~ delta^-1/2, sigma = +1/2
         {
             double mu = -0.5 * invDelta;
             double lnV = vMu * mu + 0.5 * invDelta;
-            probe1 += put(out.dNabla, cNabla, ZoneInput.DELTA, k, nMu * mu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.DELTA, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.DELTA, k, cMu * mu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.DELTA, k, diffusion * lnV);
+            nablaDelta = nMu * mu;
+            velDelta = velocity * lnV;
+            fracDelta = cMu * mu;
+            diffDelta = diffusion * lnV;
         }
-        // nabla_mu and phi do not enter a convective zone
-        for (int i = ZoneInput.NABLA_MU; i <= ZoneInput.PHI; i++) {
-            put(out.dNabla, cNabla, i, k, 0.0);
-            put(out.dVelocity, cVelocity, i, k, 0.0);
-            put(out.dConvectiveFraction, cConvective, i, k, 0.0);
-            put(out.dDiffusion, cDiffusion, i, k, 0.0);
-        }
+        final double nablaAlpha;
+        final double velAlpha;
+        final double fracAlpha;
+        final double diffAlpha;
         // alpha: l ~ alpha, U ~ l^-2, omega ~ l
         {
             double lambda = invAlpha;
             double nu = le * lambda;
             double mu = -2.0 * lambda + nu;
             double lnV = vMu * mu + vNu * nu + lambda;
-            probe2 += put(out.dNabla, cNabla, ZoneInput.ALPHA, k, nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.ALPHA, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.ALPHA, k, cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.ALPHA, k, diffusion * (lnV + lambda));
+            nablaAlpha = nMu * mu + nNu * nu;
+            velAlpha = velocity * lnV;
+            fracAlpha = cMu * mu + cNu * nu;
+            diffAlpha = diffusion * (lnV + lambda);
         }
-        return (probe0 + probe1) + (probe2 + probe3);
+        // nabla_mu and phi do not enter a convective zone. The stores follow in one straight run per
+        // destination, so that nothing branches between them.
+        if (columns == null) {
+            write(out.dNabla, nablaT, nablaRho, nablaP, nablaL, nablaM, nablaRadius, nablaKappa, nablaCp, nablaNablaAd,
+                    nablaDelta, nablaAlpha);
+            write(out.dVelocity, velT, velRho, velP, velL, velM, velRadius, velKappa, velCp, velNablaAd, velDelta,
+                    velAlpha);
+            write(out.dConvectiveFraction, fracT, fracRho, fracP, fracL, fracM, fracRadius, fracKappa, fracCp,
+                    fracNablaAd, fracDelta, fracAlpha);
+            write(out.dDiffusion, diffT, diffRho, diffP, diffL, diffM, diffRadius, diffKappa, diffCp, diffNablaAd,
+                    diffDelta, diffAlpha);
+        } else {
+            write(columns.dNabla, k, nablaT, nablaRho, nablaP, nablaL, nablaM, nablaRadius, nablaKappa, nablaCp,
+                    nablaNablaAd, nablaDelta, nablaAlpha);
+            write(columns.dVelocity, k, velT, velRho, velP, velL, velM, velRadius, velKappa, velCp, velNablaAd,
+                    velDelta, velAlpha);
+            write(columns.dConvectiveFraction, k, fracT, fracRho, fracP, fracL, fracM, fracRadius, fracKappa, fracCp,
+                    fracNablaAd, fracDelta, fracAlpha);
+            write(columns.dDiffusion, k, diffT, diffRho, diffP, diffL, diffM, diffRadius, diffKappa, diffCp,
+                    diffNablaAd, diffDelta, diffAlpha);
+        }
+        // sum of (entry * 0): NaN exactly when one entry is not finite; a short tree of sums
+        final double zeroT = (nablaT * 0.0 + velT * 0.0) + (fracT * 0.0 + diffT * 0.0);
+        final double zeroRho = (nablaRho * 0.0 + velRho * 0.0) + (fracRho * 0.0 + diffRho * 0.0);
+        final double zeroP = (nablaP * 0.0 + velP * 0.0) + (fracP * 0.0 + diffP * 0.0);
+        final double zeroL = (nablaL * 0.0 + velL * 0.0) + (fracL * 0.0 + diffL * 0.0);
+        final double zeroM = (nablaM * 0.0 + velM * 0.0) + (fracM * 0.0 + diffM * 0.0);
+        final double zeroRadius = (nablaRadius * 0.0 + velRadius * 0.0) + (fracRadius * 0.0 + diffRadius * 0.0);
+        final double zeroKappa = (nablaKappa * 0.0 + velKappa * 0.0) + (fracKappa * 0.0 + diffKappa * 0.0);
+        final double zeroCp = (nablaCp * 0.0 + velCp * 0.0) + (fracCp * 0.0 + diffCp * 0.0);
+        final double zeroNablaAd = (nablaNablaAd * 0.0 + velNablaAd * 0.0) + (fracNablaAd * 0.0 + diffNablaAd * 0.0);
+        final double zeroDelta = (nablaDelta * 0.0 + velDelta * 0.0) + (fracDelta * 0.0 + diffDelta * 0.0);
+        final double zeroAlpha = (nablaAlpha * 0.0 + velAlpha * 0.0) + (fracAlpha * 0.0 + diffAlpha * 0.0);
+        return ((((zeroT + zeroRho) + (zeroP + zeroL)) + ((zeroM + zeroRadius) + (zeroKappa + zeroCp)))
+                + ((zeroNablaAd + zeroDelta) + zeroAlpha));
     }
 
     /** Bit pattern of x minus that of 2^-256: in [0, 2^61) exactly when 2^-256 &lt;= x &lt; 2^256. */
@@ -517,14 +579,40 @@ public final class MixingLengthZone {
         return Double.doubleToRawLongBits(x) - ORDINARY_LOW;
     }
 
-    /** Writes one Jacobian entry to the per-zone array or to zone k of the column; returns value * 0. */
-    private static double put(double[] flat, double[][] columns, int i, int k, double value) {
-        if (columns == null) {
-            flat[i] = value;
-        } else {
-            columns[i][k] = value;
-        }
-        return value * 0.0;
+    /** Writes one output's Jacobian row in {@link ZoneInput} order, with 0 for nabla_mu and phi. */
+    private static void write(double[] d, double t, double rho, double p, double l, double m, double r,
+                              double kappa, double cp, double nablaAd, double delta, double alpha) {
+        d[ZoneInput.ALPHA] = alpha;
+        d[ZoneInput.T] = t;
+        d[ZoneInput.RHO] = rho;
+        d[ZoneInput.P] = p;
+        d[ZoneInput.L] = l;
+        d[ZoneInput.M] = m;
+        d[ZoneInput.R] = r;
+        d[ZoneInput.KAPPA] = kappa;
+        d[ZoneInput.CP] = cp;
+        d[ZoneInput.NABLA_AD] = nablaAd;
+        d[ZoneInput.DELTA] = delta;
+        d[ZoneInput.NABLA_MU] = 0.0;
+        d[ZoneInput.PHI] = 0.0;
+    }
+
+    /** Writes one output's Jacobian entries into zone k of its columns, with 0 for nabla_mu and phi. */
+    private static void write(double[][] c, int k, double t, double rho, double p, double l, double m, double r,
+                              double kappa, double cp, double nablaAd, double delta, double alpha) {
+        c[ZoneInput.T][k] = t;
+        c[ZoneInput.RHO][k] = rho;
+        c[ZoneInput.P][k] = p;
+        c[ZoneInput.L][k] = l;
+        c[ZoneInput.M][k] = m;
+        c[ZoneInput.R][k] = r;
+        c[ZoneInput.KAPPA][k] = kappa;
+        c[ZoneInput.CP][k] = cp;
+        c[ZoneInput.NABLA_AD][k] = nablaAd;
+        c[ZoneInput.DELTA][k] = delta;
+        c[ZoneInput.NABLA_MU][k] = 0.0;
+        c[ZoneInput.PHI][k] = 0.0;
+        c[ZoneInput.ALPHA][k] = alpha;
     }
 
     /**
