@@ -255,7 +255,6 @@ public final class MixingLengthZone {
         final double uLoss = q * u;
         final double invULoss = invQ * invU;
         final double a0 = q * geometry.cubicCoefficient();
-        final double fourULoss2 = 4.0 * uLoss * uLoss;
         final double invFourULoss2 = 0.25 * invULoss * invULoss;
         final double s = w * invFourULoss2;
         // 1/W and 1/nabla_rad from one division when their product is far from overflow and underflow
@@ -270,8 +269,6 @@ public final class MixingLengthZone {
             invW = 1.0 / w;
             invNablaRad = 1.0 / nablaRad;
         }
-        // 1/S, ready before the root: with Gamma D = S it gives 1/Gamma = D / S without a division
-        final double invS = fourULoss2 * invW;
         final double gamma = regime == Regime.CONVECTIVE ? MixingLengthCubic.efficiency(a0, s) : 0.0;
         if (!(gamma > 0.0)) {
             RadiativeGradient.valueAndDerivatives(kappa, z.luminosity, p, m, t, out.dNabla);
@@ -294,7 +291,8 @@ public final class MixingLengthZone {
             invDen = 1.0 / den;
             sensitivity = 1.0 / slope;
         }
-        final double shareRad = a0 * gamma * gamma * invDen;    // (nabla_rad - nabla) / W
+        final double a0Gamma2 = a0 * (gamma * gamma);
+        final double shareRad = a0Gamma2 * invDen;               // (nabla_rad - nabla) / W
         final double shareSuper = (gamma + 1.0) * invDen;        // (nabla - nabla_ad) / W
         final double nabla = nablaAd + w * shareSuper;
         final double x = 2.0 * uLoss * gamma;
@@ -312,8 +310,8 @@ public final class MixingLengthZone {
         double probe = 0.0;
         if (jacobian) {
             probe = convectiveJacobian(invT, invRho, invP, invM, invR, invKappa, invCp, invDelta, invAlpha, capped,
-                    2.0 * thin, nablaRad, invNablaRad, perL, w, a0, s, invFourULoss2, gamma, den * invS, invDen,
-                    sensitivity, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
+                    2.0 * thin, nablaRad, invNablaRad, invW, perL, w, a0, s, invFourULoss2, gamma, a0Gamma2, den,
+                    invDen, sensitivity, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
         }
         guard(z, out, probe);
         return jacobian && columns != null;
@@ -340,31 +338,35 @@ public final class MixingLengthZone {
     private static double convectiveJacobian(double invT, double invRho, double invP, double invM, double invR,
                                            double invKappa, double invCp, double invDelta, double invAlpha,
                                            boolean capped, double lossElasticity, double nablaRad,
-                                           double invNablaRad, double perL, double w, double a0, double s,
-                                           double invFourULoss2, double gamma, double invGamma, double invDen,
-                                           double sensitivity,
+                                           double invNablaRad, double invW, double perL, double w, double a0,
+                                           double s, double invFourULoss2, double gamma, double a0Gamma2,
+                                           double den, double invDen, double sensitivity,
                                            double shareRad, double shareSuper, double velocity, double convective,
                                            double diffusion, ConvectionResult out, ConvectionColumns columns,
                                            int k) {
 
-        // dGamma = gR dR - gR dA + gMu mu + gNu nu
+        // dGamma = gR dR - gR dA + gMu mu + gNu nu (products grouped so that the factors that
+        // depend on Gamma alone are ready while 1/D and the sensitivity are divided)
         final double gR = sensitivity * invFourULoss2;
-        final double gMu = -2.0 * s * sensitivity;
-        final double gNu = -sensitivity * gamma * gamma * gamma * a0;
+        final double gMu = sensitivity * (-2.0 * s);
+        final double gNu = sensitivity * -(a0Gamma2 * gamma);
         // d(shareRad) = sR (dR - dA) + sMu mu + sNu nu
-        final double shareSlope = a0 * gamma * (gamma + 2.0) * invDen * invDen;
+        final double invDen2 = invDen * invDen;
+        final double shareSlope = (a0 * gamma * (gamma + 2.0)) * invDen2;
         final double sR = shareSlope * gR;
         final double sMu = shareSlope * gMu;
-        final double sNu = a0 * gamma * gamma * (gamma + 1.0) * invDen * invDen + shareSlope * gNu;
+        final double sNu = (a0Gamma2 * (gamma + 1.0)) * invDen2 + shareSlope * gNu;
         // d nabla = nR dR + nA dA + nMu mu + nNu nu
         final double nR = shareSuper - w * sR;
         final double nA = shareRad + w * sR;
         final double nMu = -w * sMu;
         final double nNu = -w * sNu;
-        // d ln v = vR dR - vR dA + vMu mu + vNu nu + lambda + sigma
-        final double vR = gR * invGamma;
-        final double vMu = 1.0 + gMu * invGamma;
-        final double vNu = gNu * invGamma;
+        // d ln v = vR dR - vR dA + vMu mu + vNu nu + lambda + sigma, with the g's over Gamma written
+        // by S = Gamma D and S = W / (4 U'^2): gR / Gamma = sensitivity D / W, gMu / Gamma =
+        // -2 sensitivity D, gNu / Gamma = -sensitivity a0 Gamma^2
+        final double vR = sensitivity * (den * invW);
+        final double vMu = 1.0 - 2.0 * (sensitivity * den);
+        final double vNu = sensitivity * -a0Gamma2;
         // d(F_conv/F) = cR dR + cA dA + cMu mu + cNu nu
         final double cR = (shareRad + w * sR - convective) * invNablaRad;
         final double cA = -nA * invNablaRad;
