@@ -269,7 +269,10 @@ public final class MixingLengthZone {
             invW = 1.0 / w;
             invNablaRad = 1.0 / nablaRad;
         }
-        final double gamma = regime == Regime.CONVECTIVE ? MixingLengthCubic.efficiency(a0, s) : 0.0;
+        // without the transparency correction a0 is the geometry's constant, whose start table applies
+        final double gamma = regime != Regime.CONVECTIVE ? 0.0
+                : transparent ? MixingLengthCubic.efficiency(a0, s)
+                : MixingLengthCubic.efficiency(a0, s, geometry.cubicStarts());
         if (!(gamma > 0.0)) {
             RadiativeGradient.valueAndDerivatives(kappa, z.luminosity, p, m, t, out.dNabla);
             stable(z, regime, nablaRad, semiconvection, thermohaline, out);
