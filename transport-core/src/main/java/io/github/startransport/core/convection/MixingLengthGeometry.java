@@ -30,17 +30,34 @@ public enum MixingLengthGeometry {
     private final double flux;
     private final double loss;
     private final double coefficient;
+    private final double rootVelocity;
+    private final double[] starts;
 
     MixingLengthGeometry(double velocity, double flux, double loss) {
         this.velocity = velocity;
         this.flux = flux;
         this.loss = loss;
         this.coefficient = 3.0 * flux * loss / 16.0;
+        this.rootVelocity = Math.sqrt(velocity);
+        this.starts = MixingLengthCubic.startTable(coefficient);
     }
 
     /** @return a, the factor of the velocity relation (dimensionless) */
     public double velocityFactor() {
         return velocity;
+    }
+
+    /** @return sqrt(a) (dimensionless), kept so that a zone's solve takes no square root of a constant */
+    double rootVelocityFactor() {
+        return rootVelocity;
+    }
+
+    /**
+     * @return the start table of {@link MixingLengthCubic#startTable(double)} for a0 = {@link #cubicCoefficient()}
+     *         (not to be modified)
+     */
+    double[] cubicStarts() {
+        return starts;
     }
 
     /** @return b, the factor of the convective flux (dimensionless) */

@@ -58,6 +58,10 @@ public final class MixingLengthZone {
 
     private static final double G = Codata2018.GRAVITATIONAL_CONSTANT;
     private static final double SIGMA = Codata2018.STEFAN_BOLTZMANN;
+    private static final double INV_G = 1.0 / G;
+    /** Bit pattern of 2^-256: {@link #offset} maps [2^-256, 2^256) onto [0, 2^61). */
+    private static final long ORDINARY_LOW = 767L << 52;
+    private static final int ORDINARY_SHIFT = 61;
 
     /**
      * Validates the zone fields the convection models read: those of the stability test plus
@@ -67,9 +71,26 @@ public final class MixingLengthZone {
      * @throws io.github.startransport.spi.InvalidInputException naming the first bad field
      */
     public static void check(ZoneState z) {
-        ZoneChecks.forStability(z);
-        Checks.positive("radius", z.radius, "cm", z.zone);
-        Checks.positive("cp", z.cp, "erg g^-1 K^-1", z.zone);
+        // one combined test on the normal path; the detailed checks (which name the first bad field)
+        // only when it fails, so the refusal is exactly theirs
+        final double inf = Double.POSITIVE_INFINITY;
+        final boolean ok = (z.temperature > 0.0) & (z.temperature < inf)
+                & (z.density > 0.0) & (z.density < inf)
+                & (z.pressure > 0.0) & (z.pressure < inf)
+                & (Math.abs(z.luminosity) < inf)
+                & (z.mass > 0.0) & (z.mass < inf)
+                & (z.opacity > 0.0) & (z.opacity < inf)
+                & (z.nablaAd > 0.0) & (z.nablaAd < 1.0)
+                & (z.delta > 0.0) & (z.delta < inf)
+                & (z.phi > 0.0) & (z.phi < inf)
+                & (Math.abs(z.nablaMu) < inf)
+                & (z.radius > 0.0) & (z.radius < inf)
+                & (z.cp > 0.0) & (z.cp < inf);
+        if (!ok) {
+            ZoneChecks.forStability(z);
+            Checks.positive("radius", z.radius, "cm", z.zone);
+            Checks.positive("cp", z.cp, "erg g^-1 K^-1", z.zone);
+        }
     }
 
     /**
@@ -128,7 +149,6 @@ public final class MixingLengthZone {
     static boolean solve(ZoneState z, double alpha, MixingLengthGeometry geometry, double eddyShape,
                          CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
                          ConvectionResult out, boolean jacobian, ConvectionColumns columns, int k) {
-        check(z);
         final double t = z.temperature;
         final double rho = z.density;
         final double p = z.pressure;
@@ -141,16 +161,80 @@ public final class MixingLengthZone {
         final double nablaMu = z.nablaMu;
         final double phi = z.phi;
 
+        // Normal path: every input that is inverted lies in [2^-256, 2^256) (one test on the bit
+        // patterns, which also proves it finite and > 0) and the other fields are valid. Otherwise the
+        // detailed checks run, which refuse naming the first bad field.
+        final long spread = offset(t) | offset(rho) | offset(p) | offset(m) | offset(r) | offset(kappa)
+                | offset(cp) | offset(delta) | offset(alpha);
+        final double inf = Double.POSITIVE_INFINITY;
+        final boolean ordinary = ((spread >>> ORDINARY_SHIFT) == 0L) & (Math.abs(z.luminosity) < inf)
+                & (nablaAd > 0.0) & (nablaAd < 1.0) & (phi > 0.0) & (phi < inf) & (Math.abs(nablaMu) < inf);
+        if (!ordinary) {
+            check(z);
+        }
+
+        // The reciprocals of the inputs first, independent of the value chain, which is then products
+        // and two independent square roots up to U. On the normal path three reciprocals come from one
+        // division (1/x = y z / (x y z)), whose products cannot overflow or underflow there.
+        final double invT;
+        final double invRho;
+        final double invP;
+        final double invM;
+        final double invR;
+        final double invKappa;
+        final double invCp;
+        final double invDelta;
+        final double invAlpha;
+        if (ordinary) {
+            final double rhoP = rho * p;
+            final double invRhoPDelta = 1.0 / (rhoP * delta);
+            final double mR = m * r;
+            final double invMRT = 1.0 / (mR * t);
+            final double kappaCp = kappa * cp;
+            final double invKappaCpAlpha = 1.0 / (kappaCp * alpha);
+            invRho = (p * delta) * invRhoPDelta;
+            invP = (rho * delta) * invRhoPDelta;
+            invDelta = rhoP * invRhoPDelta;
+            invM = (r * t) * invMRT;
+            invR = (m * t) * invMRT;
+            invT = mR * invMRT;
+            invKappa = (cp * alpha) * invKappaCpAlpha;
+            invCp = (kappa * alpha) * invKappaCpAlpha;
+            invAlpha = kappaCp * invKappaCpAlpha;
+        } else {
+            invT = 1.0 / t;
+            invRho = 1.0 / rho;
+            invP = 1.0 / p;
+            invM = 1.0 / m;
+            invR = 1.0 / r;
+            invKappa = 1.0 / kappa;
+            invCp = 1.0 / cp;
+            invDelta = 1.0 / delta;
+            invAlpha = 1.0 / alpha;
+        }
+
         // nabla_rad per unit L, then nabla_rad: the same arithmetic as RadiativeGradient.valueAndDerivatives
         final double perL = RadiativeGradient.value(kappa, 1.0, p, m, t);
         final double nablaRad = perL * z.luminosity;
-        final double gravity = G * m / (r * r);
-        final double scaleHeight = p / (rho * gravity);
+        // g = G m / r^2 and 1/g; H_P = (P / rho) / g and 1/H_P
+        final double gravity = (G * m) * (invR * invR);
+        final double invGravity = (r * r) * (invM * INV_G);
+        final double pressureHeight = p * invRho;
+        final double scaleHeight = pressureHeight * invGravity;
         final boolean capped = limit == CentreLimit.RADIUS && r < scaleHeight;
         final double length = alpha * (capped ? r : scaleHeight);
-        final double a = geometry.velocityFactor();
-        final double u = geometry.lossFactor() * SIGMA * t * t * t * Math.sqrt(scaleHeight / (a * gravity * delta))
-                / (2.0 * cp * kappa * rho * rho * length * length);
+        // sqrt(H_P / (a g delta)) = sqrt(P / (rho delta)) / (g sqrt(a)) and its inverse, the velocity
+        // scale sqrt(a g delta / H_P) = g sqrt(a) sqrt(delta rho / P): two independent roots
+        final double rootA = geometry.rootVelocityFactor();
+        final double thermal = Math.sqrt(pressureHeight * invDelta);
+        final double buoyant = Math.sqrt((delta * rho) * invP);
+        final double velocityScale = gravity * (rootA * buoyant);
+        // U = c sigma T^3 sqrt(H_P / (a g delta)) / (2 c_P kappa rho^2 l^2) as numerator / denominator,
+        // so that U and 1/U are two independent divisions
+        final double uNumerator = geometry.lossFactor() * SIGMA * t * t * t * (thermal * invGravity);
+        final double uDenominator = 2.0 * rootA * cp * kappa * rho * rho * length * length;
+        final double u = uNumerator / uDenominator;
+        final double invU = uDenominator / uNumerator;
         final double nablaL = LedouxGradient.value(nablaAd, phi, delta, nablaMu);
         final Regime regime = StabilityClassifier.classify(criterion, nablaRad, nablaAd, nablaL, nablaMu);
 
@@ -164,24 +248,56 @@ public final class MixingLengthZone {
         final boolean transparent = eddyShape > 0.0;
         final double omega = kappa * rho * length;
         final double yw2 = eddyShape * omega * omega;
-        final double q = transparent ? yw2 / (1.0 + yw2) : 1.0;
+        // q = y omega^2 / (1 + y omega^2) and 1/q = 1 + 1/(y omega^2), independent of each other
+        final double thin = transparent ? 1.0 / (1.0 + yw2) : 0.0;
+        final double q = transparent ? yw2 * thin : 1.0;
+        final double invQ = transparent ? 1.0 + 1.0 / yw2 : 1.0;
         final double uLoss = q * u;
+        final double invULoss = invQ * invU;
         final double a0 = q * geometry.cubicCoefficient();
-        final double s = w / (4.0 * uLoss * uLoss);
-        final double gamma = regime == Regime.CONVECTIVE ? MixingLengthCubic.efficiency(a0, s) : 0.0;
+        final double invFourULoss2 = 0.25 * invULoss * invULoss;
+        final double s = w * invFourULoss2;
+        // 1/W and 1/nabla_rad from one division when their product is far from overflow and underflow
+        final double wNablaRad = w * nablaRad;
+        final double invW;
+        final double invNablaRad;
+        if (wNablaRad > 1e-300 && wNablaRad < 1e300) {
+            final double both = 1.0 / wNablaRad;
+            invW = nablaRad * both;
+            invNablaRad = w * both;
+        } else {
+            invW = 1.0 / w;
+            invNablaRad = 1.0 / nablaRad;
+        }
+        // without the transparency correction a0 is the geometry's constant, whose start table applies
+        final double gamma = regime != Regime.CONVECTIVE ? 0.0
+                : transparent ? MixingLengthCubic.efficiency(a0, s)
+                : MixingLengthCubic.efficiency(a0, s, geometry.cubicStarts());
         if (!(gamma > 0.0)) {
             RadiativeGradient.valueAndDerivatives(kappa, z.luminosity, p, m, t, out.dNabla);
             stable(z, regime, nablaRad, semiconvection, thermohaline, out);
             return false;
         }
 
+        // D and the cubic's slope 3 a0 Gamma^2 + 2 Gamma + 1 are both >= 1: their reciprocals from one
+        // division unless the product is near overflow
         final double den = MixingLengthCubic.denominator(a0, gamma);
-        final double invDen = 1.0 / den;
-        final double invNablaRad = 1.0 / nablaRad;
-        final double shareRad = a0 * gamma * gamma * invDen;    // (nabla_rad - nabla) / W
+        final double slope = (3.0 * a0 * gamma + 2.0) * gamma + 1.0;
+        final double denSlope = den * slope;
+        final double invDen;
+        final double sensitivity;
+        if (denSlope < 1e300) {
+            final double both = 1.0 / denSlope;
+            invDen = slope * both;
+            sensitivity = den * both;
+        } else {
+            invDen = 1.0 / den;
+            sensitivity = 1.0 / slope;
+        }
+        final double a0Gamma2 = a0 * (gamma * gamma);
+        final double shareRad = a0Gamma2 * invDen;               // (nabla_rad - nabla) / W
         final double shareSuper = (gamma + 1.0) * invDen;        // (nabla - nabla_ad) / W
         final double nabla = nablaAd + w * shareSuper;
-        final double velocityScale = Math.sqrt(a * gravity * delta / scaleHeight);
         final double x = 2.0 * uLoss * gamma;
         final double velocity = length * velocityScale * x;
         final double convective = w * shareRad * invNablaRad;
@@ -196,9 +312,9 @@ public final class MixingLengthZone {
         out.diffusion = diffusion;
         double probe = 0.0;
         if (jacobian) {
-            probe = convectiveJacobian(t, rho, p, m, r, kappa, cp, delta, alpha, capped,
-                    transparent ? 2.0 / (1.0 + yw2) : 0.0, nablaRad, invNablaRad, perL, w, a0, s, uLoss, gamma,
-                    invDen, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
+            probe = convectiveJacobian(invT, invRho, invP, invM, invR, invKappa, invCp, invDelta, invAlpha, capped,
+                    2.0 * thin, nablaRad, invNablaRad, invW, perL, w, a0, s, invFourULoss2, gamma, a0Gamma2, den,
+                    invDen, sensitivity, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
         }
         guard(z, out, probe);
         return jacobian && columns != null;
@@ -222,44 +338,38 @@ public final class MixingLengthZone {
      * only. The values go to {@code out}'s arrays, or to zone k of {@code columns} when that is
      * not null, by the same arithmetic (bit-identical either way).
      */
-    private static double convectiveJacobian(double t, double rho, double p, double m, double r, double kappa,
-                                           double cp, double delta, double alpha, boolean capped,
-                                           double lossElasticity, double nablaRad, double invNablaRad, double perL,
-                                           double w, double a0, double s, double uLoss, double gamma, double invDen,
+    private static double convectiveJacobian(double invT, double invRho, double invP, double invM, double invR,
+                                           double invKappa, double invCp, double invDelta, double invAlpha,
+                                           boolean capped, double lossElasticity, double nablaRad,
+                                           double invNablaRad, double invW, double perL, double w, double a0,
+                                           double s, double invFourULoss2, double gamma, double a0Gamma2,
+                                           double den, double invDen, double sensitivity,
                                            double shareRad, double shareSuper, double velocity, double convective,
                                            double diffusion, ConvectionResult out, ConvectionColumns columns,
                                            int k) {
-        final double invT = 1.0 / t;
-        final double invRho = 1.0 / rho;
-        final double invP = 1.0 / p;
-        final double invM = 1.0 / m;
-        final double invR = 1.0 / r;
-        final double invKappa = 1.0 / kappa;
-        final double invCp = 1.0 / cp;
-        final double invDelta = 1.0 / delta;
-        final double invAlpha = 1.0 / alpha;
-        final double invGamma = 1.0 / gamma;
-        final double sensitivity = MixingLengthCubic.sensitivity(a0, gamma);
-        final double invFourULoss2 = 1.0 / (4.0 * uLoss * uLoss);
 
-        // dGamma = gR dR - gR dA + gMu mu + gNu nu
+        // dGamma = gR dR - gR dA + gMu mu + gNu nu (products grouped so that the factors that
+        // depend on Gamma alone are ready while 1/D and the sensitivity are divided)
         final double gR = sensitivity * invFourULoss2;
-        final double gMu = -2.0 * s * sensitivity;
-        final double gNu = -sensitivity * gamma * gamma * gamma * a0;
+        final double gMu = sensitivity * (-2.0 * s);
+        final double gNu = sensitivity * -(a0Gamma2 * gamma);
         // d(shareRad) = sR (dR - dA) + sMu mu + sNu nu
-        final double shareSlope = a0 * gamma * (gamma + 2.0) * invDen * invDen;
+        final double invDen2 = invDen * invDen;
+        final double shareSlope = (a0 * gamma * (gamma + 2.0)) * invDen2;
         final double sR = shareSlope * gR;
         final double sMu = shareSlope * gMu;
-        final double sNu = a0 * gamma * gamma * (gamma + 1.0) * invDen * invDen + shareSlope * gNu;
+        final double sNu = (a0Gamma2 * (gamma + 1.0)) * invDen2 + shareSlope * gNu;
         // d nabla = nR dR + nA dA + nMu mu + nNu nu
         final double nR = shareSuper - w * sR;
         final double nA = shareRad + w * sR;
         final double nMu = -w * sMu;
         final double nNu = -w * sNu;
-        // d ln v = vR dR - vR dA + vMu mu + vNu nu + lambda + sigma
-        final double vR = gR * invGamma;
-        final double vMu = 1.0 + gMu * invGamma;
-        final double vNu = gNu * invGamma;
+        // d ln v = vR dR - vR dA + vMu mu + vNu nu + lambda + sigma, with the g's over Gamma written
+        // by S = Gamma D and S = W / (4 U'^2): gR / Gamma = sensitivity D / W, gMu / Gamma =
+        // -2 sensitivity D, gNu / Gamma = -sensitivity a0 Gamma^2
+        final double vR = sensitivity * (den * invW);
+        final double vMu = 1.0 - 2.0 * (sensitivity * den);
+        final double vNu = sensitivity * -a0Gamma2;
         // d(F_conv/F) = cR dR + cA dA + cMu mu + cNu nu
         final double cR = (shareRad + w * sR - convective) * invNablaRad;
         final double cA = -nA * invNablaRad;
@@ -270,22 +380,25 @@ public final class MixingLengthZone {
         // d ln l / d ln q for H_P's inputs (0 when l = alpha r), and d ln q' of q = omega's share
         final double lengthHp = capped ? 0.0 : 1.0;
         final double le = lossElasticity;
-        final double[][] cNabla = columns == null ? null : columns.dNabla;
-        final double[][] cVelocity = columns == null ? null : columns.dVelocity;
-        final double[][] cConvective = columns == null ? null : columns.dConvectiveFraction;
-        final double[][] cDiffusion = columns == null ? null : columns.dDiffusion;
-        double probe = 0.0;
-
+        // the 44 entries that can be nonzero, input by input: d nabla, d v, d(F_conv/F), d D
+        final double nablaT;
+        final double velT;
+        final double fracT;
+        final double diffT;
         // T: nabla_rad ~ T^-4, U ~ T^3
         {
             double dR = -4.0 * nablaRad * invT;
             double mu = 3.0 * invT;
             double lnV = vR * dR + vMu * mu;
-            probe += put(out.dNabla, cNabla, ZoneInput.T, k, nR * dR + nMu * mu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.T, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.T, k, cR * dR + cMu * mu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.T, k, diffusion * lnV);
+            nablaT = nR * dR + nMu * mu;
+            velT = velocity * lnV;
+            fracT = cR * dR + cMu * mu;
+            diffT = diffusion * lnV;
         }
+        final double nablaRho;
+        final double velRho;
+        final double fracRho;
+        final double diffRho;
         // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
         {
             double lambda = -lengthHp * invRho;
@@ -293,11 +406,15 @@ public final class MixingLengthZone {
             double mu = -2.5 * invRho - 2.0 * lambda + nu;
             double sigma = 0.5 * invRho;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, cNabla, ZoneInput.RHO, k, nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.RHO, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.RHO, k, cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.RHO, k, diffusion * (lnV + lambda));
+            nablaRho = nMu * mu + nNu * nu;
+            velRho = velocity * lnV;
+            fracRho = cMu * mu + cNu * nu;
+            diffRho = diffusion * (lnV + lambda);
         }
+        final double nablaP;
+        final double velP;
+        final double fracP;
+        final double diffP;
         // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
         {
             double dR = nablaRad * invP;
@@ -306,20 +423,28 @@ public final class MixingLengthZone {
             double mu = 0.5 * invP - 2.0 * lambda + nu;
             double sigma = -0.5 * invP;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, cNabla, ZoneInput.P, k, nR * dR + nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.P, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.P, k, cR * dR + cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.P, k, diffusion * (lnV + lambda));
+            nablaP = nR * dR + nMu * mu + nNu * nu;
+            velP = velocity * lnV;
+            fracP = cR * dR + cMu * mu + cNu * nu;
+            diffP = diffusion * (lnV + lambda);
         }
+        final double nablaL;
+        final double velL;
+        final double fracL;
+        final double diffL;
         // L: nabla_rad only
         {
             double dR = perL;
             double lnV = vR * dR;
-            probe += put(out.dNabla, cNabla, ZoneInput.L, k, nR * dR)
-                    + put(out.dVelocity, cVelocity, ZoneInput.L, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.L, k, cR * dR)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.L, k, diffusion * lnV);
+            nablaL = nR * dR;
+            velL = velocity * lnV;
+            fracL = cR * dR;
+            diffL = diffusion * lnV;
         }
+        final double nablaM;
+        final double velM;
+        final double fracM;
+        final double diffM;
         // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
         {
             double dR = -nablaRad * invM;
@@ -328,11 +453,15 @@ public final class MixingLengthZone {
             double mu = -invM - 2.0 * lambda + nu;
             double sigma = invM;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, cNabla, ZoneInput.M, k, nR * dR + nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.M, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.M, k, cR * dR + cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.M, k, diffusion * (lnV + lambda));
+            nablaM = nR * dR + nMu * mu + nNu * nu;
+            velM = velocity * lnV;
+            fracM = cR * dR + cMu * mu + cNu * nu;
+            diffM = diffusion * (lnV + lambda);
         }
+        final double nablaRadius;
+        final double velRadius;
+        final double fracRadius;
+        final double diffRadius;
         // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
         {
             double lambda = (1.0 + lengthHp) * invR;
@@ -340,77 +469,155 @@ public final class MixingLengthZone {
             double mu = 2.0 * invR - 2.0 * lambda + nu;
             double sigma = -2.0 * invR;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            probe += put(out.dNabla, cNabla, ZoneInput.R, k, nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.R, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.R, k, cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.R, k, diffusion * (lnV + lambda));
+            nablaRadius = nMu * mu + nNu * nu;
+            velRadius = velocity * lnV;
+            fracRadius = cMu * mu + cNu * nu;
+            diffRadius = diffusion * (lnV + lambda);
         }
+        final double nablaKappa;
+        final double velKappa;
+        final double fracKappa;
+        final double diffKappa;
         // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
         {
             double dR = nablaRad * invKappa;
             double nu = le * invKappa;
             double mu = -invKappa + nu;
             double lnV = vR * dR + vMu * mu + vNu * nu;
-            probe += put(out.dNabla, cNabla, ZoneInput.KAPPA, k, nR * dR + nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.KAPPA, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.KAPPA, k, cR * dR + cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.KAPPA, k, diffusion * lnV);
+            nablaKappa = nR * dR + nMu * mu + nNu * nu;
+            velKappa = velocity * lnV;
+            fracKappa = cR * dR + cMu * mu + cNu * nu;
+            diffKappa = diffusion * lnV;
         }
+        final double nablaCp;
+        final double velCp;
+        final double fracCp;
+        final double diffCp;
         // c_P: U ~ 1/c_P
         {
             double mu = -invCp;
             double lnV = vMu * mu;
-            probe += put(out.dNabla, cNabla, ZoneInput.CP, k, nMu * mu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.CP, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.CP, k, cMu * mu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.CP, k, diffusion * lnV);
+            nablaCp = nMu * mu;
+            velCp = velocity * lnV;
+            fracCp = cMu * mu;
+            diffCp = diffusion * lnV;
         }
+        final double nablaNablaAd;
+        final double velNablaAd;
+        final double fracNablaAd;
+        final double diffNablaAd;
         // nabla_ad: dA = 1
         {
             double lnV = -vR;
-            probe += put(out.dNabla, cNabla, ZoneInput.NABLA_AD, k, nA)
-                    + put(out.dVelocity, cVelocity, ZoneInput.NABLA_AD, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.NABLA_AD, k, cA)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.NABLA_AD, k, diffusion * lnV);
+            nablaNablaAd = nA;
+            velNablaAd = velocity * lnV;
+            fracNablaAd = cA;
+            diffNablaAd = diffusion * lnV;
         }
+        final double nablaDelta;
+        final double velDelta;
+        final double fracDelta;
+        final double diffDelta;
         // delta: U ~ delta^-1/2, sigma = +1/2
         {
             double mu = -0.5 * invDelta;
             double lnV = vMu * mu + 0.5 * invDelta;
-            probe += put(out.dNabla, cNabla, ZoneInput.DELTA, k, nMu * mu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.DELTA, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.DELTA, k, cMu * mu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.DELTA, k, diffusion * lnV);
+            nablaDelta = nMu * mu;
+            velDelta = velocity * lnV;
+            fracDelta = cMu * mu;
+            diffDelta = diffusion * lnV;
         }
-        // nabla_mu and phi do not enter a convective zone
-        for (int i = ZoneInput.NABLA_MU; i <= ZoneInput.PHI; i++) {
-            put(out.dNabla, cNabla, i, k, 0.0);
-            put(out.dVelocity, cVelocity, i, k, 0.0);
-            put(out.dConvectiveFraction, cConvective, i, k, 0.0);
-            put(out.dDiffusion, cDiffusion, i, k, 0.0);
-        }
+        final double nablaAlpha;
+        final double velAlpha;
+        final double fracAlpha;
+        final double diffAlpha;
         // alpha: l ~ alpha, U ~ l^-2, omega ~ l
         {
             double lambda = invAlpha;
             double nu = le * lambda;
             double mu = -2.0 * lambda + nu;
             double lnV = vMu * mu + vNu * nu + lambda;
-            probe += put(out.dNabla, cNabla, ZoneInput.ALPHA, k, nMu * mu + nNu * nu)
-                    + put(out.dVelocity, cVelocity, ZoneInput.ALPHA, k, velocity * lnV)
-                    + put(out.dConvectiveFraction, cConvective, ZoneInput.ALPHA, k, cMu * mu + cNu * nu)
-                    + put(out.dDiffusion, cDiffusion, ZoneInput.ALPHA, k, diffusion * (lnV + lambda));
+            nablaAlpha = nMu * mu + nNu * nu;
+            velAlpha = velocity * lnV;
+            fracAlpha = cMu * mu + cNu * nu;
+            diffAlpha = diffusion * (lnV + lambda);
         }
-        return probe;
+        // nabla_mu and phi do not enter a convective zone. The stores follow in one straight run per
+        // destination, so that nothing branches between them.
+        if (columns == null) {
+            write(out.dNabla, nablaT, nablaRho, nablaP, nablaL, nablaM, nablaRadius, nablaKappa, nablaCp, nablaNablaAd,
+                    nablaDelta, nablaAlpha);
+            write(out.dVelocity, velT, velRho, velP, velL, velM, velRadius, velKappa, velCp, velNablaAd, velDelta,
+                    velAlpha);
+            write(out.dConvectiveFraction, fracT, fracRho, fracP, fracL, fracM, fracRadius, fracKappa, fracCp,
+                    fracNablaAd, fracDelta, fracAlpha);
+            write(out.dDiffusion, diffT, diffRho, diffP, diffL, diffM, diffRadius, diffKappa, diffCp, diffNablaAd,
+                    diffDelta, diffAlpha);
+        } else {
+            write(columns.dNabla, k, nablaT, nablaRho, nablaP, nablaL, nablaM, nablaRadius, nablaKappa, nablaCp,
+                    nablaNablaAd, nablaDelta, nablaAlpha);
+            write(columns.dVelocity, k, velT, velRho, velP, velL, velM, velRadius, velKappa, velCp, velNablaAd,
+                    velDelta, velAlpha);
+            write(columns.dConvectiveFraction, k, fracT, fracRho, fracP, fracL, fracM, fracRadius, fracKappa, fracCp,
+                    fracNablaAd, fracDelta, fracAlpha);
+            write(columns.dDiffusion, k, diffT, diffRho, diffP, diffL, diffM, diffRadius, diffKappa, diffCp,
+                    diffNablaAd, diffDelta, diffAlpha);
+        }
+        // sum of (entry * 0): NaN exactly when one entry is not finite; a short tree of sums
+        final double zeroT = (nablaT * 0.0 + velT * 0.0) + (fracT * 0.0 + diffT * 0.0);
+        final double zeroRho = (nablaRho * 0.0 + velRho * 0.0) + (fracRho * 0.0 + diffRho * 0.0);
+        final double zeroP = (nablaP * 0.0 + velP * 0.0) + (fracP * 0.0 + diffP * 0.0);
+        final double zeroL = (nablaL * 0.0 + velL * 0.0) + (fracL * 0.0 + diffL * 0.0);
+        final double zeroM = (nablaM * 0.0 + velM * 0.0) + (fracM * 0.0 + diffM * 0.0);
+        final double zeroRadius = (nablaRadius * 0.0 + velRadius * 0.0) + (fracRadius * 0.0 + diffRadius * 0.0);
+        final double zeroKappa = (nablaKappa * 0.0 + velKappa * 0.0) + (fracKappa * 0.0 + diffKappa * 0.0);
+        final double zeroCp = (nablaCp * 0.0 + velCp * 0.0) + (fracCp * 0.0 + diffCp * 0.0);
+        final double zeroNablaAd = (nablaNablaAd * 0.0 + velNablaAd * 0.0) + (fracNablaAd * 0.0 + diffNablaAd * 0.0);
+        final double zeroDelta = (nablaDelta * 0.0 + velDelta * 0.0) + (fracDelta * 0.0 + diffDelta * 0.0);
+        final double zeroAlpha = (nablaAlpha * 0.0 + velAlpha * 0.0) + (fracAlpha * 0.0 + diffAlpha * 0.0);
+        return ((((zeroT + zeroRho) + (zeroP + zeroL)) + ((zeroM + zeroRadius) + (zeroKappa + zeroCp)))
+                + ((zeroNablaAd + zeroDelta) + zeroAlpha));
     }
 
-    /** Writes one Jacobian entry to the per-zone array or to zone k of the column; returns value * 0. */
-    private static double put(double[] flat, double[][] columns, int i, int k, double value) {
-        if (columns == null) {
-            flat[i] = value;
-        } else {
-            columns[i][k] = value;
-        }
-        return value * 0.0;
+    /** Bit pattern of x minus that of 2^-256: in [0, 2^61) exactly when 2^-256 &lt;= x &lt; 2^256. */
+    private static long offset(double x) {
+        return Double.doubleToRawLongBits(x) - ORDINARY_LOW;
+    }
+
+    /** Writes one output's Jacobian row in {@link ZoneInput} order, with 0 for nabla_mu and phi. */
+    private static void write(double[] d, double t, double rho, double p, double l, double m, double r,
+                              double kappa, double cp, double nablaAd, double delta, double alpha) {
+        d[ZoneInput.ALPHA] = alpha;
+        d[ZoneInput.T] = t;
+        d[ZoneInput.RHO] = rho;
+        d[ZoneInput.P] = p;
+        d[ZoneInput.L] = l;
+        d[ZoneInput.M] = m;
+        d[ZoneInput.R] = r;
+        d[ZoneInput.KAPPA] = kappa;
+        d[ZoneInput.CP] = cp;
+        d[ZoneInput.NABLA_AD] = nablaAd;
+        d[ZoneInput.DELTA] = delta;
+        d[ZoneInput.NABLA_MU] = 0.0;
+        d[ZoneInput.PHI] = 0.0;
+    }
+
+    /** Writes one output's Jacobian entries into zone k of its columns, with 0 for nabla_mu and phi. */
+    private static void write(double[][] c, int k, double t, double rho, double p, double l, double m, double r,
+                              double kappa, double cp, double nablaAd, double delta, double alpha) {
+        c[ZoneInput.T][k] = t;
+        c[ZoneInput.RHO][k] = rho;
+        c[ZoneInput.P][k] = p;
+        c[ZoneInput.L][k] = l;
+        c[ZoneInput.M][k] = m;
+        c[ZoneInput.R][k] = r;
+        c[ZoneInput.KAPPA][k] = kappa;
+        c[ZoneInput.CP][k] = cp;
+        c[ZoneInput.NABLA_AD][k] = nablaAd;
+        c[ZoneInput.DELTA][k] = delta;
+        c[ZoneInput.NABLA_MU][k] = 0.0;
+        c[ZoneInput.PHI][k] = 0.0;
+        c[ZoneInput.ALPHA][k] = alpha;
     }
 
     /**
@@ -420,9 +627,10 @@ public final class MixingLengthZone {
      * @param probe sum of (entry * 0) over the derivatives already written, or 0
      */
     private static void guard(ZoneState z, ConvectionResult out, double probe) {
-        probe += (out.nablaRad + out.nabla + out.nablaElement + out.velocity + out.convectiveFraction
-                + out.radiativeFraction + out.efficiency + out.lossParameter + out.scaleHeight + out.mixingLength
-                + out.diffusion) * 0.0;
+        // a short tree of sums (any non-finite term makes it NaN)
+        probe += ((((out.nablaRad + out.nabla) + (out.nablaElement + out.velocity))
+                + ((out.convectiveFraction + out.radiativeFraction) + (out.efficiency + out.lossParameter)))
+                + ((out.scaleHeight + out.mixingLength) + out.diffusion)) * 0.0;
         ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
     }
 
