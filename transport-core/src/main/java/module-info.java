@@ -4,7 +4,7 @@
  * Found by hosts through {@link io.github.startransport.spi.Transport}.
  */
 module io.github.startransport.core {
-    requires io.github.startransport.spi;
+    requires transitive io.github.startransport.spi;
     requires commons.math3;
 
     exports io.github.startransport.core;

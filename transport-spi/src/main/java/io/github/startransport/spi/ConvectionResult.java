@@ -8,6 +8,10 @@ package io.github.startransport.spi;
  * kappa, L, P, m and T, so those derivatives include its change).
  */
 public final class ConvectionResult {
+    /** Creates an empty result, to be filled by a model. */
+    public ConvectionResult() {
+    }
+
     /** The regime the model decided on. */
     public Regime regime;
     /** Radiative gradient nabla_rad (dimensionless). */

@@ -2,6 +2,10 @@ package io.github.startransport.spi;
 
 /** Caller-owned, mutable result of an {@link OpacityModel}: allocate once, reuse. */
 public final class OpacityResult {
+    /** Creates an empty result, to be filled by a model. */
+    public OpacityResult() {
+    }
+
     /** Rosseland mean opacity kappa (cm^2 g^-1). */
     public double kappa;
     /** (d ln kappa / d ln rho) at constant T and composition (dimensionless). */

@@ -8,6 +8,10 @@ import java.util.Arrays;
  * <p>Derivative arrays are indexed by {@link ZoneInput} and hold plain partial derivatives.
  */
 public final class StabilityResult {
+    /** Creates an empty result, to be filled by a model. */
+    public StabilityResult() {
+    }
+
     /** Radiative gradient nabla_rad = 3 kappa L P / (16 pi a c G m T^4) (dimensionless). */
     public double nablaRad;
     /** Adiabatic gradient nabla_ad as given (dimensionless). */

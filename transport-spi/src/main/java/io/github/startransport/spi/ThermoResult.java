@@ -2,6 +2,10 @@ package io.github.startransport.spi;
 
 /** Caller-owned, mutable result of a {@link ThermodynamicsModel}: allocate once, reuse. */
 public final class ThermoResult {
+    /** Creates an empty result, to be filled by a model. */
+    public ThermoResult() {
+    }
+
     /** Mean molecular weight mu (dimensionless, in atomic mass units per particle). */
     public double mu;
     /** beta = P_gas / P (dimensionless), in (0, 1]. */

@@ -12,6 +12,10 @@ package io.github.startransport.spi;
  * <p>Not thread-safe by design: one instance per thread.
  */
 public final class ZoneState {
+    /** Creates an empty zone (all fields 0, phi = 1, zone unknown); fill it before use. */
+    public ZoneState() {
+    }
+
     /** Zone index in the host's grid, used only in error messages; -1 when unknown. */
     public int zone = InvalidInputException.NO_ZONE;
     /** Radius r (cm), &gt; 0. */
