@@ -323,42 +323,11 @@ public final class OpacityTableSet {
                     c15 += w * d[q + right + 3];
                 }
             }
-            double hx = logT[ix + 1] - logT[ix];
-            double hy = logR[iy + 1] - logR[iy];
-            double t = (x - logT[ix]) / hx;
-            double u = (y - logR[iy]) / hy;
-            double t2 = t * t;
-            double t3 = t2 * t;
-            double a0 = 2 * t3 - 3 * t2 + 1;
-            double a1 = 1 - a0;
-            double e0 = hx * (t3 - 2 * t2 + t);
-            double e1 = hx * (t3 - t2);
-            double da0 = 6 * (t2 - t) / hx;
-            double da1 = -da0;
-            double de0 = 3 * t2 - 4 * t + 1;
-            double de1 = 3 * t2 - 2 * t;
-            double u2 = u * u;
-            double u3 = u2 * u;
-            double b0 = 2 * u3 - 3 * u2 + 1;
-            double b1 = 1 - b0;
-            double g0 = hy * (u3 - 2 * u2 + u);
-            double g1 = hy * (u3 - u2);
-            double db0 = 6 * (u2 - u) / hy;
-            double db1 = -db0;
-            double dg0 = 3 * u2 - 4 * u + 1;
-            double dg1 = 3 * u2 - 2 * u;
-            // node 00 = c0..c3, 01 = c4..c7, 10 = c8..c11, 11 = c12..c15 (f, f_x, f_y, f_xy)
-            double rowB0 = c0 * b0 + c2 * g0 + c4 * b1 + c6 * g1;    // sum over y of f-like terms at x-node 0
-            double rowE0 = c1 * b0 + c3 * g0 + c5 * b1 + c7 * g1;    // ... of f_x-like terms at x-node 0
-            double rowB1 = c8 * b0 + c10 * g0 + c12 * b1 + c14 * g1;
-            double rowE1 = c9 * b0 + c11 * g0 + c13 * b1 + c15 * g1;
-            double f = a0 * rowB0 + e0 * rowE0 + a1 * rowB1 + e1 * rowE1;
-            double fx = da0 * rowB0 + de0 * rowE0 + da1 * rowB1 + de1 * rowE1;
-            double dRowB0 = c0 * db0 + c2 * dg0 + c4 * db1 + c6 * dg1;
-            double dRowE0 = c1 * db0 + c3 * dg0 + c5 * db1 + c7 * dg1;
-            double dRowB1 = c8 * db0 + c10 * dg0 + c12 * db1 + c14 * dg1;
-            double dRowE1 = c9 * db0 + c11 * dg0 + c13 * db1 + c15 * dg1;
-            double fy = a0 * dRowB0 + e0 * dRowE0 + a1 * dRowB1 + e1 * dRowE1;
+            hermite(c0, c1, c2, c3, c4, c5, c6, c7, c8, c9, c10, c11, c12, c13, c14, c15,
+                    x, y, logT[ix], logT[ix + 1], logR[iy], logR[iy + 1], out);
+            double f = out.kappa;
+            double fx = out.dLnKappaDLnT;
+            double fy = out.dLnKappaDLnRho;
             finish(f, clampX ? 0.0 : fx, clampY ? 0.0 : fy, outside, policy, temperature, density, zone, out);
             return;
         }
@@ -479,10 +448,25 @@ public final class OpacityTableSet {
                      OpacityResult out) {
         int p = 4 * (ix * nR + iy);
         int q = p + 4 * nR;
-        double hx = ax[ix + 1] - ax[ix];
-        double hy = ay[iy + 1] - ay[iy];
-        double t = (x - ax[ix]) / hx;
-        double u = (y - ay[iy]) / hy;
+        hermite(d[p], d[p + 1], d[p + 2], d[p + 3], d[p + 4], d[p + 5], d[p + 6], d[p + 7],
+                d[q], d[q + 1], d[q + 2], d[q + 3], d[q + 4], d[q + 5], d[q + 6], d[q + 7],
+                x, y, ax[ix], ax[ix + 1], ay[iy], ay[iy + 1], out);
+    }
+
+    /**
+     * The bicubic Hermite kernel on one cell [x0, x1] x [y0, y1] from its corner data, each corner as
+     * (f, f_x, f_y, f_xy): node 00 = c0..c3, 01 = c4..c7 (at y1), 10 = c8..c11 (at x1), 11 = c12..c15.
+     * Writes f to out.kappa, df/dx to out.dLnKappaDLnT and df/dy to out.dLnKappaDLnRho (the caller
+     * turns them into kappa and its log-derivatives).
+     */
+    static void hermite(double c0, double c1, double c2, double c3, double c4, double c5, double c6, double c7,
+                        double c8, double c9, double c10, double c11, double c12, double c13, double c14,
+                        double c15, double x, double y, double x0, double x1, double y0, double y1,
+                        OpacityResult out) {
+        double hx = x1 - x0;
+        double hy = y1 - y0;
+        double t = (x - x0) / hx;
+        double u = (y - y0) / hy;
         double t2 = t * t;
         double t3 = t2 * t;
         double a0 = 2 * t3 - 3 * t2 + 1;
@@ -503,14 +487,14 @@ public final class OpacityTableSet {
         double db1 = -db0;
         double dg0 = 3 * u2 - 4 * u + 1;
         double dg1 = 3 * u2 - 2 * u;
-        double rowB0 = d[p] * b0 + d[p + 2] * g0 + d[p + 4] * b1 + d[p + 6] * g1;
-        double rowE0 = d[p + 1] * b0 + d[p + 3] * g0 + d[p + 5] * b1 + d[p + 7] * g1;
-        double rowB1 = d[q] * b0 + d[q + 2] * g0 + d[q + 4] * b1 + d[q + 6] * g1;
-        double rowE1 = d[q + 1] * b0 + d[q + 3] * g0 + d[q + 5] * b1 + d[q + 7] * g1;
-        double dRowB0 = d[p] * db0 + d[p + 2] * dg0 + d[p + 4] * db1 + d[p + 6] * dg1;
-        double dRowE0 = d[p + 1] * db0 + d[p + 3] * dg0 + d[p + 5] * db1 + d[p + 7] * dg1;
-        double dRowB1 = d[q] * db0 + d[q + 2] * dg0 + d[q + 4] * db1 + d[q + 6] * dg1;
-        double dRowE1 = d[q + 1] * db0 + d[q + 3] * dg0 + d[q + 5] * db1 + d[q + 7] * dg1;
+        double rowB0 = c0 * b0 + c2 * g0 + c4 * b1 + c6 * g1;    // sum over y of f-like terms at x-node 0
+        double rowE0 = c1 * b0 + c3 * g0 + c5 * b1 + c7 * g1;    // ... of f_x-like terms at x-node 0
+        double rowB1 = c8 * b0 + c10 * g0 + c12 * b1 + c14 * g1;
+        double rowE1 = c9 * b0 + c11 * g0 + c13 * b1 + c15 * g1;
+        double dRowB0 = c0 * db0 + c2 * dg0 + c4 * db1 + c6 * dg1;
+        double dRowE0 = c1 * db0 + c3 * dg0 + c5 * db1 + c7 * dg1;
+        double dRowB1 = c8 * db0 + c10 * dg0 + c12 * db1 + c14 * dg1;
+        double dRowE1 = c9 * db0 + c11 * dg0 + c13 * db1 + c15 * dg1;
         out.kappa = a0 * rowB0 + e0 * rowE0 + a1 * rowB1 + e1 * rowE1;
         out.dLnKappaDLnT = da0 * rowB0 + de0 * rowE0 + da1 * rowB1 + de1 * rowE1;
         out.dLnKappaDLnRho = a0 * dRowB0 + e0 * dRowE0 + a1 * dRowB1 + e1 * dRowE1;
