@@ -10,6 +10,7 @@ import io.github.startransport.spi.ConvectionColumns;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.Regime;
+import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneState;
 
@@ -62,6 +63,37 @@ public final class MixingLengthZone {
     /** Bit pattern of 2^-256: {@link #offset} maps [2^-256, 2^256) onto [0, 2^61). */
     private static final long ORDINARY_LOW = 767L << 52;
     private static final int ORDINARY_SHIFT = 61;
+
+    /**
+     * The batch call of both convection models: a loop over the per-zone kernel with the output's
+     * working space (no allocation, no per-zone dispatch); a convective zone's Jacobian is written
+     * straight into the output columns, by the same arithmetic as the per-zone call.
+     *
+     * @param settings  the model's options
+     * @param eddyShape y of the transparency correction, or 0 for none
+     * @param in        input columns
+     * @param from      first zone (inclusive)
+     * @param to        last zone (exclusive)
+     * @param out       output columns
+     * @param jacobian  whether to fill the derivative columns
+     */
+    static void solveColumns(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
+                             ConvectionColumns out, boolean jacobian) {
+        in.checkRange(from, to, out.capacity);
+        final ZoneState zone = out.workZone;
+        final ConvectionResult r = out.workResult;
+        final double alpha = settings.alpha();
+        final MixingLengthGeometry geometry = settings.geometry();
+        final CentreLimit limit = settings.centreLimit();
+        final Criterion criterion = settings.criterion();
+        final double semiconvection = settings.semiconvection();
+        final double thermohaline = settings.thermohaline();
+        for (int k = from; k < to; k++) {
+            boolean written = solve(in.load(k, zone), alpha, geometry, eddyShape, limit, criterion,
+                    semiconvection, thermohaline, r, jacobian, out, k);
+            out.store(k, r, jacobian && !written);
+        }
+    }
 
     /**
      * Validates the zone fields the convection models read: those of the stability test plus

@@ -134,26 +134,10 @@ public final class TransparentEddyMixingLength implements ConvectionModel {
                 settings.criterion(), settings.semiconvection(), settings.thermohaline(), out, false);
     }
 
-    /**
-     * A loop over the static kernel with the output's working space: no allocation, no per-zone dispatch.
-     * A convective zone's Jacobian is written straight into the output columns.
-     */
+    /** Loops over the static kernel: see {@link MixingLengthZone#solveColumns}. */
     @Override
     public void solveColumns(ZoneColumns in, int from, int to, ConvectionColumns out, boolean jacobian) {
-        in.checkRange(from, to, out.capacity);
-        final ZoneState zone = out.workZone;
-        final ConvectionResult r = out.workResult;
-        final double alpha = settings.alpha();
-        final MixingLengthGeometry geometry = settings.geometry();
-        final CentreLimit limit = settings.centreLimit();
-        final Criterion criterion = settings.criterion();
-        final double semiconvection = settings.semiconvection();
-        final double thermohaline = settings.thermohaline();
-        for (int k = from; k < to; k++) {
-            boolean written = MixingLengthZone.solve(in.load(k, zone), alpha, geometry, eddyShape, limit, criterion,
-                    semiconvection, thermohaline, r, jacobian, out, k);
-            out.store(k, r, jacobian && !written);
-        }
+        MixingLengthZone.solveColumns(settings, eddyShape, in, from, to, out, jacobian);
     }
 
     @Override
