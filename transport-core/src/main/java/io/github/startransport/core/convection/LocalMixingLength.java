@@ -1,14 +1,9 @@
 package io.github.startransport.core.convection;
 
-import io.github.startransport.spi.ConvectionColumns;
-import io.github.startransport.spi.ConvectionModel;
-import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
-import io.github.startransport.spi.ZoneColumns;
-import io.github.startransport.spi.ZoneState;
 
 /**
  * The textbook local mixing-length theory: Böhm-Vitense (1958) in the U, W formulation of
@@ -18,7 +13,7 @@ import io.github.startransport.spi.ZoneState;
  *
  * <p>Immutable and thread-safe; {@link #solve} allocates nothing.
  */
-public final class LocalMixingLength implements ConvectionModel {
+public final class LocalMixingLength extends MixingLengthModel {
     /** Name to ask for this model by. */
     public static final String NAME = "local-mixing-length";
 
@@ -28,8 +23,6 @@ public final class LocalMixingLength implements ConvectionModel {
                     + "with selectable geometry constants, exact Jacobian, and convective, semiconvective, "
                     + "thermohaline and overshoot mixing coefficients",
             ConvectionSettings.OPTIONS);
-
-    private final ConvectionSettings settings;
 
     /** The model with every option at its default. */
     public LocalMixingLength() {
@@ -48,7 +41,7 @@ public final class LocalMixingLength implements ConvectionModel {
     }
 
     LocalMixingLength(ConvectionSettings settings) {
-        this.settings = settings;
+        super(settings, 0.0);
     }
 
     /**
@@ -66,64 +59,6 @@ public final class LocalMixingLength implements ConvectionModel {
      */
     public LocalMixingLength withAlpha(double alpha) {
         return new LocalMixingLength(settings.withAlpha(alpha));
-    }
-
-    @Override
-    public double alpha() {
-        return settings.alpha();
-    }
-
-    @Override
-    public Criterion criterion() {
-        return settings.criterion();
-    }
-
-    /** @return the geometry constants in use */
-    public MixingLengthGeometry geometry() {
-        return settings.geometry();
-    }
-
-    /** @return the near-centre limit of the mixing length */
-    public CentreLimit centreLimit() {
-        return settings.centreLimit();
-    }
-
-    /** @return alpha_sc of semiconvective mixing (dimensionless) */
-    public double semiconvectionEfficiency() {
-        return settings.semiconvection();
-    }
-
-    /** @return C_t of thermohaline mixing (dimensionless) */
-    public double thermohalineEfficiency() {
-        return settings.thermohaline();
-    }
-
-    @Override
-    public void solve(ZoneState zone, ConvectionResult out) {
-        MixingLengthZone.solve(zone, settings.alpha(), settings.geometry(), 0.0, settings.centreLimit(),
-                settings.criterion(), settings.semiconvection(), settings.thermohaline(), out);
-    }
-
-    @Override
-    public void solveValues(ZoneState zone, ConvectionResult out) {
-        MixingLengthZone.solve(zone, settings.alpha(), settings.geometry(), 0.0, settings.centreLimit(),
-                settings.criterion(), settings.semiconvection(), settings.thermohaline(), out, false);
-    }
-
-    /** Loops over the static kernel: see {@link MixingLengthZone#solveColumns}. */
-    @Override
-    public void solveColumns(ZoneColumns in, int from, int to, ConvectionColumns out, boolean jacobian) {
-        MixingLengthZone.solveColumns(settings, 0.0, in, from, to, out, jacobian);
-    }
-
-    @Override
-    public double overshootParameter() {
-        return settings.overshoot();
-    }
-
-    @Override
-    public double overshootDiffusion(double boundaryDiffusion, double distance, double scaleHeight) {
-        return settings.overshootDiffusion(boundaryDiffusion, distance, scaleHeight);
     }
 
     @Override

@@ -1,17 +1,12 @@
 package io.github.startransport.core.convection;
 
 import io.github.startransport.spi.Checks;
-import io.github.startransport.spi.ConvectionColumns;
-import io.github.startransport.spi.ConvectionModel;
-import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.OptionInfo;
-import io.github.startransport.spi.ZoneColumns;
-import io.github.startransport.spi.ZoneState;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -34,7 +29,7 @@ import java.util.List;
  *
  * <p>Immutable and thread-safe; {@link #solve} allocates nothing. Kernel: {@link MixingLengthZone}.
  */
-public final class TransparentEddyMixingLength implements ConvectionModel {
+public final class TransparentEddyMixingLength extends MixingLengthModel {
     /** Name to ask for this model by. */
     public static final String NAME = "transparent-eddy-mixing-length";
 
@@ -49,9 +44,6 @@ public final class TransparentEddyMixingLength implements ConvectionModel {
                     + "(Henyey, Vardya & Bodenheimer 1965): losses scaled by y w^2/(1 + y w^2), w = kappa rho l; "
                     + "exact Jacobian and the same mixing coefficients as " + LocalMixingLength.NAME,
             options());
-
-    private final ConvectionSettings settings;
-    private final double eddyShape;
 
     /** The model with every option at its default. */
     public TransparentEddyMixingLength() {
@@ -72,8 +64,7 @@ public final class TransparentEddyMixingLength implements ConvectionModel {
     }
 
     TransparentEddyMixingLength(ConvectionSettings settings, double eddyShape) {
-        this.settings = settings;
-        this.eddyShape = Checks.positive(EDDY_SHAPE, eddyShape, "1", InvalidInputException.NO_ZONE);
+        super(settings, Checks.positive(EDDY_SHAPE, eddyShape, "1", InvalidInputException.NO_ZONE));
     }
 
     private static List<OptionInfo> options() {
@@ -102,52 +93,9 @@ public final class TransparentEddyMixingLength implements ConvectionModel {
         return new TransparentEddyMixingLength(settings.withAlpha(alpha), eddyShape);
     }
 
-    @Override
-    public double alpha() {
-        return settings.alpha();
-    }
-
-    @Override
-    public Criterion criterion() {
-        return settings.criterion();
-    }
-
-    /** @return the geometry constants in use */
-    public MixingLengthGeometry geometry() {
-        return settings.geometry();
-    }
-
     /** @return y of the loss factor (dimensionless) */
     public double eddyShape() {
         return eddyShape;
-    }
-
-    @Override
-    public void solve(ZoneState zone, ConvectionResult out) {
-        MixingLengthZone.solve(zone, settings.alpha(), settings.geometry(), eddyShape, settings.centreLimit(),
-                settings.criterion(), settings.semiconvection(), settings.thermohaline(), out);
-    }
-
-    @Override
-    public void solveValues(ZoneState zone, ConvectionResult out) {
-        MixingLengthZone.solve(zone, settings.alpha(), settings.geometry(), eddyShape, settings.centreLimit(),
-                settings.criterion(), settings.semiconvection(), settings.thermohaline(), out, false);
-    }
-
-    /** Loops over the static kernel: see {@link MixingLengthZone#solveColumns}. */
-    @Override
-    public void solveColumns(ZoneColumns in, int from, int to, ConvectionColumns out, boolean jacobian) {
-        MixingLengthZone.solveColumns(settings, eddyShape, in, from, to, out, jacobian);
-    }
-
-    @Override
-    public double overshootParameter() {
-        return settings.overshoot();
-    }
-
-    @Override
-    public double overshootDiffusion(double boundaryDiffusion, double distance, double scaleHeight) {
-        return settings.overshootDiffusion(boundaryDiffusion, distance, scaleHeight);
     }
 
     @Override
