@@ -93,12 +93,12 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] z = p.column(ProfileColumn.METALS);
 
         boolean hasKappa = p.has(ProfileColumn.OPACITY);
-        double[] kappa = hasKappa ? p.column(ProfileColumn.OPACITY) : new double[n];
+        double[] kappa = columnOr(p, ProfileColumn.OPACITY, 0.0);
         boolean hasThermo = p.has(ProfileColumn.NABLA_AD) && p.has(ProfileColumn.CP) && p.has(ProfileColumn.DELTA);
-        double[] nablaAd = p.has(ProfileColumn.NABLA_AD) ? p.column(ProfileColumn.NABLA_AD) : new double[n];
-        double[] cp = p.has(ProfileColumn.CP) ? p.column(ProfileColumn.CP) : new double[n];
-        double[] delta = p.has(ProfileColumn.DELTA) ? p.column(ProfileColumn.DELTA) : new double[n];
-        double[] phi = p.has(ProfileColumn.PHI) ? p.column(ProfileColumn.PHI) : filled(n, 1.0);
+        double[] nablaAd = columnOr(p, ProfileColumn.NABLA_AD, 0.0);
+        double[] cp = columnOr(p, ProfileColumn.CP, 0.0);
+        double[] delta = columnOr(p, ProfileColumn.DELTA, 0.0);
+        double[] phi = columnOr(p, ProfileColumn.PHI, 1.0); // ideal gas
         double[] nablaMu;
         if (p.has(ProfileColumn.NABLA_MU)) {
             nablaMu = p.column(ProfileColumn.NABLA_MU);
@@ -225,9 +225,13 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         return p.wasReversed() ? p.size() - 1 - k : k;
     }
 
-    private static double[] filled(int n, double value) {
-        double[] a = new double[n];
-        java.util.Arrays.fill(a, value);
+    /** The profile's column, or a column filled with {@code absent} (to be computed, or a default). */
+    private static double[] columnOr(Profile p, ProfileColumn c, double absent) {
+        if (p.has(c)) {
+            return p.column(c);
+        }
+        double[] a = new double[p.size()];
+        java.util.Arrays.fill(a, absent);
         return a;
     }
 
