@@ -46,7 +46,7 @@ final class HumanSummary {
         } else {
             b.append("  regions, centre to surface:\n");
             for (Region r : d.regions()) {
-                b.append(String.format(Locale.ROOT, "    %-15s r/R %.4f - %.4f   m/M %.4f - %.4f", r.regime().label(),
+                b.append(String.format(Locale.ROOT, "    %-15s r/R %.4f - %.4f   m/M %.6f - %.6f", r.regime().label(),
                         r.bottomRadiusFraction(), r.topRadiusFraction(), r.bottomMassFraction(), r.topMassFraction()));
                 if (r.regime() == Regime.CONVECTIVE) {
                     b.append("   turnover ").append(days(r.turnoverGlobal())).append(" (global), ")
