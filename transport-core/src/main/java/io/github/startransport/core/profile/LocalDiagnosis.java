@@ -114,19 +114,17 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             CompositionGradient.nablaMu(x, z, pres, nablaMu);
         }
 
+        // the computed columns; the profile's own (and the filled-in ones) join them below
         EnumMap<DiagnosisColumn, double[]> out = new EnumMap<>(DiagnosisColumn.class);
-        for (DiagnosisColumn c : DiagnosisColumn.values()) {
-            out.put(c, new double[n]); // the profile's own columns replace theirs below
-        }
-        double[] g = out.get(DiagnosisColumn.GRAVITY);
-        double[] hp = out.get(DiagnosisColumn.SCALE_HEIGHT);
-        double[] nablaRad = out.get(DiagnosisColumn.NABLA_RAD);
-        double[] nablaL = out.get(DiagnosisColumn.NABLA_LEDOUX);
-        double[] nabla = out.get(DiagnosisColumn.NABLA);
-        double[] nablaE = out.get(DiagnosisColumn.NABLA_ELEMENT);
-        double[] v = out.get(DiagnosisColumn.VELOCITY);
-        double[] fconv = out.get(DiagnosisColumn.CONVECTIVE_FRACTION);
-        double[] dmix = out.get(DiagnosisColumn.DIFFUSION);
+        double[] g = computed(out, DiagnosisColumn.GRAVITY, n);
+        double[] hp = computed(out, DiagnosisColumn.SCALE_HEIGHT, n);
+        double[] nablaRad = computed(out, DiagnosisColumn.NABLA_RAD, n);
+        double[] nablaL = computed(out, DiagnosisColumn.NABLA_LEDOUX, n);
+        double[] nabla = computed(out, DiagnosisColumn.NABLA, n);
+        double[] nablaE = computed(out, DiagnosisColumn.NABLA_ELEMENT, n);
+        double[] v = computed(out, DiagnosisColumn.VELOCITY, n);
+        double[] fconv = computed(out, DiagnosisColumn.CONVECTIVE_FRACTION, n);
+        double[] dmix = computed(out, DiagnosisColumn.DIFFUSION, n);
         double[] ell = new double[n];
         double[] marginS = new double[n];
         double[] marginL = new double[n];
@@ -223,6 +221,13 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
 
     private static int zoneAsGiven(Profile p, int k) {
         return p.wasReversed() ? p.size() - 1 - k : k;
+    }
+
+    /** A new column of n zones, entered in {@code out} under {@code c}. */
+    private static double[] computed(Map<DiagnosisColumn, double[]> out, DiagnosisColumn c, int n) {
+        double[] a = new double[n];
+        out.put(c, a);
+        return a;
     }
 
     /** The profile's column, or a column filled with {@code absent} (to be computed, or a default). */
