@@ -26,7 +26,7 @@ struct example_profile {
 };
 
 /* Splits a CSV line in place: up to max fields, returns how many. */
-static int example_split(char *line, char **fields, int max) {
+static inline int example_split(char *line, char **fields, int max) {
     int count = 0;
     char *p = line;
     while (count < max) {
@@ -43,7 +43,7 @@ static int example_split(char *line, char **fields, int max) {
     return count;
 }
 
-static int example_read_models(const char *dir, struct example_models *m) {
+static inline int example_read_models(const char *dir, struct example_models *m) {
     char path[4096];
     snprintf(path, sizeof path, "%s/models.txt", dir);
     FILE *f = fopen(path, "r");
@@ -65,7 +65,7 @@ static int example_read_models(const char *dir, struct example_models *m) {
 }
 
 /* Reads a CSV file of numbers with one header line: rows * columns doubles, row-major. */
-static double *example_read_table(const char *path, int columns, int *rows) {
+static inline double *example_read_table(const char *path, int columns, int *rows) {
     FILE *f = fopen(path, "r");
     if (f == NULL) {
         fprintf(stderr, "cannot open %s\n", path);
@@ -108,7 +108,7 @@ static double *example_read_table(const char *path, int columns, int *rows) {
     return data;
 }
 
-static int example_read_profile(const char *dir, struct example_profile *p) {
+static inline int example_read_profile(const char *dir, struct example_profile *p) {
     char path[4096];
     snprintf(path, sizeof path, "%s/profile.csv", dir);
     int n = 0;
@@ -130,7 +130,7 @@ static int example_read_profile(const char *dir, struct example_profile *p) {
 }
 
 /* Bit for bit equality of two doubles (tells -0.0 from 0.0, and equal NaNs apart from none). */
-static int example_same(double a, double b) {
+static inline int example_same(double a, double b) {
     return memcmp(&a, &b, sizeof a) == 0;
 }
 

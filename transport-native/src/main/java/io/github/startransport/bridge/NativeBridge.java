@@ -136,8 +136,15 @@ public final class NativeBridge {
                 ws.family = BAD_ARGUMENT;
                 return null;
             }
-            ModelOptions parsed = options == null || options.isBlank() ? ModelOptions.defaults()
-                    : ModelOptions.parse(options);
+            ModelOptions parsed;
+            try {
+                parsed = options == null || options.isBlank() ? ModelOptions.defaults() : ModelOptions.parse(options);
+            } catch (IllegalArgumentException e) {
+                ws.message = e.getMessage() + " (options '" + options + "' for " + family + " model '" + name
+                        + "'; write them as name=value,name=value)";
+                ws.family = INVALID_OPTION;
+                return null;
+            }
             Object model = transport.model(f, name, parsed);
             ws.family = code;
             return model;
@@ -292,11 +299,19 @@ public final class NativeBridge {
      * @return bytes, or -1 when the JVM does not measure them
      */
     static long allocatedBytes() {
-        ThreadMXBean bean = ManagementFactory.getThreadMXBean();
-        if (bean instanceof com.sun.management.ThreadMXBean sun && sun.isThreadAllocatedMemorySupported()) {
-            return sun.getThreadAllocatedBytes(Thread.currentThread().getId());
+        com.sun.management.ThreadMXBean bean = Threads.BEAN;
+        return bean != null ? bean.getCurrentThreadAllocatedBytes() : -1;
+    }
+
+    /** The thread bean, looked up on first use (not on the hot path). */
+    private static final class Threads {
+        static final com.sun.management.ThreadMXBean BEAN = find();
+
+        private static com.sun.management.ThreadMXBean find() {
+            ThreadMXBean bean = ManagementFactory.getThreadMXBean();
+            return bean instanceof com.sun.management.ThreadMXBean sun && sun.isThreadAllocatedMemorySupported()
+                    ? sun : null;
         }
-        return -1;
     }
 
     static int code(Regime regime) {
