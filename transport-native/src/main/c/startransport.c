@@ -5,10 +5,11 @@
  *   1. The calling thread's state (thread_state) is found in a thread-local pointer; on the
  *      thread's first call it is attached to the JVM and given a Java Workspace: arrays for one
  *      chunk of zones, held here through global references. Nothing is allocated after that.
- *   2. For each chunk of up to CHUNK zones: each host column the call reads is copied into the
- *      workspace with one SetDoubleArrayRegion; one static Java method runs the SPI's batch call
- *      over the chunk; each requested output is copied back with one Get<Type>ArrayRegion.
- *      A chunk's arrays stay in cache between the Java call and the copies.
+ *   2. For each chunk of up to CHUNK zones (Workspace.CHUNK, 256): each host column the call reads
+ *      is copied into the workspace (the Java array pinned with GetPrimitiveArrayCritical, then
+ *      memcpy); one static Java method runs the SPI's batch call over the chunk; each requested
+ *      output is copied back the same way. A chunk's arrays stay in cache between the Java call
+ *      and the copies. No JNI crossing per zone, no allocation per call.
  *   3. A failure comes back as a status code from Java, with the message (zone renumbered for
  *      the host) in the workspace; a Java exception that escapes anyway is cleared here and
  *      reported as STT_JAVA_ERROR. No exception is ever left pending for the host.

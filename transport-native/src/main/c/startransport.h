@@ -24,6 +24,11 @@
  * per-zone size; an output pointer left NULL is not written. Inputs and outputs must not overlap.
  * On failure the outputs are unspecified.
  *
+ * Signals: the JVM uses SIGSEGV, SIGBUS, SIGFPE and a few others for its own purposes. A host that
+ * installs handlers for those after stt_open must chain to the JVM's handlers, or run with
+ * LD_PRELOAD=$JAVA_HOME/lib/libjsig.so (the JVM's signal chaining). SIGINT, SIGTERM and SIGQUIT stay
+ * the host's (the JVM is started with -Xrs).
+ *
  * Compile and link a host:
  *   cc -I<dir>/include host.c -L<dir> -lstartransport -Wl,-rpath,<dir>
  * where <dir> holds libstartransport.so and, beside it, the library's jars.

@@ -18,15 +18,14 @@ import io.github.startransport.spi.ZoneInput;
  */
 public final class Workspace {
     /**
-     * Zones per chunk. A chunk's arrays (about 0.2 MB with the Jacobian) stay in the core's L2
-     * cache between the Java call and the copy back to the host, which is what keeps the copies
-     * cheap; the native benchmark measured 128-2048 (see DEVELOPERS.md).
+     * Zones per chunk. A chunk's arrays (about 0.15 MB with the Jacobian) stay in the core's L2
+     * cache between the Java call and the copy back to the host, and the workspace of a thread
+     * stays small whatever the host's zone count; 64 to 1024 timed the same within the noise of
+     * the shared build machine (DEVELOPERS.md).
      */
     public static final int CHUNK = 256;
 
-    /** Index of the first input column in {@link #arrays()} (order of {@link #inputs()}). */
-    static final int INPUTS = 0;
-    /** Number of input columns. */
+    /** Number of input columns (the fields of the C header's {@code stt_zones}). */
     static final int INPUT_COUNT = 14;
 
     final ZoneColumns in = new ZoneColumns(CHUNK);

@@ -34,9 +34,12 @@ final class NativeTools {
     /** The JDK running the tests (its libjvm is the one the children load). */
     static final Path JAVA_HOME = Path.of(System.getProperty("java.home"));
 
-    /** @return true when the Maven profile built the library (a C compiler was present) */
+    /**
+     * @return true when the Maven profile built the library: a C compiler is present (the profile's
+     *         own condition) and the library is there
+     */
     static boolean libraryBuilt() {
-        return Files.isRegularFile(NATIVE.resolve("libstartransport.so"));
+        return Files.isExecutable(Path.of("/usr/bin/cc")) && Files.isRegularFile(NATIVE.resolve("libstartransport.so"));
     }
 
     /** @return true when gfortran is on the PATH */
