@@ -1013,9 +1013,9 @@ static int begin(const char *call, const stt_model *model, int family, int n, co
 /*
  * Copies between host memory and a workspace array. The array is pinned for the copy
  * (GetPrimitiveArrayCritical: no copy of its own with HotSpot's collectors) and copied with
- * memcpy, which is several times faster than the element-wise copy of Get/Set<Type>ArrayRegion
- * for the ~1 MB a 2000-zone convection call with its Jacobian moves. Nothing in between calls
- * the JVM. If the JVM cannot pin (it returns NULL), the region copy is used instead.
+ * memcpy; nothing in between calls the JVM. (Timed the same as Get/Set<Type>ArrayRegion: the
+ * copies are bound by memory bandwidth.) If the JVM cannot pin (it returns NULL), the region
+ * copy is used instead.
  */
 static void copy_in(JNIEnv *env, jarray array, const double *host, jsize count) {
     void *java = (*env)->GetPrimitiveArrayCritical(env, array, NULL);
