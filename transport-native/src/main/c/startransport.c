@@ -1086,6 +1086,9 @@ static int chunk_status(JNIEnv *env, struct thread_state *t, const char *call, j
 #define STABILITY_INPUTS (BIT(IN_T) | BIT(IN_RHO) | BIT(IN_P) | BIT(IN_L) | BIT(IN_MASS) | BIT(IN_KAPPA) \
                           | BIT(IN_NABLA_AD) | BIT(IN_DELTA))
 #define CONVECTION_INPUTS (STABILITY_INPUTS | BIT(IN_RADIUS) | BIT(IN_CP))
+/* what the SPI says each call reads (ConvectionModel, StabilityModel javadoc): required plus optional */
+#define STABILITY_READS (STABILITY_INPUTS | BIT(IN_NABLA_MU) | BIT(IN_PHI))
+#define CONVECTION_READS (CONVECTION_INPUTS | BIT(IN_NABLA_MU) | BIT(IN_PHI))
 
 int stt_convection(const stt_model *model, int n, const stt_zones *in, const stt_convection_out *out,
                    double *jacobian, char *message, size_t message_size) {
@@ -1100,7 +1103,8 @@ int stt_convection(const stt_model *model, int n, const stt_zones *in, const stt
     const jsize chunk = g.chunk;
     for (size_t start = 0; start < (size_t) n; start += (size_t) chunk) {
         jsize count = (size_t) n - start < (size_t) chunk ? (jsize) ((size_t) n - start) : chunk;
-        unsigned present = put_inputs(env, t, columns, ALL_INPUTS, start, count);
+        /* columns the model does not read count as present: neither copied nor filled */
+        unsigned present = put_inputs(env, t, columns, CONVECTION_READS, start, count) | (ALL_INPUTS & ~CONVECTION_READS);
         jint rc = (*env)->CallStaticIntMethod(env, g.bridge, g.convection, t->workspace, model->object, count,
                                               (jint) start + model->zone_origin, jacobian != NULL, (jint) present);
         status = chunk_status(env, t, "stt_convection", rc, message, message_size);
@@ -1143,7 +1147,7 @@ int stt_stability(const stt_model *model, int n, const stt_zones *in, const stt_
     const jsize chunk = g.chunk;
     for (size_t start = 0; start < (size_t) n; start += (size_t) chunk) {
         jsize count = (size_t) n - start < (size_t) chunk ? (jsize) ((size_t) n - start) : chunk;
-        unsigned present = put_inputs(env, t, columns, ALL_INPUTS, start, count);
+        unsigned present = put_inputs(env, t, columns, STABILITY_READS, start, count) | (ALL_INPUTS & ~STABILITY_READS);
         jint rc = (*env)->CallStaticIntMethod(env, g.bridge, g.stability, t->workspace, model->object, count,
                                               (jint) start + model->zone_origin, jacobian != NULL, (jint) present);
         status = chunk_status(env, t, "stt_stability", rc, message, message_size);
