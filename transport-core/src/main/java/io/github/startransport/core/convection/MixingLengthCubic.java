@@ -147,7 +147,8 @@ public final class MixingLengthCubic {
      * roots of G^2 + |S| G - beta (where F = |S| G (1 - D) &lt; 0) and of G^2 + |S| G / D(sqrt(beta)) -
      * beta (where F &gt;= 0). From the upper end Newton's method, kept inside the bracket by bisection
      * (Press et al., <i>Numerical Recipes</i>, 3rd ed., §9.4, rtsafe; from memory), stops when a step
-     * is below 1e-15 of the root or after {@link #COMPOSITION_MAX_STEPS} steps.
+     * is below 1e-13 of the root (or after {@link #COMPOSITION_MAX_STEPS} steps), then takes one more
+     * Newton step, which brings a quadratically converging iterate to rounding level.
      *
      * @param a0   cubic coefficient 2U'/(kU) (dimensionless), &gt; 0
      * @param s    W / (4 U'^2) (dimensionless), any sign, s + beta &gt; 0
@@ -186,13 +187,18 @@ public final class MixingLengthCubic {
             if (!(next > lo && next < hi)) {
                 next = 0.5 * (lo + hi);
             }
-            boolean done = Math.abs(next - g) <= 1e-15 * next;
+            boolean done = Math.abs(next - g) <= 1e-13 * next;
             g = next;
             if (done || !(hi > lo)) {
                 break;
             }
         }
-        return g;
+        // Newton converges quadratically: after a step below 1e-13 one more lands at rounding level
+        double excess = Math.fma(g, g, -beta);
+        double den = denominator(a0, g);
+        double slope = 2.0 * g * den + excess * Math.fma(2.0 * a0, g, 1.0) - s;
+        double polished = g - (excess * den - s * g) / slope;
+        return polished > 0.0 ? polished : g;
     }
 
     /**
