@@ -151,7 +151,7 @@ public final class MixingLengthCubic {
      * Newton step, which brings a quadratically converging iterate to rounding level.
      *
      * @param a0   cubic coefficient 2U'/(kU) (dimensionless), &gt; 0
-     * @param s    W / (4 U'^2) (dimensionless), any sign, s + beta &gt; 0
+     * @param s    W / (4 U'^2) (dimensionless), any sign, s + beta &gt; 0 (or rounded to &lt;= 0 from above)
      * @param beta b / (4 U'^2) (dimensionless), &gt; 0
      * @return the efficiency Gamma (dimensionless), &gt; 0
      */

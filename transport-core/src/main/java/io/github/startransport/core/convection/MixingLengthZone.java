@@ -80,8 +80,8 @@ import java.util.Arrays;
  * remains when W + b -&gt; 0), so the regime switch to thermohaline mixing is discontinuous: onset
  * of overturning in an inverted-mu zone is not gradual in this local theory.
  *
- * <p><b>Limits of double precision.</b> A convective zone needs (W + b) / (4 U'^2) to be a normal
- * double, roughly 1e-154 &lt; U' / sqrt(W + b) &lt; 1e154; beyond, it is refused with an
+ * <p><b>Limits of double precision.</b> A convective zone needs W / (4 U'^2) (with composition
+ * (|W| + b) / (4 U'^2)) to be a normal double, roughly 1e-154 &lt; U' / sqrt(W) &lt; 1e154; beyond, it is refused with an
  * {@link InvalidInputException} on the loss parameter (far below the zone is adiabatic, far above
  * radiative, to far better than double precision; no star comes near either). F_conv / F is
  * bounded to [0, 1] where W &gt; 0 (its rounded product could land one ulp above 1).
@@ -353,9 +353,10 @@ public final class MixingLengthZone {
         final double b = nablaMu < 0.0 ? (phi * invDelta) * -nablaMu : 0.0;
         final boolean driven = b > 0.0;
         final double beta = driven ? b * invFourULoss2 : 0.0;
-        // the cubic's right-hand side (with composition, that of the Ledoux excess W + b) must be a
-        // normal double: outside it U' is beyond ~1e+-154 and S or Gamma do not fit
-        final double drive = driven ? s + beta : s;
+        // the cubic's right-hand side S (with composition, the scale |S| + beta of the equation) must be a
+        // normal double: outside it U' is beyond ~1e+-154 and S or Gamma do not fit. (W + b > 0 is not
+        // required of the rounded terms: the composition solver also takes a W + b that rounding made <= 0.)
+        final double drive = driven ? Math.abs(s) + beta : s;
         if (!(drive >= Double.MIN_NORMAL && drive <= Double.MAX_VALUE && beta <= Double.MAX_VALUE)) {
             throw lossOutOfRange(z, u, uLoss, w, b);
         }
@@ -753,14 +754,15 @@ public final class MixingLengthZone {
 
     /**
      * The refusal of a convective zone whose loss parameter is beyond what double precision can
-     * solve: the right-hand side (W + b) / (4 U'^2) of the cubic is not a normal double (U' below
+     * solve: the right-hand side W / (4 U'^2) of the cubic (or (|W| + b) / (4 U'^2)) is not a normal
+     * double (U' below
      * about 1e-154 or above about 1e154 for W ~ 1). Not a hot-path branch: it allocates the exception.
      */
     private static InvalidInputException lossOutOfRange(ZoneState z, double u, double uLoss, double w, double b) {
         return new InvalidInputException("lossParameter", u, "1", z.zone,
-                "such that (nabla_rad - nabla_ad + b) / (4 U'^2) is a normal double (here U' = " + uLoss
+                "such that (|nabla_rad - nabla_ad| + b) / (4 U'^2) is a normal double (here U' = " + uLoss
                         + ", nabla_rad - nabla_ad = " + w + ", b = -(phi/delta) nabla_mu = " + b
-                        + "): about 1e-154 < U' / sqrt(nabla_rad - nabla_ad + b) < 1e154. Far below, the zone is"
+                        + "): about 1e-154 < U' / sqrt(|nabla_rad - nabla_ad| + b) < 1e154. Far below, the zone is"
                         + " adiabatic (nabla = nabla_ad) and far above radiative (nabla = nabla_rad) to much better"
                         + " than double precision; U = (3 a c T^3 / (c_P rho^2 kappa l^2)) sqrt(8 H_P / (g delta)):"
                         + " check c_P, kappa, rho, T and alpha (" + z + ")");

@@ -341,7 +341,8 @@ class CompositionConvectionTest {
 
     /**
      * The composition solver converges within its bound over a dense grid of a0, S and beta (including
-     * R0 -&gt; 1, S -&gt; -beta): the residual of (Gamma^2 - beta) D = S Gamma is at rounding level relative
+     * R0 -&gt; 1, S -&gt; -beta, and S = -beta, where rounding can put a zone that is convective by its
+     * gradients): the residual of (Gamma^2 - beta) D = S Gamma is at rounding level relative
      * to its largest term, and the root lies in the bracket the javadoc proves.
      */
     @Test
@@ -349,7 +350,7 @@ class CompositionConvectionTest {
         for (double a0 : new double[] {1e-6, 0.01, 0.5, 9.0 / 4.0, 6.0}) {
             for (int eb = -40; eb <= 40; eb += 2) {
                 double beta = Math.pow(10, eb);
-                for (double ratio : new double[] {-0.999999, -0.9, -0.5, -1e-3, 0.0, 1e-3, 0.5, 1.0, 10.0, 1e6}) {
+                for (double ratio : new double[] {-1.0, -0.999999, -0.9, -0.5, -1e-3, 0.0, 1e-3, 0.5, 1.0, 10.0, 1e6}) {
                     double s = ratio * beta;
                     double g = MixingLengthCubic.efficiency(a0, s, beta);
                     double den = MixingLengthCubic.denominator(a0, g);
