@@ -4,16 +4,19 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.MalformedInputException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.SimpleFileVisitor;
+import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import java.util.stream.Stream;
 
 /**
  * Keeps the code blocks of a Markdown file equal to marked regions of source files that the build
@@ -171,17 +174,30 @@ final class Snippets {
      */
     static Map<String, Block> projectRegions(Path root, List<String> problems) {
         Map<String, Block> byName = new LinkedHashMap<>();
-        List<Path> files;
-        try (Stream<Path> walk = Files.walk(root)) {
-            files = walk.filter(Files::isRegularFile)
-                    .filter(p -> !inSkippedFolder(root.relativize(p)))
-                    .filter(p -> p.getFileName().toString().equals("pom.xml")
-                            || root.relativize(p).toString().replace('\\', '/').contains("src/test/"))
-                    .sorted()
-                    .toList();
+        List<Path> files = new ArrayList<>();
+        try {
+            Files.walkFileTree(root, new SimpleFileVisitor<>() {
+                @Override
+                public FileVisitResult preVisitDirectory(Path dir, BasicFileAttributes attrs) {
+                    String name = dir.getFileName() == null ? "" : dir.getFileName().toString();
+                    boolean skip = !dir.equals(root) && (SKIPPED_FOLDERS.contains(name) || name.startsWith("."));
+                    return skip ? FileVisitResult.SKIP_SUBTREE : FileVisitResult.CONTINUE;
+                }
+
+                @Override
+                public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
+                    String relative = root.relativize(file).toString().replace('\\', '/');
+                    if (attrs.isRegularFile()
+                            && (file.getFileName().toString().equals("pom.xml") || relative.contains("src/test/"))) {
+                        files.add(file);
+                    }
+                    return FileVisitResult.CONTINUE;
+                }
+            });
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+        files.sort(null);
         for (Path f : files) {
             List<String> lines;
             try {
@@ -203,16 +219,6 @@ final class Snippets {
         return byName;
     }
 
-    private static boolean inSkippedFolder(Path relative) {
-        for (int i = 0; i < relative.getNameCount() - 1; i++) {
-            String part = relative.getName(i).toString();
-            if (SKIPPED_FOLDERS.contains(part) || part.startsWith(".")) {
-                return true;
-            }
-        }
-        return false;
-    }
-
     /**
      * Compares every tagged Markdown block with the region of the same name, and reports regions
      * that no block shows.
@@ -223,7 +229,7 @@ final class Snippets {
      * @param problems receives one entry per difference, with the text to paste
      */
     static void compare(List<Block> blocks, Map<String, Block> regions, String version, List<String> problems) {
-        Set<String> shown = new java.util.HashSet<>();
+        Set<String> shown = new HashSet<>();
         for (Block b : blocks) {
             Block region = regions.get(b.name());
             if (region == null) {
