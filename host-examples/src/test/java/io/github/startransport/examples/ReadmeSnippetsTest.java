@@ -48,5 +48,9 @@ class ReadmeSnippetsTest {
         Snippets.Block deps = blocks.stream().filter(b -> b.name().equals("host-dependencies")).findFirst().orElseThrow();
         long versions = deps.lines().stream().filter(l -> l.trim().equals("<version>" + VERSION + "</version>")).count();
         assertEquals(2, versions, "both dependencies of the README name version " + VERSION + ": " + deps.lines());
+        String readme = Files.readString(ROOT.resolve("README.md"), StandardCharsets.UTF_8);
+        String hostSection = readme.substring(readme.indexOf("## Using it from a host code"));
+        assertTrue(hostSection.startsWith("## Using it from a host code\n\nVersion " + VERSION + ","),
+                "the README's host section starts by naming version " + VERSION);
     }
 }
