@@ -63,6 +63,12 @@ class NativeCTest {
     }
 
     @Test
+    void theReadmeSnippetRunsAndAgreesWithTheJavaApi() {
+        Path exe = NativeTools.compileC("src/test/c/readme_snippet.c", "readme_snippet_c", true);
+        NativeTools.assertSnippetZones(run(List.of(exe.toString()), environment()));
+    }
+
+    @Test
     void fourAndEightThreadsGiveBitForBitWhatOneThreadGives() {
         Path exe = NativeTools.compileC("src/test/c/threads_test.c", "threads_test", true);
         Path files = NativeTools.exampleFiles(800);

@@ -46,6 +46,12 @@ class NativeFortranTest {
     }
 
     @Test
+    void theReadmeSnippetRunsAndAgreesWithTheJavaApi() {
+        Path exe = NativeTools.compileFortran("src/test/fortran/readme_snippet.f90", "readme_snippet_f");
+        NativeTools.assertSnippetZones(run(List.of(exe.toString()), environment()));
+    }
+
+    @Test
     void moduleHandlesStridedArraysAndRefusesByName() {
         Path exe = NativeTools.compileFortran("src/test/fortran/fortran_test.f90", "fortran_test");
         NativeTools.Run r = run(List.of(exe.toString(), NativeTools.exampleFiles(800).toString()), environment());

@@ -168,6 +168,44 @@ final class NativeTools {
         return dir;
     }
 
+    /**
+     * Checks the output of the README snippet programs (readme_snippet.c, readme_snippet.f90):
+     * "zone K v=V dv_dkappa=D" for their three invented zones, against the Java API's per-zone call on
+     * the same zones, bit for bit.
+     */
+    static void assertSnippetZones(Run r) {
+        assertEquals(0, r.exit(), r.out() + r.err());
+        io.github.startransport.spi.ConvectionModel mlt = io.github.startransport.spi.Transport.discover()
+                .convection("local-mixing-length",
+                        io.github.startransport.spi.ModelOptions.parse("alpha=1.8,criterion=ledoux"));
+        double[][] zones = {  // r, m, T, rho, P, L, kappa, c_P, nabla_ad, delta: the programs' demo numbers
+            {5e10, 1e33, 1e6, 0.1, 1.4e13, 3.8e33, 10.0, 3e8, 0.4, 1.0},
+            {5e10, 1e33, 1e6, 0.1, 1.4e13, 3.8e32, 10.0, 3e8, 0.4, 1.0},
+            {5e10, 1e33, 2e6, 0.2, 5.6e13, 7.6e33, 5.0, 3e8, 0.4, 1.0},
+        };
+        io.github.startransport.spi.ZoneState z = new io.github.startransport.spi.ZoneState();
+        io.github.startransport.spi.ConvectionResult out = new io.github.startransport.spi.ConvectionResult();
+        java.util.regex.Pattern line = java.util.regex.Pattern.compile("zone (\\d+) v=\\s*(\\S+) dv_dkappa=\\s*(\\S+)");
+        int seen = 0;
+        for (String l : r.lines()) {
+            java.util.regex.Matcher m = line.matcher(l);
+            if (!m.matches()) {
+                continue;
+            }
+            double[] q = zones[Integer.parseInt(m.group(1))];
+            z.radius = q[0]; z.mass = q[1]; z.temperature = q[2]; z.density = q[3]; z.pressure = q[4];
+            z.luminosity = q[5]; z.opacity = q[6]; z.cp = q[7]; z.nablaAd = q[8]; z.delta = q[9];
+            mlt.solve(z, out);
+            // zones 0 and 2 convect (so the Jacobian entry is not a trivial zero), zone 1 does not
+            assertEquals(!m.group(1).equals("1"), out.velocity > 0, l);
+            assertEquals(Double.doubleToRawLongBits(out.velocity), Double.doubleToRawLongBits(Double.parseDouble(m.group(2))), l);
+            assertEquals(Double.doubleToRawLongBits(out.dVelocity[io.github.startransport.spi.ZoneInput.KAPPA]),
+                    Double.doubleToRawLongBits(Double.parseDouble(m.group(3))), l);
+            seen++;
+        }
+        assertEquals(3, seen, r.out());
+    }
+
     static void prepare() {
         try {
             Files.createDirectories(WORK);
