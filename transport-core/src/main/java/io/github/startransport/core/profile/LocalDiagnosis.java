@@ -290,8 +290,11 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 }
                 vmax = OptionalDouble.of(peak);
                 if (peak > 0.0) {
-                    turnGlobal = OptionalDouble.of(Timescale.turnoverGlobal(r, v, first, last, rb, rt));
-                    double local = Timescale.turnoverLocal(r, hp, ell, v, first, last, rb, rt);
+                    // the envelope integral of dr / v diverges at the centre of a core: there the
+                    // core's radius over its mass-weighted mean velocity (see Timescale)
+                    turnGlobal = OptionalDouble.of(first == 0 ? Timescale.turnoverCore(m, v, last, rt, top[1])
+                            : Timescale.turnoverGlobal(r, v, first, last, rb, rt));
+                    double local = Timescale.turnoverLocal(r, ell, v, first, last, rb, rt);
                     if (local > 0.0) {
                         turnLocal = OptionalDouble.of(local);
                     }
