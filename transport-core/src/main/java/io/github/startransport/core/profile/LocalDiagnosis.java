@@ -211,6 +211,13 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         out.put(DiagnosisColumn.NABLA_AD, nablaAd);
         out.put(DiagnosisColumn.NABLA_MU, nablaMu);
 
+        // does the profile's own gradient agree with the physics? (see ModelConsistency)
+        double[] nablaModel = computed(out, DiagnosisColumn.NABLA_MODEL, n);
+        double[] mismatch = computed(out, DiagnosisColumn.NABLA_MISMATCH, n);
+        ModelConsistency.nablaModel(t, pres, nablaModel);
+        ModelConsistency.mismatch(nablaModel, nabla, nablaRad, nablaAd, regimes, mismatch);
+        warnings.addAll(ModelConsistency.warnings(mismatch, regimes, k -> zoneAsGiven(p, k)));
+
         List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, nablaMu, criterion);
         Timescales times = new Timescales(
                 Timescale.photonDiffusion(r, kappa, rho),
