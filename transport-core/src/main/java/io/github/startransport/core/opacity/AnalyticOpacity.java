@@ -77,10 +77,11 @@ public final class AnalyticOpacity implements OpacityModel {
             List.of(new OptionInfo(AnalyticOpacity.BOUND_FREE_OPTION, AnalyticOpacity.K_SHELL, "1",
                             "g_bf / t in Kramers' bound-free law (Carroll & Ostlie 1996 quote the guillotine factor t "
                                     + "between 1 and 100): 'k-shell' for t(T) = 1 + (T / 4.25e5 K) exp(-1.0105e7 K / T), "
-                                    + "t within 6 % of 1 up to 2.2 MK, rising as the K shells of C, N, O, Ne empty (20.4 at the solar "
-                                    + "centre); within a factor 1.5 of tabulated Rosseland means at the solar centre (its "
-                                    + "calibration point), the solar convection-zone base and 1 MK; or a number for a constant g_bf / t (1 = the published "
-                                    + "law, right from 1 to 3 MK and ~10x high at the solar centre)"),
+                                    + "t within 6 % of 1 up to 2.2 MK, rising as the K shells of C, N, O, Ne empty "
+                                    + "(20.4 at the solar centre); within a factor 1.5 of tabulated Rosseland means at "
+                                    + "the solar centre (its calibration point), the solar convection-zone base and 1 MK; "
+                                    + "or a number for a constant g_bf / t (1 = the published law, right from 1 to 3 MK "
+                                    + "and ~10x high at the solar centre)"),
                     new OptionInfo("free-free-gaunt", "1.0", "1", "g_ff in Kramers' free-free law")));
 
     /** The model with its default options: the temperature-dependent guillotine factor, g_ff = 1. */
