@@ -51,28 +51,46 @@ public final class ModelConsistency {
      */
     public static void nablaModel(double[] t, double[] p, double[] out) {
         int n = t.length;
-        double[] lnT = new double[n];
-        double[] lnP = new double[n];
-        for (int k = 0; k < n; k++) {
-            lnT[k] = Math.log(t[k]);
-            lnP[k] = Math.log(p[k]);
-        }
-        for (int k = 0; k < n; k++) {
-            int a = k == 0 ? 0 : k == n - 1 ? n - 3 : k - 1; // first zone of the stencil
-            if (!(lnP[a + 1] < lnP[a] && lnP[a + 2] < lnP[a + 1])) {
+        // a window of three zones' ln T and ln P, moved outwards: no working arrays, two logs per zone
+        double x0 = Math.log(p[0]);
+        double x1 = Math.log(p[1]);
+        double x2 = Math.log(p[2]);
+        double f0 = Math.log(t[0]);
+        double f1 = Math.log(t[1]);
+        double f2 = Math.log(t[2]);
+        out[0] = oneSided(x0, f0, x1, f1, x2, f2, true);
+        for (int k = 1; k < n - 1; k++) {
+            if (k > 1) {
+                x0 = x1;
+                x1 = x2;
+                x2 = Math.log(p[k + 1]);
+                f0 = f1;
+                f1 = f2;
+                f2 = Math.log(t[k + 1]);
+            }
+            if (!(x1 < x0 && x2 < x1)) {
                 out[k] = Double.NaN;
-            } else if (k == 0 || k == n - 1) {
-                int j1 = k == 0 ? 1 : n - 2;
-                int j2 = k == 0 ? 2 : n - 3;
-                double h1 = lnP[j1] - lnP[k];
-                double h2 = lnP[j2] - lnP[k];
-                out[k] = h2 / (h1 * (h2 - h1)) * (lnT[j1] - lnT[k]) - h1 / (h2 * (h2 - h1)) * (lnT[j2] - lnT[k]);
             } else {
-                double h0 = lnP[k] - lnP[k - 1];
-                double h1 = lnP[k + 1] - lnP[k];
-                out[k] = -h1 / (h0 * (h0 + h1)) * (lnT[k - 1] - lnT[k]) + h0 / (h1 * (h0 + h1)) * (lnT[k + 1] - lnT[k]);
+                double h0 = x1 - x0;
+                double h1 = x2 - x1;
+                out[k] = -h1 / (h0 * (h0 + h1)) * (f0 - f1) + h0 / (h1 * (h0 + h1)) * (f2 - f1);
             }
         }
+        out[n - 1] = oneSided(x2, f2, x1, f1, x0, f0, false);
+    }
+
+    /**
+     * d f / d x at x_a from three points, exact for quadratics: the centre zone and the two beyond it
+     * ({@code centre}), whose ln P must fall strictly, or the surface zone and the two inside it, whose
+     * ln P must rise strictly inwards; NaN otherwise.
+     */
+    private static double oneSided(double xa, double fa, double xb, double fb, double xc, double fc, boolean centre) {
+        if (!(centre ? xb < xa && xc < xb : xb > xa && xc > xb)) {
+            return Double.NaN;
+        }
+        double h1 = xb - xa;
+        double h2 = xc - xa;
+        return h2 / (h1 * (h2 - h1)) * (fb - fa) - h1 / (h2 * (h2 - h1)) * (fc - fa);
     }
 
     /**

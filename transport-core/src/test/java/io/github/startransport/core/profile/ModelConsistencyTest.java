@@ -49,6 +49,13 @@ class ModelConsistencyTest {
         assertTrue(Double.isNaN(out[3]) && Double.isNaN(out[4]) && Double.isFinite(out[5]) && Double.isFinite(out[2]));
         assertEquals(expected[1], out[1], 1e-10);
         assertEquals(expected[7], out[7], 1e-10);
+        // pressure rising outwards at either end: the end zones get NaN as well
+        p[4] = 0.5 * (p[3] + p[5]);
+        p[0] = 0.9 * p[1];
+        p[8] = 1.1 * p[7];
+        ModelConsistency.nablaModel(t, p, out);
+        assertTrue(Double.isNaN(out[0]) && Double.isNaN(out[1]) && Double.isNaN(out[7]) && Double.isNaN(out[8]));
+        assertTrue(Double.isFinite(out[4]));
     }
 
     @Test
