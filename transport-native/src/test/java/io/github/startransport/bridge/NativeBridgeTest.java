@@ -220,7 +220,10 @@ class NativeBridgeTest {
         load(ws, 100, count);
         int all = (1 << 14) - 1;
         int some = all & ~(1 << 12) & ~(1 << 13);
-        for (int round = 0; round < 2; round++) {
+        // rounds of 8000 chunk calls until one allocates nothing: the first rounds may see the JIT
+        // recompile (and reallocate what it had scalar-replaced), a steady state allocates 0 bytes
+        java.util.List<Long> rounds = new java.util.ArrayList<>();
+        for (int round = 0; round < 12; round++) {
             long before = threads.getCurrentThreadAllocatedBytes();
             for (int i = 0; i < 2000; i++) {
                 NativeBridge.thermodynamics(ws, thermo, count, 0);
@@ -228,10 +231,11 @@ class NativeBridgeTest {
                 NativeBridge.stability(ws, stability, count, 0, true, all);
                 NativeBridge.convection(ws, convection, count, 0, true, some);
             }
-            long bytes = threads.getCurrentThreadAllocatedBytes() - before;
-            if (round == 1) {
-                assertEquals(0, bytes, "bytes allocated by 8000 warm chunk calls");
+            rounds.add(threads.getCurrentThreadAllocatedBytes() - before);
+            if (round > 0 && rounds.get(round) == 0) {
+                break;
             }
         }
+        assertEquals(0L, rounds.get(rounds.size() - 1), "bytes allocated per round of 8000 chunk calls: " + rounds);
     }
 }

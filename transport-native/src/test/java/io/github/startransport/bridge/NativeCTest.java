@@ -91,12 +91,14 @@ class NativeCTest {
         List<String> rounds = r.lines().stream().filter(l -> l.startsWith("allocation: round")).toList();
         assertTrue(!rounds.isEmpty(), r.out());
         for (String round : rounds) {
-            // the library itself never allocates after its first call on a thread, nor does the Java side
-            assertTrue(round.contains(": library 0,") && round.endsWith("java bytes 0"), round);
+            // the library itself never allocates after its first call on a thread
+            assertTrue(round.contains(": library 0,"), round);
         }
-        // and once the JIT has settled, nothing on the calling thread mallocs at all (the JVM included)
+        // and once the JIT has settled (it may recompile, and reallocate on the way, in the first
+        // rounds), nothing on the calling thread allocates at all: no malloc by anyone in the
+        // process, no byte on the Java heap
         String last = rounds.get(rounds.size() - 1);
-        assertTrue(last.contains("thread mallocs 0,"), String.join("\n", rounds));
+        assertTrue(last.contains("thread mallocs 0,") && last.endsWith("java bytes 0"), String.join("\n", rounds));
     }
 
     @Test

@@ -154,10 +154,15 @@ final class NativeTools {
         return exe;
     }
 
-    /** The example files (models.txt, profile.csv, reference.csv) for a demo star of that many points. */
+    private static final java.util.Set<Integer> WRITTEN = new java.util.HashSet<>();
+
+    /**
+     * The example files (models.txt, profile.csv, reference.csv) for a demo star of that many points,
+     * written once per test run by the library as it is now (never taken from an earlier build).
+     */
     static synchronized Path exampleFiles(int points) {
         Path dir = WORK.resolve("example-" + points);
-        if (!Files.exists(dir.resolve("reference.csv"))) {
+        if (WRITTEN.add(points)) {
             try {
                 ExampleReference.main(new String[] {dir.toString(), Integer.toString(points)});
             } catch (IOException e) {
