@@ -177,15 +177,18 @@ final class DiagnosisCharts {
         return k -> d.value(DiagnosisColumn.RADIUS, k) / big;
     }
 
-    /** Most points one series draws: more than a 1200-pixel-wide plot can show apart. */
+    /** Up to this many zones a series draws every zone. */
     static final int MAX_POINTS = 4000;
+    /** Beyond {@link #MAX_POINTS} zones, a series is cut into this many runs of neighbouring zones. */
+    static final int RUNS = 1000;
 
     /**
      * Zones to draw of one series: all of them when there are at most {@link #MAX_POINTS};
-     * otherwise, in each of {@code MAX_POINTS / 4} runs of neighbouring zones, the first, the
-     * last, the smallest and the largest drawable value, and one undrawable zone if the run
-     * holds any (so a gap stays a gap). Extremes are never lost, and the cost does not depend on
-     * how many zones there are beyond one pass.
+     * otherwise, in each of {@link #RUNS} runs of neighbouring zones, the first, the last, the
+     * smallest and the largest drawable value, and one undrawable zone if the run holds any (so
+     * a gap stays a gap): at most 5 points a run, fewer than a 1200-pixel plot can tell apart.
+     * Extremes are never lost, and the cost beyond one pass over the zones does not grow with
+     * their number.
      *
      * @param n number of zones
      * @param x the abscissa
@@ -200,7 +203,7 @@ final class DiagnosisCharts {
             }
             return all;
         }
-        int buckets = MAX_POINTS / 4;
+        int buckets = RUNS;
         int[] keep = new int[buckets * 5];
         int m = 0;
         for (int b = 0; b < buckets; b++) {
