@@ -33,7 +33,7 @@ import java.util.Map;
  * anywhere. Each record is one physical line (no line breaks inside quoted cells).
  *
  * <p>The file is streamed: bytes are split into cells in place, and the cells of our columns
- * go straight into growing {@code double} columns ({@link NumberSyntax}); cells of other columns
+ * go straight into growing {@code double} columns ({@link NumberSyntax}, no object per cell); cells of other columns
  * are counted, not parsed. Memory is the profile's columns (8 bytes per zone and column) plus
  * one buffer. A line holding a double quote takes a slower path through commons-csv.
  *
@@ -312,7 +312,6 @@ final class ProfileCsvReader {
         }
 
         Columns columns = new Columns(ours.length, SAMPLE_ROWS);
-        char[] chars = new char[NumberSyntax.MAX_LENGTH];
         long firstDataOffset = -1;
         MemoryAdvice.reading(file, src.size);
         while (src.next()) {
@@ -334,10 +333,10 @@ final class ProfileCsvReader {
                 MemoryAdvice.progress(n, src.consumed);
             }
             columns.add();
-            if (!row(src, slot, width, columns, chars)) {
+            if (!row(src, slot, width, columns)) {
                 slowRow(name, src, header, slot, ours, columns, hl);
             }
-            checkRow(name, src, header, slot, ours, columns, hl, chars);
+            checkRow(name, src, header, slot, ours, columns, hl);
         }
         if (columns.size == 0) {
             throw new DataFormatException(name, hl, 0, "the header is followed by no data rows");
@@ -406,7 +405,7 @@ final class ProfileCsvReader {
      *
      * @return {@code false} when the line holds a double quote (the slow path reads it)
      */
-    private static boolean row(LineSource src, int[] slot, int width, Columns columns, char[] chars) {
+    private static boolean row(LineSource src, int[] slot, int width, Columns columns) {
         byte[] b = src.buf;
         int end = src.to;
         int k = columns.size - 1;
@@ -430,13 +429,13 @@ final class ProfileCsvReader {
                 while (z > a && (b[z - 1] == ' ' || b[z - 1] == '\t')) {
                     z--;
                 }
-                int len = NumberSyntax.copy(b, a, z, chars);
-                if (len < 0) {
+                double value = NumberSyntax.parse(b, a, z);
+                if (Double.isNaN(value)) {
                     if (columns.badColumn < 0) {
                         columns.badColumn = j;
                     }
                 } else {
-                    columns.v[slot[j]][k] = NumberSyntax.parse(chars, len);
+                    columns.v[slot[j]][k] = value;
                 }
             }
             j++;
@@ -471,7 +470,7 @@ final class ProfileCsvReader {
     }
 
     private static void checkRow(String name, LineSource src, List<String> header, int[] slot, ProfileColumn[] ours,
-                                 Columns columns, int headerLine, char[] chars) {
+                                 Columns columns, int headerLine) {
         int line = (int) Math.min(Integer.MAX_VALUE, src.lineNo);
         if (columns.cells != header.size()) {
             throw new DataFormatException(name, line, 0, "this row has " + columns.cells + " cells but the header"
