@@ -217,6 +217,38 @@ class OutputFolderTest {
         }
     }
 
+    @Test
+    void theToolRefusesSomeonesFolderWithExitOneAndTouchesNothing(@TempDir Path dir) throws IOException {
+        // the command: mkdir -p out/mine; echo precious > out/mine/summary.json; diagnose p.csv --out out
+        Path p = ProfileFiles.valid(dir, "p.csv");
+        Path mine = Files.createDirectories(dir.resolve("out/mine"));
+        Files.writeString(mine.resolve("summary.json"), "precious\n");
+        Runs r = Runs.run("diagnose", p.toString(), "--out", dir.resolve("out").toString());
+        assertEquals(1, r.code(), r.toString());
+        assertTrue(r.err().contains("did not make") && !r.err().contains("Exception"), r.err());
+        assertEquals("precious\n", Files.readString(mine.resolve("summary.json")));
+        assertEquals(List.of("mine"), names(dir.resolve("out")));
+    }
+
+    @Test
+    void theToolReportsACommittedRunWhoseOldFolderStaysAsSuccess(@TempDir Path dir) throws IOException {
+        Path p = ProfileFiles.valid(dir, "p.csv");
+        Path out = dir.resolve("out");
+        assertEquals(0, Runs.run("diagnose", p.toString(), "--out", out.toString()).code());
+        Path old = out.toRealPath();
+        OutputFolder.faults = (step, path) -> {
+            if (step == OutputFolder.Step.DELETE && path.startsWith(old)) {
+                throw new AccessDeniedException(path.toString()); // what a read-only folder gives a non-root user
+            }
+        };
+        Runs r = Runs.run("diagnose", "--demo", "--out", out.toString());
+        assertEquals(0, r.code(), r.toString());
+        assertTrue(r.err().contains("warning: the new output is in place") && r.err().contains(old.toString()),
+                r.err());
+        assertFalse(r.err().contains("internal error") || r.err().contains("Exception\n\tat"), r.err());
+        assertTrue(Files.readString(out.resolve("summary.json")).contains("Corvina"));
+    }
+
     static boolean chattr(String flag, Path p) {
         try {
             Process pr = new ProcessBuilder("chattr", flag, p.toString()).redirectErrorStream(true).start();
