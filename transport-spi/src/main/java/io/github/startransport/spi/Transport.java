@@ -275,4 +275,9 @@ public final class Transport {
     public OpacityTableTool opacityTables(String name, ModelOptions options) {
         return model(ModelFamily.OPACITY_TABLES, name, options);
     }
+
+    /** @return shortcut for {@code model(ModelFamily.ENVELOPE, name, options)} */
+    public EnvelopeIntegrator envelope(String name, ModelOptions options) {
+        return model(ModelFamily.ENVELOPE, name, options);
+    }
 }
