@@ -23,9 +23,9 @@ import java.util.Set;
  * previous run's output); otherwise it is refused, so no one's other files are ever deleted.
  */
 final class OutputFolder implements AutoCloseable {
-    /** The names of the files one diagnosis writes. */
+    /** The names of the files one diagnosis or one envelope writes. */
     static final Set<String> OUR_FILES = Set.of("zones.csv", "summary.json", DiagnosisCharts.GRADIENTS_PNG,
-            DiagnosisCharts.MIXING_PNG, DiagnosisCharts.OPACITY_PNG);
+            DiagnosisCharts.MIXING_PNG, DiagnosisCharts.OPACITY_PNG, EnvelopeCommand.CSV, EnvelopeCommand.PNG);
 
     private final Path target;
     private final Path staging;

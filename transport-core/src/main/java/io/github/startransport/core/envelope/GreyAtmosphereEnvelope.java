@@ -464,7 +464,8 @@ public final class GreyAtmosphereEnvelope implements EnvelopeIntegrator {
                 topLnP = c.lnP();
             } else if (!c.increasing() && inside) {
                 inside = false;
-                zones.add(new ConvectiveZone(zoneTop, c.y()[EnvelopeEquations.R], true, Double.NaN));
+                zones.add(new ConvectiveZone(zoneTop, c.y()[EnvelopeEquations.R], Math.exp(topLnP), Math.exp(c.lnP()),
+                        true, Double.NaN));
                 zoneSpans.add(new double[] {topLnP, c.lnP()});
                 if (base == null) {
                     base = base(eq, c, star);
@@ -472,7 +473,8 @@ public final class GreyAtmosphereEnvelope implements EnvelopeIntegrator {
             }
         }
         if (inside) {
-            zones.add(new ConvectiveZone(zoneTop, y[EnvelopeEquations.R], false, Double.NaN));
+            zones.add(new ConvectiveZone(zoneTop, y[EnvelopeEquations.R], Math.exp(topLnP), Math.exp(tEnd), false,
+                    Double.NaN));
             zoneSpans.add(new double[] {topLnP, tEnd});
         }
         if (base != null && 1.0 - base.massFraction() > MASS_WARNING) {
@@ -554,7 +556,8 @@ public final class GreyAtmosphereEnvelope implements EnvelopeIntegrator {
             List<ConvectiveZone> withMax = new ArrayList<>();
             for (int z = 0; z < zones.size(); z++) {
                 ConvectiveZone cz = zones.get(z);
-                withMax.add(new ConvectiveZone(cz.topRadius(), cz.bottomRadius(), cz.bottomReached(),
+                withMax.add(new ConvectiveZone(cz.topRadius(), cz.bottomRadius(), cz.topPressure(),
+                        cz.bottomPressure(), cz.bottomReached(),
                         maxPerZone[z] == Double.NEGATIVE_INFINITY ? Double.NaN : maxPerZone[z]));
             }
             zones = withMax;
