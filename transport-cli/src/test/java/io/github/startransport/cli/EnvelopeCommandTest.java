@@ -18,7 +18,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /** {@code envelope} through the main entry point. */
 class EnvelopeCommandTest {
     private static final String[] SUN = {"--mass-msun", "1", "--radius-rsun", "1", "--luminosity-lsun", "1",
-        "--hydrogen", "0.7389", "--metals", "0.0134"};
+        "--hydrogen", "0.7381", "--metals", "0.0134"};
 
     private static Runs envelope(Path out, String... more) {
         String[] args = new String[1 + SUN.length + more.length + 2];

@@ -13,10 +13,10 @@ final class Stars {
     }
 
     /**
-     * Solar surface composition X = 0.7389, Z = 0.0134 (Asplund, Grevesse, Sauval &amp; Scott 2009,
+     * Solar surface composition X = 0.7381, Z = 0.0134 (Asplund, Grevesse, Sauval &amp; Scott 2009,
      * ARA&amp;A 47, 481, Table 4, present-day photosphere [values from memory]).
      */
-    static final double SUN_X = 0.7389;
+    static final double SUN_X = 0.7381;
     /** See {@link #SUN_X}. */
     static final double SUN_Z = 0.0134;
 
