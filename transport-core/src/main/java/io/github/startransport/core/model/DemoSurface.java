@@ -2,9 +2,11 @@ package io.github.startransport.core.model;
 
 import io.github.startransport.core.convection.LocalMixingLength;
 import io.github.startransport.core.envelope.GreyAtmosphereEnvelope;
-import io.github.startransport.core.gradient.IdealGasRadiation;
+import io.github.startransport.core.CoreProvider;
 import io.github.startransport.core.opacity.AnalyticOpacity;
 import io.github.startransport.spi.EnvelopeSetup;
+import io.github.startransport.spi.ModelFamily;
+import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.EnvelopeSolution;
 import io.github.startransport.spi.EnvelopeStar;
 import io.github.startransport.spi.Profile;
@@ -40,9 +42,15 @@ final class DemoSurface {
     private DemoSurface() {
     }
 
-    /** @return the models the demo envelope is integrated with */
+    /**
+     * @return the models the demo envelope is integrated with: the core provider's default of each family
+     *         (the thermodynamics default is the one the diagnosis falls back on)
+     */
     static EnvelopeSetup models() {
-        return new EnvelopeSetup(new LocalMixingLength(), AnalyticOpacity.DEFAULT, IdealGasRadiation.INSTANCE);
+        CoreProvider core = new CoreProvider();
+        return new EnvelopeSetup(new LocalMixingLength(), AnalyticOpacity.DEFAULT,
+                core.create(ModelFamily.THERMODYNAMICS, core.defaultModel(ModelFamily.THERMODYNAMICS),
+                        ModelOptions.defaults()));
     }
 
     /**

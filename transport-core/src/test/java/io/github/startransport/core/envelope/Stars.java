@@ -2,9 +2,11 @@ package io.github.startransport.core.envelope;
 
 import io.github.startransport.core.constants.Iau2015;
 import io.github.startransport.core.convection.LocalMixingLength;
-import io.github.startransport.core.gradient.IdealGasRadiation;
+import io.github.startransport.core.CoreProvider;
 import io.github.startransport.core.opacity.AnalyticOpacity;
 import io.github.startransport.spi.EnvelopeSetup;
+import io.github.startransport.spi.ModelFamily;
+import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.EnvelopeStar;
 
 /** The stars and model sets the envelope tests share. */
@@ -25,8 +27,11 @@ final class Stars {
         return new EnvelopeStar(Iau2015.SOLAR_MASS, Iau2015.SOLAR_RADIUS, Iau2015.SOLAR_LUMINOSITY, SUN_X, SUN_Z);
     }
 
-    /** @return the library's default models, alpha 1.8 */
+    /** @return the core provider's default models of each family, alpha 1.8 */
     static EnvelopeSetup defaults() {
-        return new EnvelopeSetup(new LocalMixingLength(), AnalyticOpacity.DEFAULT, IdealGasRadiation.INSTANCE);
+        CoreProvider core = new CoreProvider();
+        return new EnvelopeSetup(new LocalMixingLength(), AnalyticOpacity.DEFAULT,
+                core.create(ModelFamily.THERMODYNAMICS, core.defaultModel(ModelFamily.THERMODYNAMICS),
+                        ModelOptions.defaults()));
     }
 }
