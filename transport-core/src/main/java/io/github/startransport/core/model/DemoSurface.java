@@ -29,9 +29,9 @@ import java.util.Map;
  * {@value #JOIN_HIGH} R ln T, ln rho and ln P go smoothly (a cubic smoothstep in r) from the
  * polytrope's values to the envelope's; there the two differ by a few per cent to ~15 % for the
  * demo star, so the join leaves no step. m above the join is the polytrope's m there plus the
- * envelope's own mass increments, so the total mass differs from M by the two models' different
- * envelope masses (~1e-5 M). L is the polytrope's below the outer end of the join and the surface
- * L above it (the envelope holds L constant).
+ * envelope's own mass increments scaled so that the outermost zone holds M (the two models put
+ * different masses above 0.75 R, ~0.5 % of M). L is the polytrope's below the outer end of the join
+ * and the surface L above it (the envelope holds L constant).
  */
 final class DemoSurface {
     /** Inner end of the join and the stated depth of the envelope integration (r / R). */
@@ -91,7 +91,8 @@ final class DemoSurface {
             double r = envelope.value(ProfileColumn.RADIUS, k);
             double x = (r / radius - JOIN_LOW) / (JOIN_HIGH - JOIN_LOW);
             double w = x <= 0.0 ? 0.0 : x >= 1.0 ? 1.0 : x * x * (3.0 - 2.0 * x);
-            double m = massAtJoin + (envelope.value(ProfileColumn.MASS, k) - envelopeMassAtJoin);
+            double m = massAtJoin + (model.mass() - massAtJoin)
+                    * ((envelope.value(ProfileColumn.MASS, k) - envelopeMassAtJoin) / (model.mass() - envelopeMassAtJoin));
             double t = envelope.value(ProfileColumn.TEMPERATURE, k);
             double rho = envelope.value(ProfileColumn.DENSITY, k);
             double p = envelope.value(ProfileColumn.PRESSURE, k);
