@@ -2,6 +2,7 @@ package io.github.startransport.core.profile;
 
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.gradient.LedouxGradient;
+import io.github.startransport.core.gradient.StabilityClassifier;
 import io.github.startransport.core.timescale.Timescale;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
@@ -39,8 +40,9 @@ import java.util.OptionalDouble;
  * composition ({@link CompositionGradient}); phi = 1 (ideal gas).
  *
  * <p>Region boundaries lie where the quantity that separates the two regimes changes sign, found
- * by {@link BoundaryFinder} between the two zones: the chosen criterion's margin at the edge of a
- * convective region, the Schwarzschild margin at the edge of a semiconvective region, nabla_mu
+ * by {@link BoundaryFinder} between the two zones: the chosen criterion's convective margin
+ * ({@link StabilityClassifier#convectiveMargin}: nabla_rad - nabla_L under Ledoux,
+ * nabla_rad - min(nabla_ad, nabla_L) under Schwarzschild) at the edge of a convective region, the Schwarzschild margin at the edge of a semiconvective region, nabla_mu
  * at the edge of a thermohaline region. The Schwarzschild and Ledoux boundaries are both
  * reported where a margin of each kind changes sign next to the edge.
  *
@@ -128,6 +130,7 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] ell = new double[n];
         double[] marginS = new double[n];
         double[] marginL = new double[n];
+        double[] marginC = new double[n];
         Regime[] regimes = new Regime[n];
 
         ZoneState zone = new ZoneState();
@@ -184,6 +187,7 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             regimes[k] = conv.regime;
             marginS[k] = nablaRad[k] - nablaAd[k];
             marginL[k] = nablaRad[k] - nablaL[k];
+            marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
         }
         if (!hasThermo) {
             warnings.add("nabla_ad, c_P and delta were computed by " + setup.thermodynamics()
@@ -211,7 +215,7 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         out.put(DiagnosisColumn.NABLA_AD, nablaAd);
         out.put(DiagnosisColumn.NABLA_MU, nablaMu);
 
-        List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, nablaMu, criterion);
+        List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, marginC, nablaMu);
         Timescales times = new Timescales(
                 Timescale.photonDiffusion(r, kappa, rho),
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
@@ -240,11 +244,16 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         return a;
     }
 
-    /** The quantity whose sign change separates regime a (inside) from regime b (outside). */
-    private static double[] separator(Regime inside, Regime outside, Criterion criterion, double[] marginS,
-                                      double[] marginL, double[] nablaMu) {
+    /**
+     * The quantity whose sign change separates regime a (inside) from regime b (outside): the
+     * criterion's convective margin ({@link StabilityClassifier#convectiveMargin}) at the edge of a
+     * convective region, the Schwarzschild margin at the edge of a semiconvective one, nabla_mu between
+     * thermohaline and radiative zones.
+     */
+    private static double[] separator(Regime inside, Regime outside, double[] marginS, double[] marginC,
+                                      double[] nablaMu) {
         if (inside == Regime.CONVECTIVE || outside == Regime.CONVECTIVE) {
-            return criterion == Criterion.LEDOUX ? marginL : marginS;
+            return marginC;
         }
         if (inside == Regime.SEMICONVECTIVE || outside == Regime.SEMICONVECTIVE) {
             return marginS;
@@ -253,8 +262,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
     }
 
     static List<Region> regions(double[] r, double[] m, double[] pres, double[] hp, double[] ell, double[] v,
-                                Regime[] regimes, double[] marginS, double[] marginL, double[] nablaMu,
-                                Criterion criterion) {
+                                Regime[] regimes, double[] marginS, double[] marginL, double[] marginC,
+                                double[] nablaMu) {
         int n = r.length;
         double radius = r[n - 1];
         double mass = m[n - 1];
@@ -273,11 +282,9 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             }
             // bottom at the centre, top at the surface, or between the zones either side of the edge
             double[] bottom = first == 0 ? new double[] {0.0, 0.0, pres[0]}
-                    : edgeBetween(first - 1, first, separator(regime, regimes[first - 1], criterion, marginS, marginL,
-                    nablaMu), r, m, pres);
+                    : edgeBetween(first - 1, first, separator(regime, regimes[first - 1], marginS, marginC, nablaMu), r, m, pres);
             double[] top = last == n - 1 ? new double[] {radius, mass, pres[n - 1]}
-                    : edgeBetween(last, last + 1, separator(regime, regimes[last + 1], criterion, marginS, marginL,
-                    nablaMu), r, m, pres);
+                    : edgeBetween(last, last + 1, separator(regime, regimes[last + 1], marginS, marginC, nablaMu), r, m, pres);
             double rb = bottom[0];
             double rt = top[0];
             OptionalDouble turnGlobal = OptionalDouble.empty();

@@ -135,6 +135,65 @@ class LocalDiagnosisTest {
         assertEquals(s.regions().get(0).topRadius(), schwarzschildTop, 1e-9 * schwarzschildTop);
     }
 
+    /**
+     * A composition inversion above the core (X = 0.75 inside zone k0, 0.70 outside, so mu rises outwards
+     * and nabla_mu &lt; 0 at the step): where nabla_rad &gt; nabla_L the zones are dynamically unstable
+     * (Kippenhahn, Ruschenplatt &amp; Thomas 1980: R0 &lt; 1) and convective under both criteria, with the
+     * same v and D; every zone's regime is the rule table's for its own gradients
+     * ({@link io.github.startransport.core.gradient.StabilityClassifier}); the convective region's edges
+     * lie where nabla_rad - nabla_L changes sign.
+     */
+    @Test
+    void anInvertedCompositionStepConvectsUnderBothCriteria() {
+        Profile smooth = new DemoStar(800).profile();
+        int coreTop = diagnose(smooth, "schwarzschild").regions().get(0).lastZone();
+        int k0 = coreTop + 15;
+        Map<ProfileColumn, double[]> cols = columns(smooth);
+        double[] x = cols.get(ProfileColumn.HYDROGEN);
+        for (int k = 0; k <= k0; k++) {
+            x[k] = 0.75;
+        }
+        Profile p = new Profile("inverted step", cols);
+        ProfileDiagnosis s = diagnose(p, "schwarzschild");
+        ProfileDiagnosis l = diagnose(p, "ledoux");
+        double[] nablaRad = s.column(DiagnosisColumn.NABLA_RAD);
+        double[] nablaL = s.column(DiagnosisColumn.NABLA_LEDOUX);
+        double[] nablaAd = s.column(DiagnosisColumn.NABLA_AD);
+        double[] nablaMu = s.column(DiagnosisColumn.NABLA_MU);
+        double[] r = s.column(DiagnosisColumn.RADIUS);
+        int unstable = 0;
+        for (int k = 0; k < p.size(); k++) {
+            for (ProfileDiagnosis d : List.of(s, l)) {
+                io.github.startransport.spi.Criterion c = d == s ? io.github.startransport.spi.Criterion.SCHWARZSCHILD
+                        : io.github.startransport.spi.Criterion.LEDOUX;
+                assertEquals(io.github.startransport.core.gradient.StabilityClassifier.classify(c, nablaRad[k],
+                        nablaAd[k], nablaL[k], nablaMu[k]), d.regimes()[k], "zone " + k + " under " + c);
+                assertEquals(d.regimes()[k] != Regime.RADIATIVE, d.column(DiagnosisColumn.DIFFUSION)[k] > 0.0);
+            }
+            if (nablaMu[k] < 0.0 && nablaRad[k] > nablaL[k] && nablaRad[k] <= nablaAd[k]) {
+                unstable++;
+                assertEquals(Regime.CONVECTIVE, s.regimes()[k], "zone " + k);
+                assertEquals(Regime.CONVECTIVE, l.regimes()[k], "zone " + k);
+                assertTrue(s.column(DiagnosisColumn.VELOCITY)[k] > 0.0);
+                assertEquals(s.column(DiagnosisColumn.VELOCITY)[k], l.column(DiagnosisColumn.VELOCITY)[k]);
+                assertEquals(s.column(DiagnosisColumn.DIFFUSION)[k], l.column(DiagnosisColumn.DIFFUSION)[k]);
+                assertEquals(s.column(DiagnosisColumn.NABLA)[k], l.column(DiagnosisColumn.NABLA)[k]);
+            }
+        }
+        assertTrue(unstable > 0, "the step makes Schwarzschild-stable zones Ledoux-unstable");
+        Region step = s.regions().stream()
+                .filter(g -> g.regime() == Regime.CONVECTIVE && g.firstZone() > coreTop && g.lastZone() < p.size() - 50)
+                .findFirst().orElseThrow(() -> new AssertionError("no convective region at the step: " + s.regions()));
+        int a = step.firstZone() - 1;
+        double f0 = nablaRad[a] - nablaL[a];
+        double f1 = nablaRad[a + 1] - nablaL[a + 1];
+        assertEquals(r[a] + (r[a + 1] - r[a]) * f0 / (f0 - f1), step.bottomRadius(), 1e-9 * r[a]);
+        int b = step.lastZone();
+        double g0 = nablaRad[b] - nablaL[b];
+        double g1 = nablaRad[b + 1] - nablaL[b + 1];
+        assertEquals(r[b] + (r[b + 1] - r[b]) * g0 / (g0 - g1), step.topRadius(), 1e-9 * r[b]);
+    }
+
     @Test
     void resamplingConvergesAtSecondOrder() {
         // boundary by linear interpolation and trapezoidal integrals: error O(h^2) expected (common practice)
