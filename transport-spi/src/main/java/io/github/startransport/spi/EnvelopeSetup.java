@@ -13,7 +13,14 @@ import java.util.Objects;
  * @param thermodynamics the equation of state: density from pressure and temperature, nabla_ad, c_P, delta
  */
 public record EnvelopeSetup(ConvectionModel convection, OpacityModel opacity, ThermodynamicsModel thermodynamics) {
-    /** Validates that no model is null. */
+    /**
+     * Validates that no model is null.
+     *
+     * @param convection     the convection model (its criterion decides the regime; in a homogeneous
+     *                envelope Schwarzschild and Ledoux agree)
+     * @param opacity        the opacity model
+     * @param thermodynamics the equation of state: density from pressure and temperature, nabla_ad, c_P, delta
+     */
     public EnvelopeSetup {
         Objects.requireNonNull(convection, "convection");
         Objects.requireNonNull(opacity, "opacity");

@@ -37,7 +37,15 @@ public record EnvelopeStar(double mass, double radius, double luminosity, double
                 luminositySolar * NOMINAL_SOLAR_LUMINOSITY, hydrogen, metals);
     }
 
-    /** Validates. */
+    /**
+     * Validates.
+     *
+     * @param mass       M (g), &gt; 0
+     * @param radius     R, the photospheric radius where the optical depth is 2/3 (cm), &gt; 0
+     * @param luminosity L (erg s^-1), &gt; 0
+     * @param hydrogen   X (mass fraction), in [0, 1]
+     * @param metals     Z (mass fraction), in [0, 1], X + Z &lt;= 1
+     */
     public EnvelopeStar {
         Checks.positive("mass", mass, "g", InvalidInputException.NO_ZONE);
         Checks.positive("radius", radius, "cm", InvalidInputException.NO_ZONE);
