@@ -215,6 +215,13 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         out.put(DiagnosisColumn.NABLA_AD, nablaAd);
         out.put(DiagnosisColumn.NABLA_MU, nablaMu);
 
+        // does the profile's own gradient agree with the physics? (see ModelConsistency)
+        double[] nablaModel = computed(out, DiagnosisColumn.NABLA_MODEL, n);
+        double[] mismatch = computed(out, DiagnosisColumn.NABLA_MISMATCH, n);
+        ModelConsistency.nablaModel(t, pres, nablaModel);
+        ModelConsistency.mismatch(nablaModel, nabla, nablaRad, nablaAd, regimes, mismatch);
+        warnings.addAll(ModelConsistency.warnings(mismatch, regimes, k -> zoneAsGiven(p, k)));
+
         List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, marginC, nablaMu);
         Timescales times = new Timescales(
                 Timescale.photonDiffusion(r, kappa, rho),
@@ -297,8 +304,11 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 }
                 vmax = OptionalDouble.of(peak);
                 if (peak > 0.0) {
-                    turnGlobal = OptionalDouble.of(Timescale.turnoverGlobal(r, v, first, last, rb, rt));
-                    double local = Timescale.turnoverLocal(r, hp, ell, v, first, last, rb, rt);
+                    // the envelope integral of dr / v diverges at the centre of a core: there the
+                    // core's radius over its mass-weighted mean velocity (see Timescale)
+                    turnGlobal = OptionalDouble.of(first == 0 ? Timescale.turnoverCore(m, v, last, rt, top[1])
+                            : Timescale.turnoverGlobal(r, v, first, last, rb, rt));
+                    double local = Timescale.turnoverLocal(r, ell, v, first, last, rb, rt);
                     if (local > 0.0) {
                         turnLocal = OptionalDouble.of(local);
                     }
