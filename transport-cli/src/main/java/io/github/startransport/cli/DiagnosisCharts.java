@@ -296,7 +296,7 @@ final class DiagnosisCharts {
      * A logarithmic axis: powers of ten over a wide range; over less than three decades, where
      * those would be too few, ticks at 1, 2, ... 9 times a power of ten.
      */
-    private static ValueAxis logAxis(String label, XYSeriesCollection data) {
+    static ValueAxis logAxis(String label, XYSeriesCollection data) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = 0.0;
         for (int s = 0; s < data.getSeriesCount(); s++) {

@@ -50,7 +50,7 @@ public final class Main {
 
         @Override
         public void run() {
-            throw new ParameterException(spec.commandLine(), "missing command: diagnose or models");
+            throw new ParameterException(spec.commandLine(), "missing command: diagnose, envelope, models or table");
         }
     }
 
@@ -134,6 +134,7 @@ public final class Main {
         Cli cli = new Cli(out, err, console, discovery, java.util.Arrays.asList(args));
         CommandLine cl = new CommandLine(new Root());
         cl.addSubcommand(new CommandLine(new DiagnoseCommand(cli)));
+        cl.addSubcommand(new CommandLine(new EnvelopeCommand(cli)));
         cl.addSubcommand(new CommandLine(new ModelsCommand(cli)));
         CommandLine table = new CommandLine(new TableCommand());
         table.addSubcommand(new CommandLine(new TableCommand.Build(cli)));

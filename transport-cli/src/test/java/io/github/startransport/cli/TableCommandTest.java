@@ -70,7 +70,7 @@ class TableCommandTest {
     void diagnoseReadsATableBuiltByTheTool(@TempDir Path dir) {
         Path file = dir.resolve("k.csv");
         assertEquals(0, Runs.run("table", "build", "--out", file.toString(), "--hydrogen", "0.6,0.7,0.8",
-                "--metals", "0.01,0.02,0.03", "--log-t", "3.9:7.3:69", "--log-r", "-7:1:33").code());
+                "--metals", "0.01,0.02,0.03", "--log-t", "3.8:7.3:71", "--log-r", "-7:1:33").code());
         Runs r = Runs.run("diagnose", "--demo", "--opacity-table", file.toString(), "--out",
                 dir.resolve("out").toString());
         assertEquals(0, r.code(), r.toString());
