@@ -2,6 +2,7 @@ package io.github.startransport.core;
 
 import io.github.startransport.core.convection.LocalMixingLength;
 import io.github.startransport.core.convection.TransparentEddyMixingLength;
+import io.github.startransport.core.envelope.GreyAtmosphereEnvelope;
 import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.model.DemoStar;
@@ -41,6 +42,7 @@ public final class CoreProvider implements TransportProvider {
             new Entry(TabulatedOpacity.INFO, TabulatedOpacity::fromOptions),
             new Entry(CsvTableTool.INFO, CsvTableTool::fromOptions),
             new Entry(LocalDiagnosis.INFO, LocalDiagnosis::fromOptions),
+            new Entry(GreyAtmosphereEnvelope.INFO, GreyAtmosphereEnvelope::fromOptions),
             new Entry(DemoStar.INFO, DemoStar::fromOptions));
 
     /** Public no-argument constructor, as {@link java.util.ServiceLoader} requires. */
@@ -55,7 +57,7 @@ public final class CoreProvider implements TransportProvider {
     @Override
     public String description() {
         return "startransport's own physics: stability tests, ideal gas plus radiation, mixing-length convection, "
-                + "opacities (analytic and tabulated), profile diagnosis, demo star";
+                + "opacities (analytic and tabulated), profile diagnosis, envelope integration, demo star";
     }
 
     @Override

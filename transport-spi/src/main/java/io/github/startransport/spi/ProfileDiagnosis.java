@@ -30,6 +30,18 @@ public final class ProfileDiagnosis {
      */
     public ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
                             Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings) {
+        this(source, criterion, alpha, columns, regimes, regions, timescales, warnings, true);
+    }
+
+    /**
+     * @param copy whether to copy the arrays; {@code false} only through
+     *             {@link io.github.startransport.spi.sharing.ColumnSharing}, whose caller hands
+     *             the arrays over (they are arrays of an immutable {@link Profile}, or new ones
+     *             nobody else keeps)
+     */
+    ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
+                     Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings,
+                     boolean copy) {
         this.source = source;
         this.criterion = criterion;
         this.alpha = alpha;
@@ -39,9 +51,9 @@ public final class ProfileDiagnosis {
             if (v == null || v.length != regimes.length) {
                 throw new IllegalArgumentException("column " + c.header() + " missing or of the wrong length");
             }
-            this.columns.put(c, v.clone());
+            this.columns.put(c, copy ? v.clone() : v);
         }
-        this.regimes = regimes.clone();
+        this.regimes = copy ? regimes.clone() : regimes;
         this.regions = List.copyOf(regions);
         this.timescales = timescales;
         this.warnings = List.copyOf(warnings);
@@ -82,6 +94,14 @@ public final class ProfileDiagnosis {
      */
     public double value(DiagnosisColumn column, int zone) {
         return columns.get(column)[zone];
+    }
+
+    /**
+     * @param zone zone index, centre = 0
+     * @return the regime of that zone
+     */
+    public Regime regime(int zone) {
+        return regimes[zone];
     }
 
     /** @return a copy of the regime of every zone */
