@@ -57,10 +57,11 @@ final class ExampleData {
      * Writes the demo star's zones with an invented nabla_mu.
      *
      * @param file   profile.csv
-     * @param points points of the demo star (one fewer zones: the centre is not a zone)
+     * @param points zones asked of the demo star (it gives about that many)
+     * @param limit  at most this many zones are written (the innermost)
      * @return the number of zones written
      */
-    static int writeProfile(Transport transport, Path file, int points) throws IOException {
+    static int writeProfile(Transport transport, Path file, int points, int limit) throws IOException {
         Profile p = transport.star("corvina", ModelOptions.parse("zones=" + points)).profile();
         SplittableRandom random = new SplittableRandom(11);
         try (BufferedWriter w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
@@ -69,7 +70,7 @@ final class ExampleData {
             ProfileColumn[] columns = {ProfileColumn.RADIUS, ProfileColumn.MASS, ProfileColumn.TEMPERATURE,
                 ProfileColumn.DENSITY, ProfileColumn.PRESSURE, ProfileColumn.LUMINOSITY, ProfileColumn.HYDROGEN,
                 ProfileColumn.METALS};
-            for (int k = 0; k < p.size(); k++) {
+            for (int k = 0; k < Math.min(p.size(), limit); k++) {
                 StringBuilder row = new StringBuilder();
                 for (ProfileColumn c : columns) {
                     row.append(p.value(c, k)).append(',');
@@ -78,7 +79,7 @@ final class ExampleData {
                 w.write(row.toString());
             }
         }
-        return p.size();
+        return Math.min(p.size(), limit);
     }
 
     /** Reads profile.csv into columns (radius, mass, T, rho, P, L, X, Z, nabla_mu; phi = 1). */

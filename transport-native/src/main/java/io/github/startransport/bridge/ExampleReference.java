@@ -26,8 +26,9 @@ import java.util.List;
  * stability test ({@code evaluateColumns}) and convection with its Jacobian ({@code solveColumns},
  * the column layout, so that the hosts' zone-major blocks are checked against the other layout).
  *
- * <p>Usage: {@code java -cp <jars> io.github.startransport.bridge.ExampleReference DIR [POINTS]}
- * (POINTS of the demo star, default 800, giving 799 zones). reference.csv has one row per zone and
+ * <p>Usage: {@code java -cp <jars> io.github.startransport.bridge.ExampleReference DIR [POINTS [ZONES]]}
+ * (POINTS asked of the demo star, default 800; it gives about that many zones, of which the first
+ * ZONES are kept when given). reference.csv has one row per zone and
  * the columns named in its header; regime and lookup codes are the C header's
  * ({@code STT_RADIATIVE} = 0 ..., {@code STT_INSIDE} = 0 ...).
  */
@@ -46,15 +47,16 @@ public final class ExampleReference {
      */
     public static void main(String[] args) throws IOException {
         if (args.length < 1) {
-            System.err.println("usage: ExampleReference DIR [POINTS]");
+            System.err.println("usage: ExampleReference DIR [POINTS [ZONES]]");
             System.exit(2);
         }
         Path dir = Path.of(args[0]);
         int points = args.length > 1 ? Integer.parseInt(args[1]) : 800;
+        int limit = args.length > 2 ? Integer.parseInt(args[2]) : Integer.MAX_VALUE;
         Files.createDirectories(dir);
         Transport transport = Transport.discover();
         ExampleData.writeModels(dir.resolve("models.txt"));
-        int n = ExampleData.writeProfile(transport, dir.resolve("profile.csv"), points);
+        int n = ExampleData.writeProfile(transport, dir.resolve("profile.csv"), points, limit);
         write(transport, dir);
         System.out.println("reference: " + n + " zones written to " + dir);
     }

@@ -211,6 +211,15 @@ final class NativeTools {
         assertEquals(3, seen, r.out());
     }
 
+    /** @return the number of zones in an example directory's profile.csv (lines after its header) */
+    static int zones(Path dir) {
+        try (var lines = Files.lines(dir.resolve("profile.csv"))) {
+            return (int) lines.skip(1).filter(l -> !l.isBlank()).count();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
     static void prepare() {
         try {
             Files.createDirectories(WORK);
