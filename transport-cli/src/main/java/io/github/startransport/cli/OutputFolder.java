@@ -25,7 +25,7 @@ import java.util.Set;
 final class OutputFolder implements AutoCloseable {
     /** The names of the files one diagnosis writes. */
     static final Set<String> OUR_FILES = Set.of("zones.csv", "summary.json", DiagnosisCharts.GRADIENTS_PNG,
-            DiagnosisCharts.MIXING_PNG, DiagnosisCharts.OPACITY_PNG);
+            DiagnosisCharts.MIXING_PNG, DiagnosisCharts.OPACITY_PNG, DiagnosisCharts.PROPAGATION_PNG);
 
     private final Path target;
     private final Path staging;

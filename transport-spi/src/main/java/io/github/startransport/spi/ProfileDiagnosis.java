@@ -3,6 +3,7 @@ package io.github.startransport.spi;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * The diagnosis of one profile: per-zone columns (centre to surface), regimes, regions,
@@ -17,6 +18,7 @@ public final class ProfileDiagnosis {
     private final List<Region> regions;
     private final Timescales timescales;
     private final List<String> warnings;
+    private final SeismicSummary seismic;
 
     /**
      * @param source     where the profile came from
@@ -30,6 +32,24 @@ public final class ProfileDiagnosis {
      */
     public ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
                             Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings) {
+        this(source, criterion, alpha, columns, regimes, regions, timescales, warnings, null);
+    }
+
+    /**
+     * @param source     where the profile came from
+     * @param criterion  criterion the regimes were decided by
+     * @param alpha      mixing-length parameter used
+     * @param columns    every {@link DiagnosisColumn}, each as long as {@code regimes}
+     * @param regimes    regime per zone
+     * @param regions    non-radiative regions, centre to surface
+     * @param timescales whole-star timescales
+     * @param warnings   what the diagnosis had to assume or could not trust, one sentence each
+     * @param seismic    whole-model seismic integrals, or {@code null} when not computed
+     */
+    public ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
+                            Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings,
+                            SeismicSummary seismic) {
+        this.seismic = seismic;
         this.source = source;
         this.criterion = criterion;
         this.alpha = alpha;
@@ -97,6 +117,11 @@ public final class ProfileDiagnosis {
     /** @return the timescales */
     public Timescales timescales() {
         return timescales;
+    }
+
+    /** @return the whole-model seismic integrals, when the diagnoser computed them */
+    public Optional<SeismicSummary> seismic() {
+        return Optional.ofNullable(seismic);
     }
 
     /** @return warnings, one sentence each */
