@@ -6,6 +6,7 @@ import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.model.DemoStar;
 import io.github.startransport.core.profile.LocalDiagnosis;
+import io.github.startransport.core.seismic.LocalBuoyancy;
 import io.github.startransport.core.thermo.IonisingGas;
 import io.github.startransport.core.opacity.AnalyticOpacity;
 import io.github.startransport.core.opacity.CsvTableTool;
@@ -43,7 +44,8 @@ public final class CoreProvider implements TransportProvider {
             new Entry(TabulatedOpacity.INFO, TabulatedOpacity::fromOptions),
             new Entry(CsvTableTool.INFO, CsvTableTool::fromOptions),
             new Entry(LocalDiagnosis.INFO, LocalDiagnosis::fromOptions),
-            new Entry(DemoStar.INFO, DemoStar::fromOptions));
+            new Entry(DemoStar.INFO, DemoStar::fromOptions),
+            new Entry(LocalBuoyancy.INFO, LocalBuoyancy::fromOptions));
 
     /** Public no-argument constructor, as {@link java.util.ServiceLoader} requires. */
     public CoreProvider() {
@@ -58,7 +60,7 @@ public final class CoreProvider implements TransportProvider {
     public String description() {
         return "startransport's own physics: stability tests, partially ionised gas (Saha) and ideal gas plus radiation, "
                 + "mixing-length convection, "
-                + "opacities (analytic and tabulated), profile diagnosis, demo star";
+                + "opacities (analytic and tabulated), profile diagnosis, demo star, buoyancy and acoustic frequencies";
     }
 
     @Override

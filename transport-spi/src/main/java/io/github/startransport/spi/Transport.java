@@ -271,6 +271,11 @@ public final class Transport {
         return model(ModelFamily.STAR, name, options);
     }
 
+    /** @return shortcut for {@code model(ModelFamily.BUOYANCY, name, options)} */
+    public BuoyancyModel buoyancy(String name, ModelOptions options) {
+        return model(ModelFamily.BUOYANCY, name, options);
+    }
+
     /** @return shortcut for {@code model(ModelFamily.OPACITY_TABLES, name, options)} */
     public OpacityTableTool opacityTables(String name, ModelOptions options) {
         return model(ModelFamily.OPACITY_TABLES, name, options);
