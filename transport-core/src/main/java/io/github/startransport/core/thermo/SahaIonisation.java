@@ -55,7 +55,8 @@ import io.github.startransport.spi.ZoneInput;
  * has one root, bracketed by the largest single-species root (from below) and the full charge
  * (from above). Newton steps in ln x, falling back to bisection whenever a step leaves the bracket,
  * reach it in a handful of iterations, and at most {@value #MAX_ITERATIONS}. The Saha ratios are
- * formed from their logarithms, limited to [e^{@value #LN_Q_MIN}, e^{@value #LN_Q_MAX}]: beyond
+ * limited to [e^{@value #LN_Q_MIN}, e^{@value #LN_Q_MAX}] (formed through logarithms where
+ * C T^(3/2) / n_N itself leaves [1e-250, 1e250]): beyond
  * these a stage is so nearly empty that nothing representable depends on it. Where even the
  * largest possible electron fraction is below 1e-60 the gas is taken as neutral (its ionisation
  * changes no output by a representable amount). Derivatives of the fractions follow by implicit
@@ -93,6 +94,9 @@ public final class SahaIonisation {
     static final double LN_Q_MIN = -600.0;
     /** Upper limit of ln q. */
     static final double LN_Q_MAX = 300.0;
+    /** e^LN_Q_MIN and e^LN_Q_MAX. */
+    static final double Q_MIN = Math.exp(LN_Q_MIN);
+    static final double Q_MAX = Math.exp(LN_Q_MAX);
     /** The gas is neutral when the sum of alpha q (an upper bound of x^2) is below this. */
     static final double NEUTRAL_X2 = 1e-120;
     /** Abundances per nucleus below this change nothing representable and are dropped. */
@@ -191,23 +195,45 @@ public final class SahaIonisation {
         double lHe0 = V_HE0 * excluded;
         double lHe1 = V_HE1 * excluded;
         double lD0 = V_D0 * excluded;
-        // base = ln(C T^(3/2) / n_N): one logarithm where the ratio is a normal double, else three
+        // the Saha ratios q = exp(base - theta / T + dL), base = ln(C T^(3/2) / n_N): from
+        // C T^(3/2) / n_N itself where that is a normal double, else through logarithms
         double ratio = t * Math.sqrt(t) / rhoNu;
-        boolean normal = ratio > Double.MIN_NORMAL && ratio < Double.MAX_VALUE;
-        double base = normal ? LN_C + LN_MU + Math.log(ratio)
-                : LN_C + LN_MU + 1.5 * Math.log(t) - Math.log(rho) - Math.log(nuN);
-        // n_N lambda_e^3 = exp(-base), for the degeneracy indicator
-        double nLambda3 = normal ? 1.0 / (C_MU * ratio) : Math.exp(Math.min(-base, 700.0));
-        double lnqH = base - THETA_H * invT + lH0;
-        double lnq1 = LN_4 + base - THETA_HE1 * invT + (lHe0 - lHe1);
-        double lnq2 = base - THETA_HE2 * invT + lHe1;
-        double lnqD = base - THETA_D * invT + lD0;
+        boolean normal = ratio > 1e-250 && ratio < 1e250;
+        double argH = -THETA_H * invT + lH0;
+        double arg1 = -THETA_HE1 * invT + (lHe0 - lHe1);
+        double arg2 = -THETA_HE2 * invT + lHe1;
+        double argD = -THETA_D * invT + lD0;
+        double qH;
+        double q1;
+        double q2;
+        double qD;
+        double nLambda3;                       // n_N lambda_e^3 = exp(-base), for the degeneracy indicator
+        if (normal) {
+            double b0 = C_MU * ratio;
+            qH = b0 * Math.exp(argH);
+            q1 = 4.0 * b0 * Math.exp(arg1);
+            q2 = b0 * Math.exp(arg2);
+            qD = b0 * Math.exp(argD);
+            nLambda3 = 1.0 / b0;
+        } else {
+            double base = LN_C + LN_MU + 1.5 * Math.log(t) - Math.log(rho) - Math.log(nuN);
+            qH = Math.exp(limit(base + argH));
+            q1 = Math.exp(limit(LN_4 + base + arg1));
+            q2 = Math.exp(limit(base + arg2));
+            qD = Math.exp(limit(base + argD));
+            nLambda3 = Math.exp(Math.min(-base, 700.0));
+        }
+        // a ratio at either limit is constant there: no derivatives through it (see the class comment)
+        boolean inH = qH > Q_MIN && qH < Q_MAX;
+        boolean in1 = q1 > Q_MIN && q1 < Q_MAX;
+        boolean in2 = q2 > Q_MIN && q2 < Q_MAX;
+        boolean inD = qD > Q_MIN && qD < Q_MAX;
+        qH = Math.max(Q_MIN, Math.min(Q_MAX, qH));
+        q1 = Math.max(Q_MIN, Math.min(Q_MAX, q1));
+        q2 = Math.max(Q_MIN, Math.min(Q_MAX, q2));
+        qD = Math.max(Q_MIN, Math.min(Q_MAX, qD));
 
         // d ln q / d tau (h), d2 / d tau2 (hp), d / d ln rho (k), d2 / d ln rho2 (kp); 0 where limited
-        boolean inH = lnqH > LN_Q_MIN && lnqH < LN_Q_MAX;
-        boolean in1 = lnq1 > LN_Q_MIN && lnq1 < LN_Q_MAX;
-        boolean in2 = lnq2 > LN_Q_MIN && lnq2 < LN_Q_MAX;
-        boolean inD = lnqD > LN_Q_MIN && lnqD < LN_Q_MAX;
         double hH = inH ? 1.5 + THETA_H * invT : 0.0;
         double h1 = in1 ? 1.5 + THETA_HE1 * invT : 0.0;
         double h2 = in2 ? 1.5 + THETA_HE2 * invT : 0.0;
@@ -225,15 +251,10 @@ public final class SahaIonisation {
         double k2 = in2 ? kp2 - 1.0 : 0.0;
         double kD = inD ? kpD - 1.0 : 0.0;
         // a bound state below a stage limited from above is empty to double precision: no -ln w weight
-        double bH0 = lnqH >= LN_Q_MAX ? 0.0 : lH0;
-        double bHe0 = lnq1 >= LN_Q_MAX ? 0.0 : lHe0;
-        double bHe1 = lnq2 >= LN_Q_MAX ? 0.0 : lHe1;
-        double bD0 = lnqD >= LN_Q_MAX ? 0.0 : lD0;
-
-        double qH = Math.exp(limit(lnqH));
-        double q1 = Math.exp(limit(lnq1));
-        double q2 = Math.exp(limit(lnq2));
-        double qD = Math.exp(limit(lnqD));
+        double bH0 = qH >= Q_MAX ? 0.0 : lH0;
+        double bHe0 = q1 >= Q_MAX ? 0.0 : lHe0;
+        double bHe1 = q2 >= Q_MAX ? 0.0 : lHe1;
+        double bD0 = qD >= Q_MAX ? 0.0 : lD0;
 
         double x;
         if (aH * qH + aHe * q1 + aD * qD < NEUTRAL_X2 && aHe * q1 * q2 < NEUTRAL_X2 * 1e-60) {
@@ -403,8 +424,9 @@ public final class SahaIonisation {
         double aRad = radiation * A_RAD;
         double pr = aRad * t2 * t2 / 3.0;
         double p = pg + pr;
-        double beta = pg / p;
-        double oneMinusBeta = pr / p;
+        double invP = 1.0 / p;
+        double beta = pg * invP;
+        double oneMinusBeta = pr * invP;
         double chiT = beta * gT + 4.0 * oneMinusBeta;
         double chiR = beta * gR;
         double betaT = beta * oneMinusBeta * (gT - 4.0);
@@ -415,7 +437,7 @@ public final class SahaIonisation {
         double chiRR = betaR * gR + beta * gRR;
 
         // c_V = (k nu_N / m_u) A + 4 a T^3 / rho
-        double radCv = 4.0 * aRad * t2 * t / rho;
+        double radCv = 12.0 * pr * invT / rho;               // 4 a T^3 / rho
         double aCv = 1.5 * (1.0 + x) + 1.5 * x * uT + qeT * invT;
         double aCvT = 1.5 * x * uT + 1.5 * x * (uT * uT + uTT) + (qeTT - qeT) * invT;
         double aCvR = 1.5 * x * uR + 1.5 * x * (uT * uR + uTR) + qeTR * invT;
@@ -423,10 +445,12 @@ public final class SahaIonisation {
         double cvT = kOverMu * aCvT + 3.0 * radCv;
         double cvR = kOverMu * aCvR - radCv;
 
+        double invRho = 1.0 / rho;
         double invCv = 1.0 / cv;
-        double invChiT = 1.0 / chiT;
-        double invChiR = 1.0 / chiR;
-        double g3 = p * chiT / (rho * t) * invCv;            // Gamma_3 - 1
+        double invChiTR = 1.0 / (chiT * chiR);
+        double invChiT = chiR * invChiTR;
+        double invChiR = chiT * invChiTR;
+        double g3 = p * chiT * invRho * invT * invCv;        // Gamma_3 - 1
         double g3T = g3 * (chiT + chiTT * invChiT - 1.0 - cvT * invCv);
         double g3R = g3 * (chiR + chiTR * invChiT - 1.0 - cvR * invCv);
         double gamma1 = chiT * g3 + chiR;
@@ -443,15 +467,15 @@ public final class SahaIonisation {
         double deltaT = delta * (chiTT * invChiT - chiRT * invChiR);
         double deltaR = delta * (chiTR * invChiT - chiRR * invChiR);
         double onePlusX = 1.0 + x;
-        double mu = invNu / onePlusX;
-        double lnMuT = -x * uT / onePlusX;
-        double lnMuR = -x * uR / onePlusX;
+        double invOnePlusX = 1.0 / onePlusX;
+        double mu = invNu * invOnePlusX;
+        double lnMuT = -x * uT * invOnePlusX;
+        double lnMuR = -x * uR * invOnePlusX;
         double denPhi = 1.0 / (onePlusX + 2.0 * b);
         double phi = onePlusX * denPhi;
-        double lnPhiT = x * uT / onePlusX - (x * uT + 2.0 * bT) * denPhi;
-        double lnPhiR = x * uR / onePlusX - (x * uR + 2.0 * bR) * denPhi;
+        double lnPhiT = x * uT * invOnePlusX - (x * uT + 2.0 * bT) * denPhi;
+        double lnPhiR = x * uR * invOnePlusX - (x * uR + 2.0 * bR) * denPhi;
 
-        double invRho = 1.0 / rho;
         out.mu = mu;
         out.beta = beta;
         out.pressure = p;
@@ -465,7 +489,7 @@ public final class SahaIonisation {
         out.chiRho = chiR;
         out.freeElectrons = nuN * x;
         out.degeneracy = 0.5 * x * nLambda3;
-        out.pressureIonisation = aH > 0.0 ? pressureIonised(x, nH, base - THETA_H * invT, lH0) : 0.0;
+        out.pressureIonisation = aH > 0.0 ? pressureIonised(x, nH, qH, inH, lH0) : 0.0;
         out.dPressure[ZoneInput.T] = p * chiT * invT;
         out.dPressure[ZoneInput.RHO] = p * chiR * invRho;
         out.dNablaAd[ZoneInput.T] = nablaAdT * invT;
@@ -489,11 +513,13 @@ public final class SahaIonisation {
      * hydrogen stays neutral regardless, ours times 1 - w; to first order in l (relative error
      * below 1e-4) where l &lt; 1e-4.
      */
-    private static double pressureIonised(double x, double neutral, double lnqIdeal, double l) {
+    private static double pressureIonised(double x, double neutral, double qH, boolean inH, double l) {
         if (l < 1e-4) {
             return neutral * l;
         }
-        double ideal = x == 0.0 ? 1.0 : x / (Math.exp(limit(lnqIdeal)) + x);
+        // the Saha ratio without the occupation probability, q e^(-l), where q is not at a limit
+        double qIdeal = inH ? qH * Math.exp(-l) : 0.0;
+        double ideal = x == 0.0 ? 1.0 : x / (qIdeal + x);
         return Math.max(ideal - neutral, neutral * -Math.expm1(-l));
     }
 
@@ -570,9 +596,7 @@ public final class SahaIonisation {
                         double xMax) {
         // lower bound: the largest root of a single species alone (helium's first stage alone is below its e)
         double lo = Math.max(Math.max(single(aH, qH), single(aHe, q1)), single(aD, qD));
-        double uLo = Math.log(lo);
-        double uHi = Math.log(xMax);
-        double u = uLo;
+        double hi = xMax;
         double x = lo;
         for (int i = 0; i < MAX_ITERATIONS; i++) {
             double dH = 1.0 / (qH + x);
@@ -585,43 +609,40 @@ public final class SahaIonisation {
             double y2 = q1 * q2 * dHe;
             double rhs = aH * yH + aHe * (y1 + 2.0 * y2) + aD * yD;
             double var = aH * yH * x * dH + aHe * (y0 * y1 + y1 * y2 + 4.0 * y0 * y2) + aD * yD * x * dD;
-            double g = ln(rhs / x);
-            double step = g * rhs / (rhs + var);       // Newton in ln x: G = ln(rhs / x), G' = -1 - var / rhs
-            if (Math.abs(step) < 1e-12) {
-                return x * (1.0 + step);
-            }
-            if (g > 0.0) {
-                uLo = u;
+            double z = rhs / x - 1.0;
+            if (z > 0.0) {
+                lo = x;
             } else {
-                uHi = u;
+                hi = x;
             }
-            double next = u + step;
-            if (next > uLo && next < uHi) {
-                x *= exp(step);
+            double next;
+            if (Math.abs(z) < 0.0625) {
+                // near the root: Halley on F = x - rhs(x), F' = 1 + var / x, F'' = -(var + k3) / x^2, with
+                // k3 = sum alpha E[(K - e)^3] (d var / d ln x = -k3); the error after a step s is O(s^3)
+                double eHe = y1 + 2.0 * y2;
+                double d0 = -eHe;
+                double d1 = 1.0 - eHe;
+                double d2 = 2.0 - eHe;
+                double k3 = aH * yH * x * dH * (x * dH - yH) + aD * yD * x * dD * (x * dD - yD)
+                        + aHe * (y0 * d0 * d0 * d0 + y1 * d1 * d1 * d1 + y2 * d2 * d2 * d2);
+                double invX = 1.0 / x;
+                double f1 = 1.0 + var * invX;
+                double step = 2.0 * z * f1 / (2.0 * f1 * f1 - z * (var + k3) * invX);
+                next = x * (1.0 + step);
+                if (Math.abs(step) < 1e-6) {
+                    return next;
+                }
             } else {
-                next = 0.5 * (uLo + uHi);
-                x = Math.exp(next);
+                // far from it: Newton in ln x on G = ln(rhs / x), G' = -1 - var / rhs, exact in the
+                // low-ionisation limit where rhs ~ 1 / x
+                next = x * Math.exp(Math.log1p(z) * rhs / (rhs + var));
             }
-            u = next;
+            if (!(next > lo && next < hi)) {
+                next = Math.sqrt(lo * hi);             // bisection in ln x
+            }
+            x = next;
         }
         return x;
-    }
-
-    /** ln r, by its series where r is within 1e-3 of 1 (error below 2e-19), else {@link Math#log}. */
-    private static double ln(double r) {
-        double z = r - 1.0;
-        if (Math.abs(z) < 1e-3) {
-            return z * (1.0 - z * (0.5 - z * (1.0 / 3.0 - z * (0.25 - z * 0.2))));
-        }
-        return Math.log(r);
-    }
-
-    /** exp s, by its series where |s| &lt; 1e-3 (error below 2e-18), else {@link Math#exp}. */
-    private static double exp(double s) {
-        if (Math.abs(s) < 1e-3) {
-            return 1.0 + s * (1.0 + s * (0.5 + s * (1.0 / 6.0 + s * (1.0 / 24.0))));
-        }
-        return Math.exp(s);
     }
 
     /** The root of x = alpha q / (q + x): 2 alpha q / (q + sqrt(q^2 + 4 alpha q)), 0 when alpha = 0. */
