@@ -92,7 +92,8 @@ final class DiagnosisCharts {
 
     /**
      * @param d a diagnosis
-     * @return nabla_rad, nabla_ad, nabla_L and the actual nabla against r/R, regions shaded
+     * @return nabla_rad, nabla_ad, nabla_L, the actual nabla and the profile's own d ln T / d ln P against r/R,
+     *         regions shaded
      */
     static JFreeChart gradients(ProfileDiagnosis d) {
         double[] x = radiusFraction(d);
@@ -102,11 +103,17 @@ final class DiagnosisCharts {
         hidden += add(data, "\u2207_ad (adiabatic)", x, d.column(DiagnosisColumn.NABLA_AD), true);
         hidden += add(data, "\u2207_L (Ledoux)", x, d.column(DiagnosisColumn.NABLA_LEDOUX), true);
         hidden += add(data, "\u2207 (actual)", x, d.column(DiagnosisColumn.NABLA), true);
+        double[] model = d.column(DiagnosisColumn.NABLA_MODEL);
+        int undefined = 0; // where the pressure does not fall outwards; the diagnosis warns about those zones
+        for (double v : model) {
+            undefined += Double.isNaN(v) ? 1 : 0;
+        }
+        hidden += add(data, "\u2207_model (the profile's own d ln T / d ln P)", x, model, true) - undefined;
         ValueAxis y = logAxis("temperature gradient \u2207 = d ln T / d ln P (dimensionless)", data);
         XYPlot plot = new XYPlot(data, fractionAxis(), y, new XYLineAndShapeRenderer(true, false));
         JFreeChart chart = chart("Temperature gradients of " + d.source() + " (" + d.criterion().label()
                 + " criterion, \u03b1 = " + d.alpha() + ")", plot);
-        style(plot, 0, 4);
+        style(plot, 0, 5);
         shadeRegions(d, plot);
         note(chart, hidden, "gradient values \u2264 0");
         return chart;
@@ -203,9 +210,9 @@ final class DiagnosisCharts {
             marker.setLabel(String.format(java.util.Locale.ROOT, "\u0394\u03bd = %.4g \u03bcHz", deltaNu));
             marker.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 16));
             marker.setLabelPaint(new Color(120, 60, 160));
-            marker.setLabelAnchor(org.jfree.chart.ui.RectangleAnchor.TOP_LEFT);
-            marker.setLabelTextAnchor(org.jfree.chart.ui.TextAnchor.BOTTOM_LEFT);
-            marker.setLabelOffset(new org.jfree.chart.ui.RectangleInsets(2, 300, 2, 2));
+            marker.setLabelAnchor(org.jfree.chart.ui.RectangleAnchor.TOP_RIGHT);
+            marker.setLabelTextAnchor(org.jfree.chart.ui.TextAnchor.BOTTOM_RIGHT);
+            marker.setLabelBackgroundColor(new Color(255, 255, 255, 0));
             plot.addRangeMarker(marker);
             includeInRange(y, data, deltaNu);
         }
@@ -294,11 +301,12 @@ final class DiagnosisCharts {
     private static void style(XYPlot plot, int index, int series) {
         XYLineAndShapeRenderer r = (XYLineAndShapeRenderer) plot.getRenderer(index);
         Paint[] paints = {new Color(200, 30, 30), new Color(30, 30, 30), new Color(30, 110, 200),
-            new Color(20, 150, 60)};
+            new Color(20, 150, 60), new Color(150, 60, 180)};
         Stroke[] strokes = {new BasicStroke(2.5f),
             new BasicStroke(2.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {10f, 6f}, 0f),
             new BasicStroke(2.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {3f, 4f}, 0f),
-            new BasicStroke(3.5f)};
+            new BasicStroke(3.5f),
+            new BasicStroke(2.0f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {12f, 4f, 2f, 4f}, 0f)};
         if (series == 1) {
             r.setSeriesPaint(0, index == 0 ? new Color(200, 30, 30) : new Color(30, 110, 200));
             r.setSeriesStroke(0, index == 0 ? strokes[0] : strokes[1]);

@@ -52,6 +52,7 @@ final class SummaryJson {
         number(root, "photon_diffusion_time_yr", t.photonDiffusion() / JULIAN_YEAR_S);
         number(root, "thermal_diffusion_time_yr", t.thermalDiffusion() / JULIAN_YEAR_S);
         number(root, "kelvin_helmholtz_time_yr", t.kelvinHelmholtz() / JULIAN_YEAR_S);
+        number(root, "max_nabla_mismatch", diagnosis.maxNablaMismatch());
         SeismicSummary seismic = diagnosis.seismic().orElse(null);
         if (seismic != null) {
             number(root, "acoustic_radius_s", seismic.acousticRadius());
@@ -66,6 +67,7 @@ final class SummaryJson {
             number(o, "r_top_cm", r.topRadius());
             number(o, "m_bottom_g", r.bottomMass());
             number(o, "m_top_g", r.topMass());
+            number(o, "max_nabla_mismatch", diagnosis.maxNablaMismatch(r.firstZone(), r.lastZone()));
             if (r.regime() == Regime.CONVECTIVE) {
                 optional(o, "turnover_time_global_days", r.turnoverGlobal(), DAY_S);
                 optional(o, "turnover_time_local_days", r.turnoverLocal(), DAY_S);

@@ -17,9 +17,9 @@ import java.util.List;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 class ZoneTableTest {
-    /** The column list of issue 6, verbatim. */
+    /** The column list of issue 6, verbatim, with issue 10's nabla_model and its mismatch after nabla. */
     private static final String ISSUE_HEADER = "r_cm,m_g,T_K,rho_g_cm3,P_dyn_cm2,L_erg_s,X,Z,kappa_cm2_g,cp_erg_g_K,delta,"
-            + "nabla_ad,nabla_mu,g_cm_s2,H_P_cm,nabla_rad,nabla_ledoux,regime,nabla,nabla_e,"
+            + "nabla_ad,nabla_mu,g_cm_s2,H_P_cm,nabla_rad,nabla_ledoux,regime,nabla,nabla_model,nabla_mismatch,nabla_e,"
             + "v_conv_cm_s,flux_conv_frac,D_mix_cm2_s";
     /** The columns issue 14 adds after them, verbatim. */
     private static final String ISSUE_14_COLUMNS = ",Gamma1,phi,c_s_cm_s,N2_rad2_s2,S1_rad_s";

@@ -4,9 +4,15 @@ import java.util.Locale;
 
 /** The convective stability criterion a zone is judged by. */
 public enum Criterion {
-    /** Convective where nabla_rad &gt; nabla_ad (composition gradients ignored). */
+    /**
+     * Convective where nabla_rad &gt; nabla_ad; a stabilising composition gradient (nabla_mu &gt; 0) is
+     * ignored, a destabilising one (nabla_mu &lt; 0) counts: convective also where nabla_rad &gt; nabla_L.
+     */
     SCHWARZSCHILD,
-    /** Convective where nabla_rad &gt; nabla_L = nabla_ad + (phi/delta) nabla_mu. */
+    /**
+     * Convective where nabla_rad &gt; nabla_L = nabla_ad + (phi/delta) nabla_mu. The two criteria
+     * differ only where nabla_mu &gt; 0.
+     */
     LEDOUX;
 
     /** @return the lower-case label, e.g. {@code "ledoux"} */

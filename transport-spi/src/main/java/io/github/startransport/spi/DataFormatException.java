@@ -9,9 +9,13 @@ package io.github.startransport.spi;
 public final class DataFormatException extends TransportException {
     private static final long serialVersionUID = 1L;
 
+    /** File name or other description of where the data came from. */
     private final String source;
+    /** 1-based line number, or 0. */
     private final int line;
+    /** 1-based column number, or 0. */
     private final int column;
+    /** The reason, without the location prefix. */
     private final String reason;
 
     /**

@@ -42,6 +42,17 @@ public enum DiagnosisColumn {
     NABLA_LEDOUX("nabla_ledoux", "1"),
     /** Actual gradient from the convection model. */
     NABLA("nabla", "1"),
+    /**
+     * The profile's own structure gradient d ln T / d ln P, from its T and P columns (three-point
+     * derivative in ln P, centred at interior zones, one-sided at the two ends); NaN where the pressure
+     * does not decrease strictly outwards (the diagnosis warns).
+     */
+    NABLA_MODEL("nabla_model", "1"),
+    /**
+     * |nabla_model - nabla| over nabla_ad in convective zones, over |nabla_rad| elsewhere (where nabla =
+     * nabla_rad; not below 0.01 nabla_ad): above 0.1 the model and the transport physics disagree.
+     */
+    NABLA_MISMATCH("nabla_mismatch", "1"),
     /** Gradient inside convective elements. */
     NABLA_ELEMENT("nabla_e", "1"),
     /** Convective velocity (cm s^-1). */

@@ -29,8 +29,11 @@ public final class DiscoveryException extends TransportException {
     public static final String CORE_JAR_HINT =
             "add transport-core (io.github.startransport:transport-core) to the class path or module path";
 
+    /** What went wrong. */
     private final Kind kind;
+    /** What was looked for. */
     private final String wanted;
+    /** What was found instead (names, one entry each). */
     private final List<String> found;
 
     /**

@@ -13,10 +13,15 @@ public final class InvalidInputException extends TransportException {
     /** Zone index used when the call does not know which zone it is looking at. */
     public static final int NO_ZONE = -1;
 
+    /** Name of the refused input field, as documented on the input type. */
     private final String field;
+    /** The refused value, in {@link #unit}. */
     private final double value;
+    /** Unit of the field ({@code "1"} if dimensionless). */
     private final String unit;
+    /** Zone index, or {@link #NO_ZONE}. */
     private final int zone;
+    /** The condition a valid value satisfies. */
     private final String requirement;
 
     /**

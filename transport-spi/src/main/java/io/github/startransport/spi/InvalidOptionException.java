@@ -8,8 +8,11 @@ import java.util.Collection;
 public final class InvalidOptionException extends TransportException {
     private static final long serialVersionUID = 1L;
 
+    /** The model the option was given to. */
     private final String model;
+    /** The option name. */
     private final String option;
+    /** The option text as given, or {@code null}. */
     private final String text;
 
     /**

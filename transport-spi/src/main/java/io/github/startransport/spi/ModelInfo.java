@@ -12,7 +12,14 @@ import java.util.Objects;
  * @param options     the options it accepts, with their defaults
  */
 public record ModelInfo(ModelFamily<?> family, String name, String description, List<OptionInfo> options) {
-    /** Validates and copies. */
+    /**
+     * Validates and copies.
+     *
+     * @param family      the model's family
+     * @param name        the name to ask for it by, unique within the provider and family
+     * @param description one sentence: what it computes and after which published work
+     * @param options     the options it accepts, with their defaults
+     */
     public ModelInfo {
         Objects.requireNonNull(family, "family");
         Objects.requireNonNull(name, "name");

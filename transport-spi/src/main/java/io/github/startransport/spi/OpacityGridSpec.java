@@ -14,7 +14,14 @@ import java.util.Arrays;
  * @param logR     log10 R nodes, R = rho / T_6^3 (log_R = log10 rho - 3 log10 T + 18), strictly increasing, at least 2
  */
 public record OpacityGridSpec(double[] hydrogen, double[] metals, double[] logT, double[] logR) {
-    /** Validates and copies. */
+    /**
+     * Validates and copies.
+     *
+     * @param hydrogen X values (mass fraction), each in [0, 1], strictly increasing
+     * @param metals   Z values (mass fraction), each in [0, 1], strictly increasing; X + Z &lt;= 1 for every pair
+     * @param logT     log10 T nodes (log K), strictly increasing, at least 2
+     * @param logR     log10 R nodes, R = rho / T_6^3 (log_R = log10 rho - 3 log10 T + 18), strictly increasing, at least 2
+     */
     public OpacityGridSpec {
         hydrogen = increasing("hydrogen", hydrogen, 1);
         metals = increasing("metals", metals, 1);

@@ -10,7 +10,12 @@ import java.util.Objects;
  * @param tables the (X, Z) tables, ordered by Z then X
  */
 public record OpacityTableSummary(String source, List<Table> tables) {
-    /** Validates and copies. */
+    /**
+     * Validates and copies.
+     *
+     * @param source where the file came from
+     * @param tables the (X, Z) tables, ordered by Z then X
+     */
     public OpacityTableSummary {
         Objects.requireNonNull(source, "source");
         tables = List.copyOf(tables);

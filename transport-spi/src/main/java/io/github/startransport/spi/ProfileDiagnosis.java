@@ -129,6 +129,30 @@ public final class ProfileDiagnosis {
         return warnings;
     }
 
+    /**
+     * @return the largest {@link DiagnosisColumn#NABLA_MISMATCH} over all zones, NaN when no zone has one:
+     *         above 0.1 the model's own gradient and the transport physics disagree somewhere
+     */
+    public double maxNablaMismatch() {
+        return maxNablaMismatch(0, size() - 1);
+    }
+
+    /**
+     * @param firstZone first zone (centre = 0), e.g. {@link Region#firstZone()}
+     * @param lastZone  last zone, inclusive
+     * @return the largest {@link DiagnosisColumn#NABLA_MISMATCH} over those zones, NaN when none has one
+     */
+    public double maxNablaMismatch(int firstZone, int lastZone) {
+        double[] m = columns.get(DiagnosisColumn.NABLA_MISMATCH);
+        double max = Double.NaN;
+        for (int k = firstZone; k <= lastZone; k++) {
+            if (!Double.isNaN(m[k]) && !(m[k] <= max)) {
+                max = m[k];
+            }
+        }
+        return max;
+    }
+
     /** @return total mass M (g) */
     public double mass() {
         return value(DiagnosisColumn.MASS, size() - 1);

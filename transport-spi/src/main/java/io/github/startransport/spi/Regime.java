@@ -6,11 +6,17 @@ import java.util.Locale;
 public enum Regime {
     /** Stable: energy is carried by radiation (and conduction) alone. */
     RADIATIVE,
-    /** Dynamically unstable under the chosen criterion: convection carries energy and mixes. */
+    /**
+     * Dynamically unstable under the chosen criterion (under either one where nabla_mu &lt; 0 and
+     * nabla_rad &gt; nabla_L): convection carries energy and mixes.
+     */
     CONVECTIVE,
     /** Schwarzschild-unstable but Ledoux-stable (nabla_ad &lt; nabla_rad &lt; nabla_L): slow double-diffusive mixing. */
     SEMICONVECTIVE,
-    /** Stable with an inverted molecular-weight gradient (nabla_mu &lt; 0): thermohaline (salt-finger) mixing. */
+    /**
+     * Stable with an inverted molecular-weight gradient (nabla_mu &lt; 0, nabla_rad &lt;= nabla_L,
+     * density ratio R0 &gt;= 1): thermohaline (salt-finger) mixing.
+     */
     THERMOHALINE;
 
     /** @return the lower-case label used in files and on screen, e.g. {@code "semiconvective"} */

@@ -15,7 +15,14 @@ import java.util.List;
  */
 public record SeismicSummary(double acousticRadius, double largeSeparation, double periodSpacingL1,
                              List<RegionDepths> convectiveRegions) {
-    /** Copies the list. */
+    /**
+     * Copies the list.
+     *
+     * @param acousticRadius    tau (s)
+     * @param largeSeparation   Delta nu (Hz)
+     * @param periodSpacingL1   Delta Pi_1 (s), or NaN
+     * @param convectiveRegions acoustic depths of the convective regions' edges
+     */
     public SeismicSummary {
         convectiveRegions = List.copyOf(convectiveRegions);
     }

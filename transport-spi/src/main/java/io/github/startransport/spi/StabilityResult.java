@@ -31,9 +31,14 @@ public final class StabilityResult {
     /** Partial derivatives of nablaLedoux with respect to each {@link ZoneInput}. */
     public final double[] dNablaLedoux = new double[ZoneInput.COUNT];
 
-    /** @return the margin that decided the regime: Schwarzschild or Ledoux, by {@link #criterion} */
+    /**
+     * @return the margin whose sign decided convection, positive exactly in a convective zone: under
+     *         Ledoux the Ledoux margin; under Schwarzschild the larger of the two margins, since an
+     *         inverted composition gradient (nabla_mu &lt; 0, nabla_L &lt; nabla_ad) makes a zone
+     *         convective under both criteria wherever nabla_rad &gt; nabla_L
+     */
     public double margin() {
-        return criterion == Criterion.LEDOUX ? marginLedoux : marginSchwarzschild;
+        return criterion == Criterion.LEDOUX ? marginLedoux : Math.max(marginSchwarzschild, marginLedoux);
     }
 
     @Override

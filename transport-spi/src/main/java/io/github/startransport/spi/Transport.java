@@ -241,42 +241,106 @@ public final class Transport {
                         + DiscoveryException.CORE_JAR_HINT + ")");
     }
 
-    /** @return shortcut for {@code model(ModelFamily.STABILITY, name, options)} */
+    /**
+     * Shortcut for {@code model(ModelFamily.STABILITY, name, options)}.
+     *
+     * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default
+     * @param options the model's options
+     * @return the model, immutable and thread-safe
+     * @throws DiscoveryException     when no provider offers the name, or several do
+     * @throws InvalidOptionException when an option is unknown to the model or its value is refused
+     */
     public StabilityModel stability(String name, ModelOptions options) {
         return model(ModelFamily.STABILITY, name, options);
     }
 
-    /** @return shortcut for {@code model(ModelFamily.THERMODYNAMICS, name, options)} */
+    /**
+     * Shortcut for {@code model(ModelFamily.THERMODYNAMICS, name, options)}.
+     *
+     * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default
+     * @param options the model's options
+     * @return the model, immutable and thread-safe
+     * @throws DiscoveryException     when no provider offers the name, or several do
+     * @throws InvalidOptionException when an option is unknown to the model or its value is refused
+     */
     public ThermodynamicsModel thermodynamics(String name, ModelOptions options) {
         return model(ModelFamily.THERMODYNAMICS, name, options);
     }
 
-    /** @return shortcut for {@code model(ModelFamily.CONVECTION, name, options)} */
+    /**
+     * Shortcut for {@code model(ModelFamily.CONVECTION, name, options)}.
+     *
+     * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default
+     * @param options the model's options
+     * @return the model, immutable and thread-safe
+     * @throws DiscoveryException     when no provider offers the name, or several do
+     * @throws InvalidOptionException when an option is unknown to the model or its value is refused
+     */
     public ConvectionModel convection(String name, ModelOptions options) {
         return model(ModelFamily.CONVECTION, name, options);
     }
 
-    /** @return shortcut for {@code model(ModelFamily.OPACITY, name, options)} */
+    /**
+     * Shortcut for {@code model(ModelFamily.OPACITY, name, options)}.
+     *
+     * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default
+     * @param options the model's options
+     * @return the model, immutable and thread-safe
+     * @throws DiscoveryException     when no provider offers the name, or several do
+     * @throws InvalidOptionException when an option is unknown to the model or its value is refused
+     */
     public OpacityModel opacity(String name, ModelOptions options) {
         return model(ModelFamily.OPACITY, name, options);
     }
 
-    /** @return shortcut for {@code model(ModelFamily.DIAGNOSIS, name, options)} */
+    /**
+     * Shortcut for {@code model(ModelFamily.DIAGNOSIS, name, options)}.
+     *
+     * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default
+     * @param options the model's options
+     * @return the model, immutable and thread-safe
+     * @throws DiscoveryException     when no provider offers the name, or several do
+     * @throws InvalidOptionException when an option is unknown to the model or its value is refused
+     */
     public ProfileDiagnoser diagnoser(String name, ModelOptions options) {
         return model(ModelFamily.DIAGNOSIS, name, options);
     }
 
-    /** @return shortcut for {@code model(ModelFamily.STAR, name, options)} */
+    /**
+     * Shortcut for {@code model(ModelFamily.STAR, name, options)}.
+     *
+     * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default
+     * @param options the model's options
+     * @return the model, immutable and thread-safe
+     * @throws DiscoveryException     when no provider offers the name, or several do
+     * @throws InvalidOptionException when an option is unknown to the model or its value is refused
+     */
     public StarModel star(String name, ModelOptions options) {
         return model(ModelFamily.STAR, name, options);
     }
 
-    /** @return shortcut for {@code model(ModelFamily.BUOYANCY, name, options)} */
+    /**
+     * Shortcut for {@code model(ModelFamily.BUOYANCY, name, options)}.
+     *
+     * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default
+     * @param options the model's options
+     * @return the model, immutable and thread-safe
+     * @throws DiscoveryException     when no provider offers the name, or several do
+     * @throws InvalidOptionException when an option is unknown to the model or its value is refused
+     */
     public BuoyancyModel buoyancy(String name, ModelOptions options) {
         return model(ModelFamily.BUOYANCY, name, options);
     }
 
-    /** @return shortcut for {@code model(ModelFamily.OPACITY_TABLES, name, options)} */
+    /**
+     * Shortcut for {@code model(ModelFamily.OPACITY_TABLES, name, options)}.
+     *
+     * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default
+     * @param options the model's options
+     * @return the model, immutable and thread-safe
+     * @throws DiscoveryException     when no provider offers the name, or several do
+     * @throws InvalidOptionException when an option is unknown to the model or its value is refused
+     */
     public OpacityTableTool opacityTables(String name, ModelOptions options) {
         return model(ModelFamily.OPACITY_TABLES, name, options);
     }

@@ -10,10 +10,17 @@ package io.github.startransport.spi;
 public abstract class TransportException extends RuntimeException {
     private static final long serialVersionUID = 1L;
 
+    /**
+     * @param message the whole message for a person: the facts and the fix
+     */
     protected TransportException(String message) {
         super(message);
     }
 
+    /**
+     * @param message the whole message for a person: the facts and the fix
+     * @param cause   the exception that led to this one
+     */
     protected TransportException(String message, Throwable cause) {
         super(message, cause);
     }

@@ -121,6 +121,101 @@ public final class MixingLengthCubic {
         return g;
     }
 
+    /** Upper bound on the safeguarded Newton steps of {@link #efficiency(double, double, double)}. */
+    static final int COMPOSITION_MAX_STEPS = 100;
+
+    /**
+     * Solves the mixing-length equation with a destabilising composition term in the buoyancy,
+     * <pre>
+     *   (Gamma^2 - beta) (a0 Gamma^2 + Gamma + 1) = S Gamma,   beta &gt; 0,   S + beta &gt; 0,
+     * </pre>
+     * for its positive root (S may be negative). Derivation (see {@link MixingLengthZone} for the
+     * physics): an element keeps its mu, so its buoyancy per unit dr/H_P is
+     * delta (nabla - nabla_e) - phi nabla_mu = delta (y + b) with y = nabla - nabla_e and
+     * b = -(phi/delta) nabla_mu; its velocity is x = sqrt(y + b) in the units of the textbook cubic,
+     * its losses give nabla_e - nabla_ad = 2U' y / x, and the flux it carries is still proportional
+     * to x y. With Gamma = x / (2U'), S = W / (4U'^2) and beta = b / (4U'^2) flux conservation gives
+     * the equation above, a quartic; for beta = 0 it is Gamma times the cubic of
+     * {@link #efficiency(double, double)}. The gradients follow from Gamma by the same shares as
+     * without composition (nabla - nabla_ad = W (Gamma + 1) / D and so on), so y has the sign of W.
+     *
+     * <p>Exactly one positive root: the quartic a0 G^4 + G^3 + (1 - a0 beta) G^2 - (beta + S) G - beta
+     * has one change of sign in its coefficients whatever the sign of 1 - a0 beta (Descartes' rule of
+     * signs), and it is simple, so the slope F' there is &gt; 0. Bracket: for S &gt;= 0 the root lies in
+     * [max(sqrt(beta), G_c), G_c + sqrt(beta)], G_c the root of the cubic for the same S (F is &lt;= 0 at
+     * both lower ends and &gt;= 0 at the upper one), where F is convex; for S &lt; 0 it lies between the
+     * roots of G^2 + |S| G - beta (where F = |S| G (1 - D) &lt; 0) and of G^2 + |S| G / D(sqrt(beta)) -
+     * beta (where F &gt;= 0). From the upper end Newton's method, kept inside the bracket by bisection
+     * (Press et al., <i>Numerical Recipes</i>, 3rd ed., §9.4, rtsafe; from memory), stops when a step
+     * is below 1e-13 of the root (or after {@link #COMPOSITION_MAX_STEPS} steps), then takes one more
+     * Newton step, which brings a quadratically converging iterate to rounding level.
+     *
+     * @param a0   cubic coefficient 2U'/(kU) (dimensionless), &gt; 0
+     * @param s    W / (4 U'^2) (dimensionless), any sign, s + beta &gt; 0 (or rounded to &lt;= 0 from above)
+     * @param beta b / (4 U'^2) (dimensionless), &gt; 0
+     * @return the efficiency Gamma (dimensionless), &gt; 0
+     */
+    public static double efficiency(double a0, double s, double beta) {
+        double root = Math.sqrt(beta);
+        double lo;
+        double hi;
+        if (s >= 0.0) {
+            double cubic = efficiency(a0, s);
+            lo = Math.max(root, cubic);
+            hi = cubic + root;
+        } else {
+            double m = -s;
+            lo = 2.0 * beta / (m + Math.hypot(m, 2.0 * root));
+            double mh = m / denominator(a0, root);
+            hi = 2.0 * beta / (mh + Math.hypot(mh, 2.0 * root));
+        }
+        double g = hi;
+        for (int i = 0; i < COMPOSITION_MAX_STEPS; i++) {
+            double excess = Math.fma(g, g, -beta);
+            double den = denominator(a0, g);
+            double f = excess * den - s * g;
+            if (f == 0.0) {
+                return g;
+            }
+            if (f > 0.0) {
+                hi = g;
+            } else {
+                lo = g;
+            }
+            double slope = 2.0 * g * den + excess * Math.fma(2.0 * a0, g, 1.0) - s;
+            double next = g - f / slope;
+            if (!(next > lo && next < hi)) {
+                next = 0.5 * (lo + hi);
+            }
+            boolean done = Math.abs(next - g) <= 1e-13 * next;
+            g = next;
+            if (done || !(hi > lo)) {
+                break;
+            }
+        }
+        // Newton converges quadratically: after a step below 1e-13 one more lands at rounding level
+        double excess = Math.fma(g, g, -beta);
+        double den = denominator(a0, g);
+        double slope = 2.0 * g * den + excess * Math.fma(2.0 * a0, g, 1.0) - s;
+        double polished = g - (excess * den - s * g) / slope;
+        return polished > 0.0 ? polished : g;
+    }
+
+    /**
+     * The slope of the composition equation at its root, F'(Gamma) = 2 Gamma D + S (a0 Gamma^2 - 1) / D
+     * (from F' = 2 Gamma D + (Gamma^2 - beta)(2 a0 Gamma + 1) - S with (Gamma^2 - beta) D = S Gamma):
+     * d Gamma = (Gamma dS + D d beta - (Gamma^2 - beta) Gamma^2 d a0) / F'.
+     *
+     * @param a0    cubic coefficient (dimensionless)
+     * @param s     W / (4 U'^2) (dimensionless)
+     * @param gamma the root (dimensionless)
+     * @return F'(Gamma) (dimensionless), &gt; 0
+     */
+    public static double compositionSlope(double a0, double s, double gamma) {
+        double den = denominator(a0, gamma);
+        return 2.0 * gamma * den + s * Math.fma(a0 * gamma, gamma, -1.0) / den;
+    }
+
     /** Binary exponents of S covered by a start table: S in [2^-930, 2^498), inside the fast range. */
     static final int TABLE_MIN_EXPONENT = -930;
     static final int TABLE_MAX_EXPONENT = 498;

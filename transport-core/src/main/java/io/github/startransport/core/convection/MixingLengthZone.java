@@ -8,6 +8,7 @@ import io.github.startransport.core.gradient.ZoneChecks;
 import io.github.startransport.spi.Checks;
 import io.github.startransport.spi.ConvectionColumns;
 import io.github.startransport.spi.ConvectionResult;
+import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.ZoneColumns;
@@ -32,22 +33,64 @@ import java.util.Arrays;
  *       q = y omega^2 / (1 + y omega^2), omega = kappa rho l, for eddies that may be optically thin
  *       (Henyey, Vardya &amp; Bodenheimer 1965, ApJ 142, 841; form from memory, see
  *       {@link TransparentEddyMixingLength}). The efficiency Gamma solves the cubic of
- *       {@link MixingLengthCubic}; then nabla, nabla_e, v = l sqrt(a g delta / H_P) 2 U' Gamma,
+ *       {@link MixingLengthCubic}, or where nabla_mu &lt; 0 its generalisation with the composition
+ *       term in the buoyancy (below); then nabla, nabla_e, v = l sqrt(a g delta / H_P) 2 U' Gamma,
  *       F_conv / F = (nabla_rad - nabla) / nabla_rad, D = v l / 3.</li>
  *   <li>Stable zone: nabla = nabla_e = nabla_rad, v = 0, F_conv = 0, and D from
  *       {@link MixingCoefficients} for the semiconvective and thermohaline regimes, 0 otherwise.</li>
  * </ol>
  *
- * <p>The heat-transport cubic is driven by the thermal excess W = nabla_rad - nabla_ad under both
- * criteria (the element's heat exchange does not depend on its composition). A zone that is
- * Ledoux-unstable only because of an inverted composition gradient (nabla_L &lt; nabla_rad &lt;=
- * nabla_ad) therefore has W &lt;= 0: it is reported convective, but carries no convective flux,
- * with v = 0 and D = 0. This theory has no composition term in the buoyancy.
+ * <p><b>Which excess drives the flux.</b> The flux is carried by the element's temperature
+ * excess, so the cubic is driven by the thermal excess W = nabla_rad - nabla_ad under both
+ * criteria. A stabilising composition gradient (nabla_mu &gt; 0) decides under Ledoux whether the
+ * zone convects (nabla_rad &gt; nabla_L) but is left out of the buoyancy of its elements: with it
+ * no efficient solution exists (there nabla tends to nabla_ad &lt; nabla_L, which is Ledoux-stable),
+ * and convection mixes such a gradient away (common practice, no source). A destabilising one
+ * (nabla_mu &lt; 0) enters the buoyancy under both criteria, as follows.
+ *
+ * <p><b>Composition in the buoyancy</b> (nabla_mu &lt; 0, b = -(phi/delta) nabla_mu &gt; 0). An element
+ * displaced by dr keeps its mu while its surroundings' mu changes by -nabla_mu dr / H_P, so at
+ * equal pressure its density contrast is -[delta (nabla - nabla_e) - phi nabla_mu] dr / H_P
+ * (rho proportional to mu^phi T^-delta at fixed P; Kippenhahn, Weigert &amp; Weiss 2012 §6.1, from
+ * memory). The mixing-length estimates of ch. 7 then read, with y = nabla - nabla_e and the geometry
+ * constants a, b_F of {@link MixingLengthGeometry}:
+ * <pre>
+ *   v^2    = a g delta l^2 (y + b) / H_P            (buoyancy of temperature and composition)
+ *   F_conv = b_F rho c_P T v (l / H_P) y            (heat is carried by the temperature excess)
+ *   (nabla_e - nabla_ad) / y = 1 / Gamma,   Gamma proportional to v   (losses depend on y only)
+ * </pre>
+ * With x = sqrt(y + b) in the units of the cubic (v = l sqrt(a g delta / H_P) x) the losses give
+ * nabla - nabla_ad = y (1 + 2U'/x) and the flux x y = k U (nabla_rad - nabla); eliminating nabla,
+ * <pre>
+ *   (x^2 - b) (x^2 + k U x + 2 k U U') = k U W x,
+ * </pre>
+ * which for b = 0 is x times the textbook cubic; in the efficiency Gamma = x / (2U') it is the
+ * equation of {@link MixingLengthCubic#efficiency(double, double, double)}. It has one positive
+ * root wherever nabla_rad &gt; nabla_L (W + b &gt; 0), also for W &lt;= 0: a zone that is
+ * Schwarzschild-stable but Ledoux-unstable convects, driven by its composition alone. There
+ * y = W Gamma / D has the sign of W, so for W &lt; 0 the element is cooler than its surroundings
+ * when it rises and the convective flux runs inwards: nabla_rad &lt; nabla &lt; nabla_e &lt; nabla_ad,
+ * F_conv / F = (nabla_rad - nabla) / nabla_rad &lt; 0 for L &gt; 0 (radiation then carries more than
+ * the total; with L &lt; 0 the ratio is positive and may exceed 1). The limits: as U -&gt; 0 nabla -&gt;
+ * nabla_ad with nabla - nabla_ad -&gt; k U W / sqrt(b) (x -&gt; sqrt(b)); as U -&gt; infinity nabla -&gt;
+ * nabla_rad while v -&gt; l sqrt(a g delta b / H_P), the composition's buoyancy alone. A zone with
+ * L = 0 that convects this way is refused: F_conv / F has no value there. The same
+ * construction is not made for nabla_mu &gt; 0 (see above). At R0 = 1 (nabla_rad = nabla_L) the
+ * convective solution does not vanish (x -&gt; sqrt(b) there too, since the composition's buoyancy
+ * remains when W + b -&gt; 0), so the regime switch to thermohaline mixing is discontinuous: onset
+ * of overturning in an inverted-mu zone is not gradual in this local theory.
+ *
+ * <p><b>Limits of double precision.</b> A convective zone needs W / (4 U'^2) (with composition
+ * (|W| + b) / (4 U'^2)) to be a normal double, roughly 1e-154 &lt; U' / sqrt(W) &lt; 1e154; beyond, it is refused with an
+ * {@link InvalidInputException} on the loss parameter (far below the zone is adiabatic, far above
+ * radiative, to far better than double precision; no star comes near either). F_conv / F is
+ * bounded to [0, 1] where W &gt; 0 (its rounded product could land one ulp above 1).
  *
  * <p>Derivatives: every output's partial derivatives with respect to T, rho, P, L, m, r, kappa,
  * c_P, nabla_ad, delta, nabla_mu, phi and alpha, by the chain rule through nabla_rad, H_P, l, U, U'
  * and implicit differentiation of the cubic (d Gamma = (dS - Gamma^3 d a0) / (3 a0 Gamma^2 +
- * 2 Gamma + 1)). nabla_mu and phi enter only the semiconvective and thermohaline coefficients.
+ * 2 Gamma + 1), or of the equation with composition). nabla_mu and phi enter the semiconvective and
+ * thermohaline coefficients, and a convective zone through b where nabla_mu &lt; 0.
  * The derivative at the switch between H_P and r of {@link CentreLimit#RADIUS} is one-sided
  * (the r branch is taken when r &lt; H_P).
  *
@@ -301,38 +344,91 @@ public final class MixingLengthZone {
             invW = 1.0 / w;
             invNablaRad = 1.0 / nablaRad;
         }
-        // without the transparency correction a0 is the geometry's constant, whose start table applies
-        final double gamma = regime != Regime.CONVECTIVE ? 0.0
-                : transparent ? MixingLengthCubic.efficiency(a0, s)
-                : MixingLengthCubic.efficiency(a0, s, geometry.cubicStarts());
-        if (!(gamma > 0.0)) {
+        if (regime != Regime.CONVECTIVE) {
             RadiativeGradient.valueAndDerivatives(kappa, z.luminosity, p, m, t, out.dNabla);
             stable(z, regime, nablaRad, semiconvection, thermohaline, out);
             return false;
         }
-
-        // D and the cubic's slope 3 a0 Gamma^2 + 2 Gamma + 1 are both >= 1: their reciprocals from one
-        // division unless the product is near overflow
-        final double den = MixingLengthCubic.denominator(a0, gamma);
-        final double slope = (3.0 * a0 * gamma + 2.0) * gamma + 1.0;
-        final double denSlope = den * slope;
-        final double invDen;
-        final double sensitivity;
-        if (denSlope < 1e300) {
-            final double both = 1.0 / denSlope;
-            invDen = slope * both;
-            sensitivity = den * both;
-        } else {
-            invDen = 1.0 / den;
-            sensitivity = 1.0 / slope;
+        // the composition term of the buoyancy, b = -(phi/delta) nabla_mu, where it destabilises
+        final double b = nablaMu < 0.0 ? (phi * invDelta) * -nablaMu : 0.0;
+        final boolean driven = b > 0.0;
+        final double beta = driven ? b * invFourULoss2 : 0.0;
+        // the cubic's right-hand side S (with composition, the scale |S| + beta of the equation) must be a
+        // normal double: outside it U' is beyond ~1e+-154 and S or Gamma do not fit. (W + b > 0 is not
+        // required of the rounded terms: the composition solver also takes a W + b that rounding made <= 0.)
+        final double drive = driven ? Math.abs(s) + beta : s;
+        if (!(drive >= Double.MIN_NORMAL && drive <= Double.MAX_VALUE && beta <= Double.MAX_VALUE)) {
+            throw lossOutOfRange(z, u, uLoss, w, b);
         }
+        if (nablaRad == 0.0) {
+            throw undefinedFraction(z);
+        }
+
+        // without the transparency correction a0 is the geometry's constant, whose start table applies
+        final double gamma = driven ? MixingLengthCubic.efficiency(a0, s, beta)
+                : transparent ? MixingLengthCubic.efficiency(a0, s)
+                : MixingLengthCubic.efficiency(a0, s, geometry.cubicStarts());
+        final double den = MixingLengthCubic.denominator(a0, gamma);
+        final double invDen;
+        // d Gamma = gR (dR - dA) + gB dB + gMu mu + gNu nu and d ln v = vR (dR - dA) + vB dB + vMu mu + vNu nu
+        // + lambda + sigma (see convectiveJacobian), with B = b
+        final double gR;
+        final double gB;
+        final double gMu;
+        final double gNu;
+        final double vR;
+        final double vB;
+        final double vMu;
+        final double vNu;
         final double a0Gamma2 = a0 * (gamma * gamma);
+        if (driven) {
+            // d Gamma = (Gamma dS + D d beta - (Gamma^2 - beta) Gamma^2 d a0) / F' (MixingLengthCubic.compositionSlope)
+            invDen = 1.0 / den;
+            final double h = 1.0 / MixingLengthCubic.compositionSlope(a0, s, gamma);
+            final double scaled = invFourULoss2 * h;
+            gR = gamma * scaled;
+            gB = den * scaled;
+            gMu = -2.0 * (gamma * gamma) * den * h;
+            gNu = -s * a0Gamma2 * gamma * invDen * h;
+            vR = scaled;
+            vB = gB / gamma;
+            vMu = 1.0 - 2.0 * gamma * den * h;
+            vNu = -s * a0Gamma2 * invDen * h;
+        } else {
+            // D and the cubic's slope 3 a0 Gamma^2 + 2 Gamma + 1 are both >= 1: their reciprocals from one
+            // division unless the product is near overflow
+            final double slope = (3.0 * a0 * gamma + 2.0) * gamma + 1.0;
+            final double denSlope = den * slope;
+            final double sensitivity;
+            if (denSlope < 1e300) {
+                final double both = 1.0 / denSlope;
+                invDen = slope * both;
+                sensitivity = den * both;
+            } else {
+                invDen = 1.0 / den;
+                sensitivity = 1.0 / slope;
+            }
+            // the g's over Gamma written by S = Gamma D and S = W / (4 U'^2): gR / Gamma = sensitivity D / W,
+            // gMu / Gamma = -2 sensitivity D, gNu / Gamma = -sensitivity a0 Gamma^2
+            gR = sensitivity * invFourULoss2;
+            gB = 0.0;
+            gMu = sensitivity * (-2.0 * s);
+            gNu = sensitivity * -(a0Gamma2 * gamma);
+            vR = sensitivity * (den * invW);
+            vB = 0.0;
+            vMu = 1.0 - 2.0 * (sensitivity * den);
+            vNu = sensitivity * -a0Gamma2;
+        }
         final double shareRad = a0Gamma2 * invDen;               // (nabla_rad - nabla) / W
         final double shareSuper = (gamma + 1.0) * invDen;        // (nabla - nabla_ad) / W
         final double nabla = nablaAd + w * shareSuper;
         final double x = 2.0 * uLoss * gamma;
         final double velocity = length * velocityScale * x;
-        final double convective = w * shareRad * invNablaRad;
+        // F_conv / F = (W / nabla_rad) (a0 Gamma^2 / D): for W > 0 both factors lie in [0, 1), but their
+        // rounded product can land one ulp above 1 where both are 1 - ulp; it is bounded to 1 there. For
+        // W <= 0 (convection driven by composition alone) it is the signed fraction, <= 0 for L > 0.
+        final double product = w * shareRad * invNablaRad;
+        final double convective = w > 0.0 ? Math.min(product, 1.0) : product;
         final double diffusion = MixingCoefficients.convective(velocity, length);
 
         out.nabla = nabla;
@@ -345,8 +441,12 @@ public final class MixingLengthZone {
         double probe = 0.0;
         if (jacobian) {
             probe = convectiveJacobian(invT, invRho, invP, invM, invR, invKappa, invCp, invDelta, invAlpha, capped,
-                    2.0 * thin, nablaRad, invNablaRad, invW, perL, w, a0, s, invFourULoss2, gamma, a0Gamma2, den,
-                    invDen, sensitivity, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
+                    2.0 * thin, nablaRad, invNablaRad, perL, w, a0, gamma, a0Gamma2, invDen, gR, gMu, gNu, vR, vMu,
+                    vNu, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
+            if (driven) {
+                probe += compositionJacobian(phi, invDelta, nablaMu, b, w, a0, gamma, invDen, invNablaRad, gB, vB,
+                        velocity, diffusion, out, columns, k);
+            }
         }
         guard(z, out, probe);
         return jacobian && columns != null;
@@ -355,8 +455,9 @@ public final class MixingLengthZone {
     /**
      * The Jacobian of a convective zone, written as a few coefficients per output times the
      * derivatives of the "base" quantities each input moves: nabla_rad (R), nabla_ad (A),
-     * ln U' (mu), ln a0 (nu), ln l (lambda) and ln sqrt(a g delta / H_P) (sigma). From the chain
-     * rule through the cubic (see the class comment):
+     * ln U' (mu), ln a0 (nu), ln l (lambda) and ln sqrt(a g delta / H_P) (sigma); the composition
+     * term b (B) is added by {@link #compositionJacobian}. From the chain rule through the cubic
+     * (see the class comment):
      * <pre>
      *   dS     = (dR - dA) / (4 U'^2) - 2 S mu,   d a0 = a0 nu,   dGamma = (dS - Gamma^3 d a0) / (3 a0 Gamma^2 + 2 Gamma + 1)
      *   d(a0 Gamma^2 / D) = (d a0 Gamma^2 (Gamma + 1) + a0 Gamma (Gamma + 2) dGamma) / D^2
@@ -364,27 +465,24 @@ public final class MixingLengthZone {
      *   d ln v  = lambda + sigma + mu + dGamma / Gamma,   d ln D_conv = d ln v + lambda
      *   d(F_conv/F) = (dW a0 Gamma^2/D + W d(a0 Gamma^2 / D) - (F_conv/F) dR) / nabla_rad
      * </pre>
-     * Each input moves only some of these (H_P = P r^2 / (G m rho), g = G m / r^2,
-     * U proportional to T^3 sqrt(H_P / (g delta)) / (c_P kappa rho^2 l^2), omega = kappa rho l,
-     * ln q = ln (y omega^2 / (1 + y omega^2))), so each entry is written with its nonzero terms
-     * only. The values go to {@code out}'s arrays, or to zone k of {@code columns} when that is
-     * not null, by the same arithmetic (bit-identical either way).
+     * The caller passes dGamma as gR (dR - dA) + gMu mu + gNu nu and d ln v - lambda - sigma as
+     * vR (dR - dA) + vMu mu + vNu nu, from the cubic or from the equation with composition
+     * ({@link MixingLengthCubic#compositionSlope}). Each input moves only some of these
+     * (H_P = P r^2 / (G m rho), g = G m / r^2, U proportional to T^3 sqrt(H_P / (g delta)) /
+     * (c_P kappa rho^2 l^2), omega = kappa rho l, ln q = ln (y omega^2 / (1 + y omega^2))), so each
+     * entry is written with its nonzero terms only. The values go to {@code out}'s arrays, or to
+     * zone k of {@code columns} when that is not null, by the same arithmetic (bit-identical either
+     * way).
      */
     private static double convectiveJacobian(double invT, double invRho, double invP, double invM, double invR,
                                            double invKappa, double invCp, double invDelta, double invAlpha,
                                            boolean capped, double lossElasticity, double nablaRad,
-                                           double invNablaRad, double invW, double perL, double w, double a0,
-                                           double s, double invFourULoss2, double gamma, double a0Gamma2,
-                                           double den, double invDen, double sensitivity,
+                                           double invNablaRad, double perL, double w, double a0,
+                                           double gamma, double a0Gamma2, double invDen,
+                                           double gR, double gMu, double gNu, double vR, double vMu, double vNu,
                                            double shareRad, double shareSuper, double velocity, double convective,
                                            double diffusion, ConvectionResult out, ConvectionColumns columns,
                                            int k) {
-
-        // dGamma = gR dR - gR dA + gMu mu + gNu nu (products grouped so that the factors that
-        // depend on Gamma alone are ready while 1/D and the sensitivity are divided)
-        final double gR = sensitivity * invFourULoss2;
-        final double gMu = sensitivity * (-2.0 * s);
-        final double gNu = sensitivity * -(a0Gamma2 * gamma);
         // d(shareRad) = sR (dR - dA) + sMu mu + sNu nu
         final double invDen2 = invDen * invDen;
         final double shareSlope = (a0 * gamma * (gamma + 2.0)) * invDen2;
@@ -396,12 +494,6 @@ public final class MixingLengthZone {
         final double nA = shareRad + w * sR;
         final double nMu = -w * sMu;
         final double nNu = -w * sNu;
-        // d ln v = vR dR - vR dA + vMu mu + vNu nu + lambda + sigma, with the g's over Gamma written
-        // by S = Gamma D and S = W / (4 U'^2): gR / Gamma = sensitivity D / W, gMu / Gamma =
-        // -2 sensitivity D, gNu / Gamma = -sensitivity a0 Gamma^2
-        final double vR = sensitivity * (den * invW);
-        final double vMu = 1.0 - 2.0 * (sensitivity * den);
-        final double vNu = sensitivity * -a0Gamma2;
         // d(F_conv/F) = cR dR + cA dA + cMu mu + cNu nu
         final double cR = (shareRad + w * sR - convective) * invNablaRad;
         final double cA = -nA * invNablaRad;
@@ -574,8 +666,8 @@ public final class MixingLengthZone {
             fracAlpha = cMu * mu + cNu * nu;
             diffAlpha = diffusion * (lnV + lambda);
         }
-        // nabla_mu and phi do not enter a convective zone. The stores follow in one straight run per
-        // destination, so that nothing branches between them.
+        // nabla_mu and phi enter only through the composition term (written by compositionJacobian).
+        // The stores follow in one straight run per destination, so that nothing branches between them.
         if (columns == null) {
             write(out.dNabla, nablaT, nablaRho, nablaP, nablaL, nablaM, nablaRadius, nablaKappa, nablaCp, nablaNablaAd,
                     nablaDelta, nablaAlpha);
@@ -609,6 +701,79 @@ public final class MixingLengthZone {
         final double zeroAlpha = (nablaAlpha * 0.0 + velAlpha * 0.0) + (fracAlpha * 0.0 + diffAlpha * 0.0);
         return ((((zeroT + zeroRho) + (zeroP + zeroL)) + ((zeroM + zeroRadius) + (zeroKappa + zeroCp)))
                 + ((zeroNablaAd + zeroDelta) + zeroAlpha));
+    }
+
+    /**
+     * The composition term's share of a convective zone's Jacobian, where b = -(phi/delta) nabla_mu &gt; 0
+     * enters the buoyancy: each output's coefficient of dB (from d Gamma = ... + gB dB and
+     * d ln v = ... + vB dB), times d b / d nabla_mu = -phi/delta, d b / d phi = -nabla_mu/delta and
+     * d b / d delta = -b/delta. Writes the nabla_mu and phi entries and adds to the delta entries
+     * that {@link #convectiveJacobian} wrote, in {@code out} or in zone k of {@code columns}.
+     *
+     * @return sum of (entry * 0) over the entries written: NaN exactly when one is not finite
+     */
+    private static double compositionJacobian(double phi, double invDelta, double nablaMu, double b, double w,
+                                              double a0, double gamma, double invDen, double invNablaRad,
+                                              double gB, double vB, double velocity, double diffusion,
+                                              ConvectionResult out, ConvectionColumns columns, int k) {
+        final double shareSlope = (a0 * gamma * (gamma + 2.0)) * (invDen * invDen);
+        final double sB = shareSlope * gB;
+        final double nablaB = -w * sB;
+        final double velB = velocity * vB;
+        final double fracB = w * sB * invNablaRad;
+        final double diffB = diffusion * vB;
+        final double bMu = -(phi * invDelta);
+        final double bPhi = -nablaMu * invDelta;
+        final double bDelta = -b * invDelta;
+        if (columns == null) {
+            return composition(out.dNabla, nablaB, bMu, bPhi, bDelta) + composition(out.dVelocity, velB, bMu, bPhi, bDelta)
+                    + composition(out.dConvectiveFraction, fracB, bMu, bPhi, bDelta)
+                    + composition(out.dDiffusion, diffB, bMu, bPhi, bDelta);
+        }
+        return composition(columns.dNabla, k, nablaB, bMu, bPhi, bDelta)
+                + composition(columns.dVelocity, k, velB, bMu, bPhi, bDelta)
+                + composition(columns.dConvectiveFraction, k, fracB, bMu, bPhi, bDelta)
+                + composition(columns.dDiffusion, k, diffB, bMu, bPhi, bDelta);
+    }
+
+    /** One output's composition entries: d/d nabla_mu and d/d phi written, d/d delta added to. */
+    private static double composition(double[] d, double perB, double bMu, double bPhi, double bDelta) {
+        d[ZoneInput.NABLA_MU] = perB * bMu;
+        d[ZoneInput.PHI] = perB * bPhi;
+        d[ZoneInput.DELTA] += perB * bDelta;
+        return (d[ZoneInput.NABLA_MU] * 0.0 + d[ZoneInput.PHI] * 0.0) + d[ZoneInput.DELTA] * 0.0;
+    }
+
+    /** {@link #composition(double[], double, double, double, double)} for zone k of an output's columns. */
+    private static double composition(double[][] c, int k, double perB, double bMu, double bPhi, double bDelta) {
+        c[ZoneInput.NABLA_MU][k] = perB * bMu;
+        c[ZoneInput.PHI][k] = perB * bPhi;
+        c[ZoneInput.DELTA][k] += perB * bDelta;
+        return (c[ZoneInput.NABLA_MU][k] * 0.0 + c[ZoneInput.PHI][k] * 0.0) + c[ZoneInput.DELTA][k] * 0.0;
+    }
+
+    /**
+     * The refusal of a convective zone whose loss parameter is beyond what double precision can
+     * solve: the right-hand side W / (4 U'^2) of the cubic (or (|W| + b) / (4 U'^2)) is not a normal
+     * double (U' below
+     * about 1e-154 or above about 1e154 for W ~ 1). Not a hot-path branch: it allocates the exception.
+     */
+    private static InvalidInputException lossOutOfRange(ZoneState z, double u, double uLoss, double w, double b) {
+        return new InvalidInputException("lossParameter", u, "1", z.zone,
+                "such that (|nabla_rad - nabla_ad| + b) / (4 U'^2) is a normal double (here U' = " + uLoss
+                        + ", nabla_rad - nabla_ad = " + w + ", b = -(phi/delta) nabla_mu = " + b
+                        + "): about 1e-154 < U' / sqrt(|nabla_rad - nabla_ad| + b) < 1e154. Far below, the zone is"
+                        + " adiabatic (nabla = nabla_ad) and far above radiative (nabla = nabla_rad) to much better"
+                        + " than double precision; U = (3 a c T^3 / (c_P rho^2 kappa l^2)) sqrt(8 H_P / (g delta)):"
+                        + " check c_P, kappa, rho, T and alpha (" + z + ")");
+    }
+
+    /** The refusal of a convective zone with L = 0, where F_conv / F has no value. */
+    private static InvalidInputException undefinedFraction(ZoneState z) {
+        return new InvalidInputException("luminosity", z.luminosity, "erg s^-1", z.zone,
+                "non-zero in a convective zone: with L = 0 (nabla_rad = 0) the zone convects only because its"
+                        + " inverted composition gradient puts nabla_L below 0, and F_conv / F is undefined ("
+                        + z + ")");
     }
 
     /** Bit pattern of x minus that of 2^-256: in [0, 2^61) exactly when 2^-256 &lt;= x &lt; 2^256. */

@@ -5,6 +5,7 @@ import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.gradient.LedouxGradient;
 import io.github.startransport.core.seismic.AsymptoticIntegrals;
 import io.github.startransport.core.seismic.LocalFrequencies;
+import io.github.startransport.core.gradient.StabilityClassifier;
 import io.github.startransport.core.timescale.Timescale;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
@@ -49,8 +50,9 @@ import java.util.OptionalDouble;
  * ({@link AsymptoticIntegrals}).
  *
  * <p>Region boundaries lie where the quantity that separates the two regimes changes sign, found
- * by {@link BoundaryFinder} between the two zones: the chosen criterion's margin at the edge of a
- * convective region, the Schwarzschild margin at the edge of a semiconvective region, nabla_mu
+ * by {@link BoundaryFinder} between the two zones: the chosen criterion's convective margin
+ * ({@link StabilityClassifier#convectiveMargin}: nabla_rad - nabla_L under Ledoux,
+ * nabla_rad - min(nabla_ad, nabla_L) under Schwarzschild) at the edge of a convective region, the Schwarzschild margin at the edge of a semiconvective region, nabla_mu
  * at the edge of a thermohaline region. The Schwarzschild and Ledoux boundaries are both
  * reported where a margin of each kind changes sign next to the edge.
  *
@@ -146,6 +148,7 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] ell = new double[n];
         double[] marginS = new double[n];
         double[] marginL = new double[n];
+        double[] marginC = new double[n];
         Regime[] regimes = new Regime[n];
 
         ZoneState zone = new ZoneState();
@@ -215,6 +218,7 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             lamb1[k] = LocalFrequencies.lamb(1, soundSpeed[k], r[k]);
             marginS[k] = nablaRad[k] - nablaAd[k];
             marginL[k] = nablaRad[k] - nablaL[k];
+            marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
         }
         if (!hasThermo) {
             boolean fullyIonised = IdealGasRadiation.NAME.equals(setup.thermodynamics().toString());
@@ -260,7 +264,14 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         out.put(DiagnosisColumn.GAMMA1, gamma1);
         out.put(DiagnosisColumn.PHI, phi);
 
-        List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, nablaMu, criterion);
+        // does the profile's own gradient agree with the physics? (see ModelConsistency)
+        double[] nablaModel = computed(out, DiagnosisColumn.NABLA_MODEL, n);
+        double[] mismatch = computed(out, DiagnosisColumn.NABLA_MISMATCH, n);
+        ModelConsistency.nablaModel(t, pres, nablaModel);
+        ModelConsistency.mismatch(nablaModel, nabla, nablaRad, nablaAd, regimes, mismatch);
+        warnings.addAll(ModelConsistency.warnings(mismatch, regimes, k -> zoneAsGiven(p, k)));
+
+        List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, marginC, nablaMu);
         Timescales times = new Timescales(
                 Timescale.photonDiffusion(r, kappa, rho),
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
@@ -367,11 +378,16 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         return a;
     }
 
-    /** The quantity whose sign change separates regime a (inside) from regime b (outside). */
-    private static double[] separator(Regime inside, Regime outside, Criterion criterion, double[] marginS,
-                                      double[] marginL, double[] nablaMu) {
+    /**
+     * The quantity whose sign change separates regime a (inside) from regime b (outside): the
+     * criterion's convective margin ({@link StabilityClassifier#convectiveMargin}) at the edge of a
+     * convective region, the Schwarzschild margin at the edge of a semiconvective one, nabla_mu between
+     * thermohaline and radiative zones.
+     */
+    private static double[] separator(Regime inside, Regime outside, double[] marginS, double[] marginC,
+                                      double[] nablaMu) {
         if (inside == Regime.CONVECTIVE || outside == Regime.CONVECTIVE) {
-            return criterion == Criterion.LEDOUX ? marginL : marginS;
+            return marginC;
         }
         if (inside == Regime.SEMICONVECTIVE || outside == Regime.SEMICONVECTIVE) {
             return marginS;
@@ -380,8 +396,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
     }
 
     static List<Region> regions(double[] r, double[] m, double[] pres, double[] hp, double[] ell, double[] v,
-                                Regime[] regimes, double[] marginS, double[] marginL, double[] nablaMu,
-                                Criterion criterion) {
+                                Regime[] regimes, double[] marginS, double[] marginL, double[] marginC,
+                                double[] nablaMu) {
         int n = r.length;
         double radius = r[n - 1];
         double mass = m[n - 1];
@@ -400,11 +416,9 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             }
             // bottom at the centre, top at the surface, or between the zones either side of the edge
             double[] bottom = first == 0 ? new double[] {0.0, 0.0, pres[0]}
-                    : edgeBetween(first - 1, first, separator(regime, regimes[first - 1], criterion, marginS, marginL,
-                    nablaMu), r, m, pres);
+                    : edgeBetween(first - 1, first, separator(regime, regimes[first - 1], marginS, marginC, nablaMu), r, m, pres);
             double[] top = last == n - 1 ? new double[] {radius, mass, pres[n - 1]}
-                    : edgeBetween(last, last + 1, separator(regime, regimes[last + 1], criterion, marginS, marginL,
-                    nablaMu), r, m, pres);
+                    : edgeBetween(last, last + 1, separator(regime, regimes[last + 1], marginS, marginC, nablaMu), r, m, pres);
             double rb = bottom[0];
             double rt = top[0];
             OptionalDouble turnGlobal = OptionalDouble.empty();
@@ -417,8 +431,11 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 }
                 vmax = OptionalDouble.of(peak);
                 if (peak > 0.0) {
-                    turnGlobal = OptionalDouble.of(Timescale.turnoverGlobal(r, v, first, last, rb, rt));
-                    double local = Timescale.turnoverLocal(r, hp, ell, v, first, last, rb, rt);
+                    // the envelope integral of dr / v diverges at the centre of a core: there the
+                    // core's radius over its mass-weighted mean velocity (see Timescale)
+                    turnGlobal = OptionalDouble.of(first == 0 ? Timescale.turnoverCore(m, v, last, rt, top[1])
+                            : Timescale.turnoverGlobal(r, v, first, last, rb, rt));
+                    double local = Timescale.turnoverLocal(r, ell, v, first, last, rb, rt);
                     if (local > 0.0) {
                         turnLocal = OptionalDouble.of(local);
                     }

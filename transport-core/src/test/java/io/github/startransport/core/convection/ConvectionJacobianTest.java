@@ -53,6 +53,32 @@ class ConvectionJacobianTest {
         check(model(alpha, Criterion.SCHWARZSCHILD, geometry, limit, (variant & 4) != 0), z, Regime.CONVECTIVE);
     }
 
+    /**
+     * Convective zones driven partly or wholly by an inverted composition gradient (nabla_mu &lt; 0,
+     * b = -(phi/delta) nabla_mu in the buoyancy, R0 &lt; 1, W from -0.95 b to 2 b): every entry, including
+     * d/d nabla_mu and d/d phi, under both criteria, both variants and both geometry sets.
+     */
+    @Property(tries = 400, seed = "53")
+    void compositionJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
+                             @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
+                             @ForAll @Scale(12) @DoubleRange(min = -6, max = 6) double logU,
+                             @ForAll @Scale(12) @DoubleRange(min = -3, max = 0) double logB,
+                             @ForAll @Scale(12) @DoubleRange(min = -0.95, max = 2) double wOverB,
+                             @ForAll @Scale(12) @DoubleRange(min = 8, max = 12) double logR,
+                             @ForAll @Scale(12) @DoubleRange(min = 28, max = 34) double logM,
+                             @ForAll @IntRange(min = 0, max = 15) int variant) {
+        MixingLengthGeometry geometry = MixingLengthGeometry.values()[variant & 1];
+        CentreLimit limit = (variant & 2) == 0 ? CentreLimit.RADIUS : CentreLimit.NONE;
+        Criterion criterion = (variant & 8) == 0 ? Criterion.SCHWARZSCHILD : Criterion.LEDOUX;
+        double b = Math.pow(10, logB);
+        ZoneState probe = TestZones.build(logT, rhoFraction, logU, 1.0, logR, logM, 1.8, geometry, limit);
+        ZoneState z = TestZones.build(logT, rhoFraction, logU, probe.nablaAd + wOverB * b, logR, logM, 1.8, geometry,
+                limit);
+        z.phi = 0.7 + 0.5 * rhoFraction;
+        z.nablaMu = -b * z.delta / z.phi;
+        check(model(1.8, criterion, geometry, limit, (variant & 4) != 0), z, Regime.CONVECTIVE);
+    }
+
     /** Stable zones: radiative, semiconvective (Ledoux, nabla_mu &gt; 0) and thermohaline (nabla_mu &lt; 0). */
     @Property(tries = 300, seed = "52")
     void stableJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,

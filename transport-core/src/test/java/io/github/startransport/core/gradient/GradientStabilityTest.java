@@ -1,5 +1,10 @@
 package io.github.startransport.core.gradient;
 
+import io.github.startransport.core.convection.LocalMixingLength;
+import io.github.startransport.core.convection.MixingLengthGeometry;
+import io.github.startransport.core.convection.TransparentEddyMixingLength;
+import io.github.startransport.spi.ConvectionModel;
+import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelOptions;
@@ -80,25 +85,85 @@ class GradientStabilityTest {
     }
 
     @Test
-    void thermohalineWhereMuInvertedAndStable() {
+    void thermohalineWhereMuInvertedAndLedouxStable() {
         ZoneState z = zone(0.2, 0.4, -0.05); // nabla_L = 0.35 > nabla_rad
         assertEquals(Regime.THERMOHALINE, regime(SCHWARZSCHILD, z));
         assertEquals(Regime.THERMOHALINE, regime(LEDOUX, z));
     }
 
     @Test
-    void zonesExactlyOnASlowMixingMarginAreRadiative() {
-        // the semiconvective and thermohaline coefficients diverge at nabla_rad = nabla_L and
-        // nabla_rad = nabla_ad (Langer, Sugimoto & Fricke 1983; Kippenhahn, Ruschenplatt & Thomas 1980)
+    void zonesExactlyOnAMarginAreNotConvective() {
+        // the semiconvective coefficient diverges at nabla_rad = nabla_L (Langer, Sugimoto & Fricke 1983): radiative
         assertEquals(Regime.RADIATIVE, StabilityClassifier.classify(Criterion.LEDOUX, 0.7, 0.4, 0.7, 0.3));
-        assertEquals(Regime.RADIATIVE, StabilityClassifier.classify(Criterion.SCHWARZSCHILD, 0.4, 0.4, 0.35, -0.05));
         assertEquals(Regime.SEMICONVECTIVE, StabilityClassifier.classify(Criterion.LEDOUX, Math.nextDown(0.7), 0.4, 0.7, 0.3));
-        assertEquals(Regime.THERMOHALINE,
-                StabilityClassifier.classify(Criterion.SCHWARZSCHILD, Math.nextDown(0.4), 0.4, 0.35, -0.05));
+        // R0 = 1 exactly is marginally stable to overturning: fingers (Kippenhahn, Ruschenplatt & Thomas 1980),
+        // whose coefficient C_t K_T / R0 is finite there
+        for (Criterion c : Criterion.values()) {
+            assertEquals(Regime.THERMOHALINE, StabilityClassifier.classify(c, 0.35, 0.4, 0.35, -0.05));
+            assertEquals(Regime.CONVECTIVE, StabilityClassifier.classify(c, Math.nextUp(0.35), 0.4, 0.35, -0.05));
+            // nabla_rad = nabla_ad with nabla_mu < 0 is R0 = 0: dynamically unstable
+            assertEquals(Regime.CONVECTIVE, StabilityClassifier.classify(c, 0.4, 0.4, 0.35, -0.05));
+            // a composition term below the rounding of nabla_ad (nabla_L = nabla_ad = nabla_rad): on both margins
+            assertEquals(Regime.RADIATIVE, StabilityClassifier.classify(c, 0.4, 0.4, 0.4, -1e-30));
+            // nabla_mu = 0 and nabla_rad = nabla_ad: stable
+            assertEquals(Regime.RADIATIVE, StabilityClassifier.classify(c, 0.4, 0.4, 0.4, 0.0));
+        }
+    }
+
+    /**
+     * Every row of the rule table (README, Stability; {@link StabilityClassifier}), under both criteria,
+     * through the classifier, the stability model and its margin: nabla_ad = 0.4, phi/delta = 1, so
+     * nabla_L = 0.4 + nabla_mu. Definitions: Schwarzschild and Ledoux criteria and the semiconvective
+     * range (Kippenhahn, Weigert &amp; Weiss 2012 §6.1-6.2, from memory); an inverted gradient is
+     * dynamically unstable for R0 &lt; 1 and fingering-unstable for R0 &gt;= 1 (Kippenhahn, Ruschenplatt
+     * &amp; Thomas 1980; Brown et al. 2013, ApJ 768, 34). Rows with L &lt; 0 have nabla_rad &lt; 0.
+     */
+    static Stream<Arguments> ruleTable() {
+        return Stream.of(
+                // nabla_rad, nabla_mu, Schwarzschild, Ledoux
+                Arguments.of("mu<0, W>0", 0.6, -0.1, Regime.CONVECTIVE, Regime.CONVECTIVE),
+                Arguments.of("mu<0, nabla_L<nabla_rad<nabla_ad (0<R0<1)", 0.35, -0.1, Regime.CONVECTIVE, Regime.CONVECTIVE),
+                Arguments.of("mu<0, nabla_rad<nabla_L (R0>1)", 0.25, -0.1, Regime.THERMOHALINE, Regime.THERMOHALINE),
+                Arguments.of("mu<0, far below (R0>>1)", 0.01, -1e-4, Regime.THERMOHALINE, Regime.THERMOHALINE),
+                Arguments.of("mu=0, W>0", 0.6, 0.0, Regime.CONVECTIVE, Regime.CONVECTIVE),
+                Arguments.of("mu=0, W<0", 0.2, 0.0, Regime.RADIATIVE, Regime.RADIATIVE),
+                Arguments.of("mu>0, nabla_rad>nabla_L", 0.6, 0.1, Regime.CONVECTIVE, Regime.CONVECTIVE),
+                Arguments.of("mu>0, nabla_ad<nabla_rad<nabla_L", 0.45, 0.1, Regime.CONVECTIVE, Regime.SEMICONVECTIVE),
+                Arguments.of("mu>0, W<0", 0.2, 0.1, Regime.RADIATIVE, Regime.RADIATIVE),
+                Arguments.of("L<0, mu>0", -0.3, 0.1, Regime.RADIATIVE, Regime.RADIATIVE),
+                Arguments.of("L<0, mu=0", -0.3, 0.0, Regime.RADIATIVE, Regime.RADIATIVE),
+                Arguments.of("L<0, mu<0, nabla_rad<nabla_L", -0.3, -0.5, Regime.THERMOHALINE, Regime.THERMOHALINE),
+                Arguments.of("L<0, mu<0, nabla_L<nabla_rad", -0.3, -0.9, Regime.CONVECTIVE, Regime.CONVECTIVE));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("ruleTable")
+    void everyRowOfTheRuleTable(String row, double nablaRad, double nablaMu, Regime schwarzschild, Regime ledoux) {
+        ZoneState z = zone(nablaRad, 0.4, nablaMu);
+        assertEquals(nablaRad < 0, z.luminosity < 0, row);
+        for (Criterion c : Criterion.values()) {
+            Regime expected = c == Criterion.SCHWARZSCHILD ? schwarzschild : ledoux;
+            assertEquals(expected, StabilityClassifier.classify(c, nablaRad, 0.4, 0.4 + nablaMu, nablaMu), row);
+            StabilityResult r = new StabilityResult();
+            new GradientStability(c).evaluate(z, r);
+            assertEquals(expected, r.regime, row + " under " + c);
+            assertEquals(expected == Regime.CONVECTIVE, r.margin() > 0.0, row + ": margin " + r.margin());
+            assertEquals(r.margin(), StabilityClassifier.convectiveMargin(c, r.nablaRad, r.nablaAd, r.nablaLedoux), 0.0);
+            // the convection models decide by the same rules: v > 0 exactly when convective, D > 0 in every
+            // regime but radiative
+            for (ConvectionModel model : List.of(new LocalMixingLength(1.8, c, MixingLengthGeometry.BOHM_VITENSE_1958),
+                    new TransparentEddyMixingLength(1.8, c, MixingLengthGeometry.BOHM_CASSINELLI_1971, 1.0 / 3.0))) {
+                ConvectionResult out = new ConvectionResult();
+                model.solve(z, out);
+                assertEquals(expected, out.regime, row + ": " + model);
+                assertEquals(expected == Regime.CONVECTIVE, out.velocity > 0.0, row + ": " + out);
+                assertEquals(expected != Regime.RADIATIVE, out.diffusion > 0.0, row + ": " + out);
+            }
+        }
     }
 
     @Test
-    void negativeLuminosityIsRadiative() {
+    void negativeLuminosityWithoutAnInvertedGradientIsRadiative() {
         // energy flowing inward (e.g. a neutrino-cooled core): nabla_rad < 0 < nabla_ad
         ZoneState z = zone(-0.3, 0.4, 0.0);
         StabilityResult r = new StabilityResult();

@@ -1,7 +1,6 @@
 package io.github.startransport.core.profile;
 
 import io.github.startransport.core.gradient.GasRadiation;
-import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Region;
 import net.jqwik.api.ForAll;
@@ -43,7 +42,7 @@ class BoundaryAndCompositionTest {
         }
         double[] zero = new double[n];
         List<Region> regions = LocalDiagnosis.regions(r, m, p, new double[n], new double[n], new double[n], regimes,
-                margin, margin, zero, Criterion.SCHWARZSCHILD);
+                margin, margin, margin, zero);
         assertEquals(1, regions.size());
         assertEquals(0.0, regions.get(0).bottomRadius());
         assertEquals(r0, regions.get(0).topRadius(), 1e-12 * r0);
