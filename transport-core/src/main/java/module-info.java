@@ -10,6 +10,7 @@ module io.github.startransport.core {
     exports io.github.startransport.core;
     exports io.github.startransport.core.constants;
     exports io.github.startransport.core.convection;
+    exports io.github.startransport.core.envelope;
     exports io.github.startransport.core.gradient;
     exports io.github.startransport.core.model;
     exports io.github.startransport.core.opacity;

@@ -168,7 +168,7 @@ class EndToEndTest {
         }
         assertTrue(r.out().contains("timescales"), r.out());
         assertRegionsMatchZones(out);
-        assertEquals(List.of("out"), Files.list(dir).map(p -> p.getFileName().toString()).toList());
+        assertEquals(OutputFolderTest.expectedBeside(dir, "out"), OutputFolderTest.names(dir));
     }
 
     @Test

@@ -44,4 +44,36 @@ class ZoneTableTest {
             }
         }
     }
+    @Test
+    void aTableOfManyBlocksWrittenOnSeveralCoresKeepsEveryRowInOrder(@TempDir Path dir) throws Exception {
+        int n = 3 * 8192 + 123;
+        java.util.Map<DiagnosisColumn, double[]> columns = new java.util.EnumMap<>(DiagnosisColumn.class);
+        java.util.SplittableRandom rnd = new java.util.SplittableRandom(3);
+        for (DiagnosisColumn c : DiagnosisColumn.values()) {
+            double[] v = new double[n];
+            for (int k = 0; k < n; k++) {
+                v[k] = c == DiagnosisColumn.RADIUS ? k + 1.0 : Math.exp(rnd.nextDouble(-60, 60));
+            }
+            columns.put(c, v);
+        }
+        Regime[] regimes = new Regime[n];
+        for (int k = 0; k < n; k++) {
+            regimes[k] = Regime.values()[k % Regime.values().length];
+        }
+        ProfileDiagnosis d = new ProfileDiagnosis("many", io.github.startransport.spi.Criterion.LEDOUX, 1.8, columns,
+                regimes, List.of(), new io.github.startransport.spi.Timescales(1, 2, 3), List.of());
+        Path file = dir.resolve("zones.csv");
+        ZoneTable.write(d, file);
+        try (Reader in = Files.newBufferedReader(file);
+             CSVParser csv = CSVParser.parse(in, CSVFormat.DEFAULT.builder().setHeader().get())) {
+            List<CSVRecord> rows = csv.getRecords();
+            assertEquals(n, rows.size());
+            for (int k = 0; k < n; k++) {
+                for (DiagnosisColumn c : DiagnosisColumn.values()) {
+                    assertEquals(d.value(c, k), Double.parseDouble(rows.get(k).get(c.header())), c.header() + " zone " + k);
+                }
+                assertEquals(regimes[k], Regime.fromLabel(rows.get(k).get("regime")));
+            }
+        }
+    }
 }

@@ -2,6 +2,7 @@ package io.github.startransport.core;
 
 import io.github.startransport.core.convection.LocalMixingLength;
 import io.github.startransport.core.convection.TransparentEddyMixingLength;
+import io.github.startransport.core.envelope.GreyAtmosphereEnvelope;
 import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.model.DemoStar;
@@ -44,6 +45,7 @@ public final class CoreProvider implements TransportProvider {
             new Entry(TabulatedOpacity.INFO, TabulatedOpacity::fromOptions),
             new Entry(CsvTableTool.INFO, CsvTableTool::fromOptions),
             new Entry(LocalDiagnosis.INFO, LocalDiagnosis::fromOptions),
+            new Entry(GreyAtmosphereEnvelope.INFO, GreyAtmosphereEnvelope::fromOptions),
             new Entry(DemoStar.INFO, DemoStar::fromOptions),
             new Entry(LocalBuoyancy.INFO, LocalBuoyancy::fromOptions));
 
@@ -59,8 +61,8 @@ public final class CoreProvider implements TransportProvider {
     @Override
     public String description() {
         return "startransport's own physics: stability tests, partially ionised gas (Saha) and ideal gas plus radiation, "
-                + "mixing-length convection, "
-                + "opacities (analytic and tabulated), profile diagnosis, demo star, buoyancy and acoustic frequencies";
+                + "mixing-length convection, opacities (analytic and tabulated), profile diagnosis, envelope integration, "
+                + "demo star, buoyancy and acoustic frequencies";
     }
 
     @Override

@@ -32,7 +32,34 @@ public final class ProfileDiagnosis {
      */
     public ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
                             Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings) {
-        this(source, criterion, alpha, columns, regimes, regions, timescales, warnings, null);
+        this(source, criterion, alpha, columns, regimes, regions, timescales, warnings, true);
+    }
+
+    /**
+     * @param copy whether to copy the arrays; {@code false} only through
+     *             {@link io.github.startransport.spi.sharing.ColumnSharing}, whose caller hands
+     *             the arrays over (they are arrays of an immutable {@link Profile}, or new ones
+     *             nobody else keeps)
+     */
+    ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
+                     Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings,
+                     boolean copy) {
+        this.source = source;
+        this.criterion = criterion;
+        this.alpha = alpha;
+        this.columns = new EnumMap<>(DiagnosisColumn.class);
+        for (DiagnosisColumn c : DiagnosisColumn.values()) {
+            double[] v = columns.get(c);
+            if (v == null || v.length != regimes.length) {
+                throw new IllegalArgumentException("column " + c.header() + " missing or of the wrong length");
+            }
+            this.columns.put(c, copy ? v.clone() : v);
+        }
+        this.regimes = copy ? regimes.clone() : regimes;
+        this.regions = List.copyOf(regions);
+        this.timescales = timescales;
+        this.warnings = List.copyOf(warnings);
+        this.seismic = null;
     }
 
     /**
@@ -49,22 +76,34 @@ public final class ProfileDiagnosis {
     public ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
                             Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings,
                             SeismicSummary seismic) {
+        this(new ProfileDiagnosis(source, criterion, alpha, columns, regimes, regions, timescales, warnings, true),
+                seismic);
+    }
+
+    /** The same diagnosis (its arrays shared: they are never handed out) with the seismic integrals. */
+    private ProfileDiagnosis(ProfileDiagnosis d, SeismicSummary seismic) {
+        this.source = d.source;
+        this.criterion = d.criterion;
+        this.alpha = d.alpha;
+        this.columns = d.columns;
+        this.regimes = d.regimes;
+        this.regions = d.regions;
+        this.timescales = d.timescales;
+        this.warnings = d.warnings;
         this.seismic = seismic;
-        this.source = source;
-        this.criterion = criterion;
-        this.alpha = alpha;
-        this.columns = new EnumMap<>(DiagnosisColumn.class);
-        for (DiagnosisColumn c : DiagnosisColumn.values()) {
-            double[] v = columns.get(c);
-            if (v == null || v.length != regimes.length) {
-                throw new IllegalArgumentException("column " + c.header() + " missing or of the wrong length");
-            }
-            this.columns.put(c, v.clone());
-        }
-        this.regimes = regimes.clone();
-        this.regions = List.copyOf(regions);
-        this.timescales = timescales;
-        this.warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * @param seismic whole-model seismic integrals of this diagnosis
+     * @return this diagnosis with them (nothing copied: the columns are never handed out)
+     */
+    public ProfileDiagnosis withSeismic(SeismicSummary seismic) {
+        return new ProfileDiagnosis(this, seismic);
+    }
+
+    /** @return the whole-model seismic integrals, when the diagnoser computed them */
+    public Optional<SeismicSummary> seismic() {
+        return Optional.ofNullable(seismic);
     }
 
     /** @return where the profile came from */
@@ -104,6 +143,14 @@ public final class ProfileDiagnosis {
         return columns.get(column)[zone];
     }
 
+    /**
+     * @param zone zone index, centre = 0
+     * @return the regime of that zone
+     */
+    public Regime regime(int zone) {
+        return regimes[zone];
+    }
+
     /** @return a copy of the regime of every zone */
     public Regime[] regimes() {
         return regimes.clone();
@@ -117,11 +164,6 @@ public final class ProfileDiagnosis {
     /** @return the timescales */
     public Timescales timescales() {
         return timescales;
-    }
-
-    /** @return the whole-model seismic integrals, when the diagnoser computed them */
-    public Optional<SeismicSummary> seismic() {
-        return Optional.ofNullable(seismic);
     }
 
     /** @return warnings, one sentence each */

@@ -27,6 +27,7 @@ import io.github.startransport.spi.SeismicSummary;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.Timescales;
 import io.github.startransport.spi.ZoneState;
+import io.github.startransport.spi.sharing.ColumnSharing;
 
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -56,7 +57,8 @@ import java.util.OptionalDouble;
  * at the edge of a thermohaline region. The Schwarzschild and Ledoux boundaries are both
  * reported where a margin of each kind changes sign next to the edge.
  *
- * <p>Immutable and thread-safe; each call allocates its own working arrays.
+ * <p>Immutable and thread-safe; each call allocates its own working arrays. The diagnosis shares
+ * the profile's columns (both are immutable) rather than copying them.
  */
 public final class LocalDiagnosis implements ProfileDiagnoser {
     /** Name to ask for this model by. */
@@ -95,14 +97,14 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         if (p.wasReversed()) {
             warnings.add("the profile was ordered surface to centre and has been reversed");
         }
-        double[] r = p.column(ProfileColumn.RADIUS);
-        double[] m = p.column(ProfileColumn.MASS);
-        double[] t = p.column(ProfileColumn.TEMPERATURE);
-        double[] rho = p.column(ProfileColumn.DENSITY);
-        double[] pres = p.column(ProfileColumn.PRESSURE);
-        double[] lum = p.column(ProfileColumn.LUMINOSITY);
-        double[] x = p.column(ProfileColumn.HYDROGEN);
-        double[] z = p.column(ProfileColumn.METALS);
+        double[] r = ColumnSharing.read(p, ProfileColumn.RADIUS);
+        double[] m = ColumnSharing.read(p, ProfileColumn.MASS);
+        double[] t = ColumnSharing.read(p, ProfileColumn.TEMPERATURE);
+        double[] rho = ColumnSharing.read(p, ProfileColumn.DENSITY);
+        double[] pres = ColumnSharing.read(p, ProfileColumn.PRESSURE);
+        double[] lum = ColumnSharing.read(p, ProfileColumn.LUMINOSITY);
+        double[] x = ColumnSharing.read(p, ProfileColumn.HYDROGEN);
+        double[] z = ColumnSharing.read(p, ProfileColumn.METALS);
 
         boolean hasKappa = p.has(ProfileColumn.OPACITY);
         double[] kappa = columnOr(p, ProfileColumn.OPACITY, 0.0);
@@ -117,7 +119,7 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         boolean useThermo = !hasThermo || !hasGamma1 || !hasPhi;
         double[] nablaMu;
         if (p.has(ProfileColumn.NABLA_MU)) {
-            nablaMu = p.column(ProfileColumn.NABLA_MU);
+            nablaMu = ColumnSharing.read(p, ProfileColumn.NABLA_MU);
         } else {
             for (int k = 1; k < n; k++) {
                 if (!(pres[k] < pres[k - 1])) {
@@ -276,8 +278,9 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 Timescale.photonDiffusion(r, kappa, rho),
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
                 Timescale.kelvinHelmholtz(m[n - 1], r[n - 1], lum[n - 1]));
-        return new ProfileDiagnosis(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings,
-                seismic(r, soundSpeed, n2, regions));
+        // the diagnosis shares the profile's columns and takes the computed ones: no copy of millions of zones
+        return ColumnSharing.adopt(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings)
+                .withSeismic(seismic(r, soundSpeed, n2, regions));
     }
 
     /** The asymptotic integrals of the whole model and the acoustic depths of each convective region's edges. */
@@ -368,10 +371,13 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         return a;
     }
 
-    /** The profile's column, or a column filled with {@code absent} (to be computed, or a default). */
+    /**
+     * The profile's own column (shared, never written), or a new column filled with {@code absent}
+     * (to be computed, or a default).
+     */
     private static double[] columnOr(Profile p, ProfileColumn c, double absent) {
         if (p.has(c)) {
-            return p.column(c);
+            return ColumnSharing.read(p, c);
         }
         double[] a = new double[p.size()];
         java.util.Arrays.fill(a, absent);
