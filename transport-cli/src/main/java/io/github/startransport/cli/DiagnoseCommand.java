@@ -44,7 +44,7 @@ import java.util.concurrent.Future;
                 + " thermal and Kelvin-Helmholtz timescales.",
             "",
             "Writes into DIR: zones.csv (one row per zone), summary.json, gradients.png, velocity-mixing.png,"
-                + " opacity.png, and prints a short summary. With several profiles each goes to DIR/<file name"
+                + " opacity.png, propagation.png, and prints a short summary. With several profiles each goes to DIR/<file name"
                 + " without extension>/, and they are diagnosed in parallel. Nothing is left half-written: the"
                 + " files appear in DIR only when everything succeeded.",
             ""},
@@ -53,7 +53,7 @@ import java.util.concurrent.Future;
             "Profile files: CSV, one header row of column names, then one zone per row (centre to surface or"
                 + " surface to centre), cgs units. Lines starting with # and blank lines are skipped.",
             "  required: r_cm, m_g, T_K, rho_g_cm3, P_dyn_cm2, L_erg_s, X, Z",
-            "  optional: kappa_cm2_g, cp_erg_g_K, delta, nabla_ad, nabla_mu, phi (computed when absent)",
+            "  optional: kappa_cm2_g, cp_erg_g_K, delta, nabla_ad, nabla_mu, phi, Gamma1 (computed when absent)",
             "  other columns are ignored (with a note on standard error).",
             "",
             "Exit codes: 0 success; 1 bad input (the message names file, line, column and what is wrong);"

@@ -36,7 +36,7 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * The three plots of a diagnosis, drawn with JFreeChart and written as PNG at 1200 x 800.
+ * The four plots of a diagnosis, drawn with JFreeChart and written as PNG at 1200 x 800.
  *
  * <p>On logarithmic axes a value that is zero or negative cannot be drawn; it leaves a gap in
  * its line, and the plot's subtitle says so.
@@ -53,6 +53,8 @@ final class DiagnosisCharts {
     static final String MIXING_PNG = "velocity-mixing.png";
     /** File name of the opacity plot. */
     static final String OPACITY_PNG = "opacity.png";
+    /** File name of the propagation diagram. */
+    static final String PROPAGATION_PNG = "propagation.png";
 
     private static final Map<Regime, Color> SHADE = new EnumMap<>(Map.of(
             Regime.CONVECTIVE, new Color(255, 170, 60, 70),
@@ -66,7 +68,7 @@ final class DiagnosisCharts {
     }
 
     /**
-     * Writes all three plots into a folder.
+     * Writes all four plots into a folder.
      *
      * @param diagnosis the diagnosis
      * @param dir       an existing folder
@@ -76,6 +78,7 @@ final class DiagnosisCharts {
         write(gradients(diagnosis), dir.resolve(GRADIENTS_PNG));
         write(velocityAndMixing(diagnosis), dir.resolve(MIXING_PNG));
         write(opacity(diagnosis), dir.resolve(OPACITY_PNG));
+        write(propagation(diagnosis), dir.resolve(PROPAGATION_PNG));
     }
 
     /**
@@ -169,6 +172,71 @@ final class DiagnosisCharts {
         style(plot, 0, 1);
         note(chart, hidden, "opacity values \u2264 0");
         return chart;
+    }
+
+    /**
+     * The propagation diagram: the buoyancy frequency N and the l = 1 Lamb frequency S_1 as cyclic
+     * frequencies (N / 2 pi, S_1 / 2 pi, in microhertz) against r/R on a logarithmic axis, the large
+     * separation Delta nu marked, non-radiative regions shaded. Zones with N^2 &lt;= 0 (convectively
+     * unstable) leave gaps in N.
+     *
+     * @param d a diagnosis
+     * @return the chart
+     */
+    static JFreeChart propagation(ProfileDiagnosis d) {
+        Values x = radiusFraction(d);
+        double[] n2 = d.column(DiagnosisColumn.BUOYANCY_SQUARED);
+        double[] s1 = d.column(DiagnosisColumn.LAMB_L1);
+        double[] n = new double[n2.length];
+        for (int k = 0; k < n2.length; k++) {
+            n[k] = n2[k] > 0 ? Math.sqrt(n2[k]) / (2 * Math.PI) * 1e6 : 0.0;
+            s1[k] = s1[k] / (2 * Math.PI) * 1e6;
+        }
+        XYSeriesCollection data = new XYSeriesCollection();
+        int hidden = add(data, "N / 2\u03c0 (buoyancy frequency)", d.size(), x, k -> n[k], true);
+        add(data, "S\u2081 / 2\u03c0 (Lamb frequency, l = 1)", d.size(), x, k -> s1[k], true);
+        ValueAxis y = logAxis("cyclic frequency (\u03bcHz)", data);
+        XYPlot plot = new XYPlot(data, fractionAxis(), y, new XYLineAndShapeRenderer(true, false));
+        JFreeChart chart = chart("Propagation diagram of " + d.source(), plot);
+        XYLineAndShapeRenderer lines = (XYLineAndShapeRenderer) plot.getRenderer();
+        lines.setSeriesPaint(0, new Color(200, 30, 30));
+        lines.setSeriesStroke(0, new BasicStroke(2.5f));
+        lines.setSeriesPaint(1, new Color(30, 110, 200));
+        lines.setSeriesStroke(1, new BasicStroke(2.5f));
+        shadeRegions(d, plot);
+        double deltaNu = d.seismic().map(sm -> sm.largeSeparation() * 1e6).orElse(Double.NaN);
+        if (Double.isFinite(deltaNu) && deltaNu > 0) {
+            org.jfree.chart.plot.ValueMarker marker = new org.jfree.chart.plot.ValueMarker(deltaNu);
+            marker.setPaint(new Color(120, 60, 160));
+            marker.setStroke(new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f,
+                    new float[] {8f, 5f}, 0f));
+            marker.setLabel(String.format(java.util.Locale.ROOT, "\u0394\u03bd = %.4g \u03bcHz", deltaNu));
+            marker.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 16));
+            marker.setLabelPaint(new Color(120, 60, 160));
+            marker.setLabelAnchor(org.jfree.chart.ui.RectangleAnchor.TOP_RIGHT);
+            marker.setLabelTextAnchor(org.jfree.chart.ui.TextAnchor.BOTTOM_RIGHT);
+            marker.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+            plot.addRangeMarker(marker);
+            includeInRange(y, data, deltaNu);
+        }
+        note(chart, hidden, "zones with N\u00b2 \u2264 0 (convectively unstable)");
+        return chart;
+    }
+
+    /** Widens a logarithmic axis so that {@code value} and every drawn point lie inside it. */
+    private static void includeInRange(ValueAxis axis, XYSeriesCollection data, double value) {
+        double lo = value;
+        double hi = value;
+        for (int s = 0; s < data.getSeriesCount(); s++) {
+            for (int i = 0; i < data.getItemCount(s); i++) {
+                double v = data.getYValue(s, i);
+                if (v > 0 && Double.isFinite(v)) {
+                    lo = Math.min(lo, v);
+                    hi = Math.max(hi, v);
+                }
+            }
+        }
+        axis.setRange(lo / 1.5, hi * 1.5);
     }
 
     /** One value per zone. */

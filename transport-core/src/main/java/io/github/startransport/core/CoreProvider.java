@@ -7,6 +7,8 @@ import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.model.DemoStar;
 import io.github.startransport.core.profile.LocalDiagnosis;
+import io.github.startransport.core.seismic.LocalBuoyancy;
+import io.github.startransport.core.thermo.IonisingGas;
 import io.github.startransport.core.opacity.AnalyticOpacity;
 import io.github.startransport.core.opacity.CsvTableTool;
 import io.github.startransport.core.opacity.TabulatedOpacity;
@@ -35,6 +37,7 @@ public final class CoreProvider implements TransportProvider {
     /** In each family the first entry is the default. */
     private static final List<Entry> ENTRIES = List.of(
             new Entry(GradientStability.INFO, GradientStability::fromOptions),
+            new Entry(IonisingGas.INFO, IonisingGas::fromOptions),
             new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions),
             new Entry(LocalMixingLength.INFO, LocalMixingLength::fromOptions),
             new Entry(TransparentEddyMixingLength.INFO, TransparentEddyMixingLength::fromOptions),
@@ -43,7 +46,8 @@ public final class CoreProvider implements TransportProvider {
             new Entry(CsvTableTool.INFO, CsvTableTool::fromOptions),
             new Entry(LocalDiagnosis.INFO, LocalDiagnosis::fromOptions),
             new Entry(GreyAtmosphereEnvelope.INFO, GreyAtmosphereEnvelope::fromOptions),
-            new Entry(DemoStar.INFO, DemoStar::fromOptions));
+            new Entry(DemoStar.INFO, DemoStar::fromOptions),
+            new Entry(LocalBuoyancy.INFO, LocalBuoyancy::fromOptions));
 
     /** Public no-argument constructor, as {@link java.util.ServiceLoader} requires. */
     public CoreProvider() {
@@ -56,8 +60,9 @@ public final class CoreProvider implements TransportProvider {
 
     @Override
     public String description() {
-        return "startransport's own physics: stability tests, ideal gas plus radiation, mixing-length convection, "
-                + "opacities (analytic and tabulated), profile diagnosis, envelope integration, demo star";
+        return "startransport's own physics: stability tests, partially ionised gas (Saha) and ideal gas plus radiation, "
+                + "mixing-length convection, opacities (analytic and tabulated), profile diagnosis, envelope integration, "
+                + "demo star, buoyancy and acoustic frequencies";
     }
 
     @Override

@@ -1,7 +1,10 @@
 package io.github.startransport.core.profile;
 
 import io.github.startransport.core.constants.Codata2018;
+import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.gradient.LedouxGradient;
+import io.github.startransport.core.seismic.AsymptoticIntegrals;
+import io.github.startransport.core.seismic.LocalFrequencies;
 import io.github.startransport.core.gradient.StabilityClassifier;
 import io.github.startransport.core.timescale.Timescale;
 import io.github.startransport.spi.ConvectionModel;
@@ -20,6 +23,7 @@ import io.github.startransport.spi.ProfileDiagnoser;
 import io.github.startransport.spi.ProfileDiagnosis;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Region;
+import io.github.startransport.spi.SeismicSummary;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.Timescales;
 import io.github.startransport.spi.ZoneState;
@@ -35,10 +39,16 @@ import java.util.OptionalDouble;
  * Zone-by-zone diagnosis of a whole profile with local models: per-zone gradients and
  * convection, regions with interpolated boundaries, and timescales.
  *
- * <p>Missing optional columns are filled: kappa from the setup's opacity model; nabla_ad, c_P and
- * delta from its thermodynamics model (a warning says so, and counts zones cooler than
- * {@value #PARTIAL_IONISATION_T} K where a fully ionised fallback is wrong); nabla_mu from the
- * composition ({@link CompositionGradient}); phi = 1 (ideal gas).
+ * <p>Missing optional columns are filled: kappa from the setup's opacity model; nabla_ad, c_P,
+ * delta, Gamma_1 and phi from its thermodynamics model, called with the profile's rho and T (a warning
+ * says so, and counts the zones where that model leaves its validity: degenerate electrons, pressure
+ * ionisation, a pressure more than 1 % from the profile's; with the fully ionised fallback, zones
+ * cooler than {@value #PARTIAL_IONISATION_T} K); nabla_mu from the composition
+ * ({@link CompositionGradient}). Dimensional quantities use the profile's own P: H_P,
+ * c_s = sqrt(Gamma_1 P / rho), N^2 = (g^2 rho / P) delta (nabla_L - nabla) with the actual nabla, and
+ * S_1 = sqrt(2) c_s / r ({@link LocalFrequencies}); the whole-model integrals (acoustic radius, large
+ * separation, l = 1 period spacing, acoustic depths of convective edges) follow from them
+ * ({@link AsymptoticIntegrals}).
  *
  * <p>Region boundaries lie where the quantity that separates the two regimes changes sign, found
  * by {@link BoundaryFinder} between the two zones: the chosen criterion's convective margin
@@ -102,7 +112,11 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] nablaAd = columnOr(p, ProfileColumn.NABLA_AD, 0.0);
         double[] cp = columnOr(p, ProfileColumn.CP, 0.0);
         double[] delta = columnOr(p, ProfileColumn.DELTA, 0.0);
-        double[] phi = columnOr(p, ProfileColumn.PHI, 1.0); // ideal gas
+        boolean hasPhi = p.has(ProfileColumn.PHI);
+        double[] phi = columnOr(p, ProfileColumn.PHI, 1.0); // ideal gas, unless the thermodynamics model says
+        boolean hasGamma1 = p.has(ProfileColumn.GAMMA1);
+        double[] gamma1 = columnOr(p, ProfileColumn.GAMMA1, 0.0);
+        boolean useThermo = !hasThermo || !hasGamma1 || !hasPhi;
         double[] nablaMu;
         if (p.has(ProfileColumn.NABLA_MU)) {
             nablaMu = ColumnSharing.read(p, ProfileColumn.NABLA_MU);
@@ -129,6 +143,10 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] v = computed(out, DiagnosisColumn.VELOCITY, n);
         double[] fconv = computed(out, DiagnosisColumn.CONVECTIVE_FRACTION, n);
         double[] dmix = computed(out, DiagnosisColumn.DIFFUSION, n);
+        double[] soundSpeed = computed(out, DiagnosisColumn.SOUND_SPEED, n);
+        double[] n2 = computed(out, DiagnosisColumn.BUOYANCY_SQUARED, n);
+        double[] lamb1 = computed(out, DiagnosisColumn.LAMB_L1, n);
+        ThermoChecks thermoChecks = new ThermoChecks();
         double[] ell = new double[n];
         double[] marginS = new double[n];
         double[] marginL = new double[n];
@@ -150,20 +168,29 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             zone.luminosity = lum[k];
             zone.hydrogen = x[k];
             zone.metals = z[k];
-            if (!hasThermo) {
+            if (useThermo) {
                 setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone.zone, thermo);
-                if (!p.has(ProfileColumn.NABLA_AD)) {
-                    nablaAd[k] = thermo.nablaAd;
+                if (!hasThermo) {
+                    if (!p.has(ProfileColumn.NABLA_AD)) {
+                        nablaAd[k] = thermo.nablaAd;
+                    }
+                    if (!p.has(ProfileColumn.CP)) {
+                        cp[k] = thermo.cp;
+                    }
+                    if (!p.has(ProfileColumn.DELTA)) {
+                        delta[k] = thermo.delta;
+                    }
+                    if (t[k] < PARTIAL_IONISATION_T) {
+                        cool++;
+                    }
                 }
-                if (!p.has(ProfileColumn.CP)) {
-                    cp[k] = thermo.cp;
+                if (!hasGamma1) {
+                    gamma1[k] = thermo.gamma1;
                 }
-                if (!p.has(ProfileColumn.DELTA)) {
-                    delta[k] = thermo.delta;
+                if (!hasPhi) {
+                    phi[k] = thermo.phi;
                 }
-                if (t[k] < PARTIAL_IONISATION_T) {
-                    cool++;
-                }
+                thermoChecks.add(thermo, pres[k]);
             }
             if (!hasKappa) {
                 setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone.zone, opacity);
@@ -187,15 +214,35 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             dmix[k] = conv.diffusion;
             ell[k] = conv.mixingLength;
             regimes[k] = conv.regime;
+            soundSpeed[k] = LocalFrequencies.soundSpeed(gamma1[k], pres[k], rho[k]);
+            n2[k] = LocalFrequencies.buoyancySquared(r[k], m[k], rho[k], pres[k], delta[k], nablaAd[k], phi[k],
+                    nablaMu[k], nabla[k]);
+            lamb1[k] = LocalFrequencies.lamb(1, soundSpeed[k], r[k]);
             marginS[k] = nablaRad[k] - nablaAd[k];
             marginL[k] = nablaRad[k] - nablaL[k];
             marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
         }
         if (!hasThermo) {
+            boolean fullyIonised = IdealGasRadiation.NAME.equals(setup.thermodynamics().toString());
             warnings.add("nabla_ad, c_P and delta were computed by " + setup.thermodynamics()
-                    + " (fully ionised ideal gas plus radiation): a fallback, not the model's own equation of state"
-                    + (cool > 0 ? "; " + cool + " zones are cooler than 1e5 K, where partial ionisation makes it wrong"
-                    : ""));
+                    + (fullyIonised ? " (fully ionised ideal gas plus radiation)" : "")
+                    + ": a fallback, not the model's own equation of state"
+                    + (fullyIonised && cool > 0 ? "; " + cool + " zones are cooler than 1e5 K, where partial ionisation"
+                    + " makes it wrong" : ""));
+        }
+        if (useThermo) {
+            List<String> missing = new ArrayList<>();
+            if (!hasGamma1) {
+                missing.add("Gamma_1");
+            }
+            if (!hasPhi) {
+                missing.add("phi");
+            }
+            if (hasThermo && !missing.isEmpty()) {
+                warnings.add(String.join(" and ", missing) + " computed by " + setup.thermodynamics()
+                        + " at the profile's rho and T");
+            }
+            thermoChecks.warnings(setup.thermodynamics().toString(), warnings);
         }
         if (!hasKappa) {
             warnings.add("kappa was computed by the opacity model " + setup.opacity());
@@ -216,6 +263,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         out.put(DiagnosisColumn.DELTA, delta);
         out.put(DiagnosisColumn.NABLA_AD, nablaAd);
         out.put(DiagnosisColumn.NABLA_MU, nablaMu);
+        out.put(DiagnosisColumn.GAMMA1, gamma1);
+        out.put(DiagnosisColumn.PHI, phi);
 
         // does the profile's own gradient agree with the physics? (see ModelConsistency)
         double[] nablaModel = computed(out, DiagnosisColumn.NABLA_MODEL, n);
@@ -230,8 +279,86 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
                 Timescale.kelvinHelmholtz(m[n - 1], r[n - 1], lum[n - 1]));
         // the diagnosis shares the profile's columns and takes the computed ones: no copy of millions of zones
-        return ColumnSharing.adopt(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings);
+        return ColumnSharing.adopt(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings)
+                .withSeismic(seismic(r, soundSpeed, n2, regions));
     }
+
+    /** The asymptotic integrals of the whole model and the acoustic depths of each convective region's edges. */
+    private static SeismicSummary seismic(double[] r, double[] soundSpeed, double[] n2, List<Region> regions) {
+        double tau = AsymptoticIntegrals.acousticRadius(r, soundSpeed);
+        List<SeismicSummary.RegionDepths> depths = new ArrayList<>();
+        for (Region region : regions) {
+            if (region.regime() == Regime.CONVECTIVE) {
+                depths.add(new SeismicSummary.RegionDepths(region,
+                        AsymptoticIntegrals.acousticDepth(r, soundSpeed, region.bottomRadius()),
+                        AsymptoticIntegrals.acousticDepth(r, soundSpeed, region.topRadius())));
+            }
+        }
+        return new SeismicSummary(tau, AsymptoticIntegrals.largeSeparation(tau),
+                AsymptoticIntegrals.periodSpacing(1, AsymptoticIntegrals.buoyancyIntegral(r, n2)), depths);
+    }
+
+    /**
+     * Where the thermodynamics model leaves its validity or disagrees with the profile: zones with
+     * degenerate electrons (the first Fermi-Dirac correction to the electron pressure,
+     * n_e lambda^3 / 2^(7/2), above {@value #DEGENERACY_LIMIT}; Landau &amp; Lifshitz, Statistical Physics
+     * §56), zones where pressure ionisation decides the state of more than {@value #PRESSURE_IONISATION_LIMIT}
+     * of hydrogen, and the largest difference between the model's pressure at the profile's rho and T and
+     * the profile's own P.
+     */
+    private static final class ThermoChecks {
+        int degenerate;
+        int pressureIonised;
+        int mismatched;
+        double worstMismatch;
+
+        void add(ThermoResult thermo, double profilePressure) {
+            if (thermo.degeneracy / FERMI_CORRECTION > DEGENERACY_LIMIT) {
+                degenerate++;
+            }
+            if (thermo.pressureIonisation > PRESSURE_IONISATION_LIMIT) {
+                pressureIonised++;
+            }
+            double mismatch = Math.abs(thermo.pressure / profilePressure - 1.0);
+            if (mismatch > PRESSURE_MISMATCH_LIMIT) {
+                mismatched++;
+            }
+            worstMismatch = Math.max(worstMismatch, mismatch);
+        }
+
+        void warnings(String model, List<String> warnings) {
+            if (degenerate > 0) {
+                warnings.add(degenerate + " zones have degenerate electrons (the first Fermi-Dirac correction to the"
+                        + " electron pressure exceeds " + percent(DEGENERACY_LIMIT) + "), which " + model
+                        + " treats as an ideal gas");
+            }
+            if (pressureIonised > 0) {
+                warnings.add(pressureIonised + " zones are pressure-ionised (the state of more than "
+                        + percent(PRESSURE_IONISATION_LIMIT) + " of hydrogen is set by " + model
+                        + "'s approximate pressure ionisation, not by the Saha equation)");
+            }
+            if (mismatched > 0) {
+                warnings.add(model + " at the profile's rho and T gives a pressure up to "
+                        + String.format(java.util.Locale.ROOT, "%.3g", 100.0 * worstMismatch)
+                        + " % away from the profile's P (" + mismatched + " zones beyond "
+                        + percent(PRESSURE_MISMATCH_LIMIT) + "); its response functions are taken at (rho, T),"
+                        + " and H_P, c_s and N^2 use the profile's P");
+            }
+        }
+
+        private static String percent(double f) {
+            return String.format(java.util.Locale.ROOT, "%.3g %%", 100.0 * f);
+        }
+    }
+
+    /** 2^(5/2): the first Fermi-Dirac correction to P_e is n_e lambda^3 / 2 over this. */
+    private static final double FERMI_CORRECTION = Math.pow(2.0, 2.5);
+    /** Count zones whose first Fermi-Dirac correction to the electron pressure exceeds this. */
+    public static final double DEGENERACY_LIMIT = 0.01;
+    /** Count zones where pressure ionisation decides the state of more than this share of hydrogen. */
+    public static final double PRESSURE_IONISATION_LIMIT = 0.01;
+    /** Count zones where the thermodynamics model's P differs from the profile's by more than this. */
+    public static final double PRESSURE_MISMATCH_LIMIT = 0.01;
 
     private static int zoneAsGiven(Profile p, int k) {
         return p.wasReversed() ? p.size() - 1 - k : k;
