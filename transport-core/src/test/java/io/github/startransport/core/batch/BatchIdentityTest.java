@@ -27,6 +27,7 @@ import io.github.startransport.spi.StabilityResult;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
+import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
 import org.junit.jupiter.api.Test;
 
@@ -240,6 +241,46 @@ class BatchIdentityTest {
         // a range that avoids the bad zone goes through
         new LocalMixingLength().solveColumns(in, 38, n, conv, true);
         assertTrue(conv.velocity[n - 1] >= 0.0);
+    }
+
+    @Test
+    void zonesBeforeARefusedZoneKeepTheirWholeResult() {
+        // the batch kernels work on chunks of zones: a refusal in the middle of one must leave every earlier
+        // zone of the range written, values and Jacobian, as the per-zone calls give them
+        ZoneColumns in = demoColumns(200, 17);
+        int n = in.capacity;
+        int from = 3;
+        int bad = 58;
+        in.temperature[bad] = Double.NaN;
+        ZoneState z = new ZoneState();
+        ConvectionResult r = new ConvectionResult();
+        for (ConvectionModel model : convectionModels()) {
+            for (int layout = 0; layout < 3; layout++) {
+                ConvectionColumns out = new ConvectionColumns(n);
+                double[] block = new double[n * ZoneMajorJacobian.PER_ZONE];
+                int mode = layout;
+                InvalidInputException e = assertThrows(InvalidInputException.class, () -> {
+                    if (mode == 2) {
+                        model.solveZoneMajor(in, from, n, out, block);
+                    } else {
+                        model.solveColumns(in, from, n, out, mode == 0);
+                    }
+                });
+                assertEquals(bad, e.zone(), e.getMessage());
+                assertEquals("temperature", e.field());
+                for (int k = from; k < bad; k++) {
+                    model.solve(in.load(k, z), r);
+                    assertSameConvection(r, out, k, mode == 0);
+                    if (mode == 2) {
+                        for (int i = 0; i < ZoneInput.COUNT; i++) {
+                            same(r.dNabla[i], block[ZoneMajorJacobian.index(k, ZoneMajorJacobian.NABLA, i)], "block", k);
+                            same(r.dDiffusion[i], block[ZoneMajorJacobian.index(k, ZoneMajorJacobian.DIFFUSION, i)],
+                                    "block", k);
+                        }
+                    }
+                }
+            }
+        }
     }
 
     @Test
