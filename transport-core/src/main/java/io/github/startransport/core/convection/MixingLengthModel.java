@@ -7,6 +7,8 @@ import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneState;
 
+import java.nio.DoubleBuffer;
+
 /**
  * What the mixing-length models share: their options and the calls into {@link MixingLengthZone}.
  * The variants differ only in the transparency factor y of the eddies' radiative losses (0 for
@@ -78,6 +80,12 @@ public abstract sealed class MixingLengthModel implements ConvectionModel
      */
     @Override
     public void solveZoneMajor(ZoneColumns in, int from, int to, ConvectionColumns out, double[] jacobian) {
+        MixingLengthZone.solveZoneMajor(settings, eddyShape, in, from, to, out, jacobian);
+    }
+
+    /** The batch kernel of {@link #solveZoneMajor} with the Jacobian stored through the buffer's absolute puts. */
+    @Override
+    public void solveZoneMajorInto(ZoneColumns in, int from, int to, ConvectionColumns out, DoubleBuffer jacobian) {
         MixingLengthZone.solveZoneMajor(settings, eddyShape, in, from, to, out, jacobian);
     }
 

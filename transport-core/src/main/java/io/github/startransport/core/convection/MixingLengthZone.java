@@ -16,6 +16,8 @@ import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
 
+import java.lang.ref.Reference;
+import java.nio.DoubleBuffer;
 import java.util.Arrays;
 
 /**
@@ -178,7 +180,7 @@ public final class MixingLengthZone {
     static void solveColumns(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
                              ConvectionColumns out, boolean jacobian) {
         in.checkRange(from, to, out.capacity);
-        solveBatch(settings, eddyShape, in, from, to, out, jacobian, null);
+        solveBatch(settings, eddyShape, in, from, to, out, jacobian, null, null, 0L, 0);
     }
 
     /**
@@ -196,7 +198,36 @@ public final class MixingLengthZone {
                                ConvectionColumns out, double[] block) {
         in.checkRange(from, to, out.capacity);
         ZoneMajorJacobian.checkCapacity(block, to);
-        solveBatch(settings, eddyShape, in, from, to, out, block != null, block);
+        solveBatch(settings, eddyShape, in, from, to, out, block != null, block, null, 0L, 0);
+    }
+
+    /**
+     * The batch call of both convection models with the Jacobian zone-major in a buffer (for example
+     * over a native host's memory), zone k's block from index {@code position() + k * PER_ZONE}: the same
+     * stores as into a block, checked against the buffer's limit once before the first, and made
+     * straight into the buffer's memory where {@link DirectStores} allows it (through its puts
+     * otherwise).
+     *
+     * @param settings  the model's options
+     * @param eddyShape y of the transparency correction, or 0 for none
+     * @param in        input columns
+     * @param from      first zone (inclusive)
+     * @param to        last zone (exclusive)
+     * @param out       output columns (values)
+     * @param jacobian  the zone-major Jacobian ({@link ZoneMajorJacobian}), writable, limit at least
+     *                  {@code position() + to * PER_ZONE}
+     */
+    static void solveZoneMajor(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
+                               ConvectionColumns out, DoubleBuffer jacobian) {
+        in.checkRange(from, to, out.capacity);
+        ZoneMajorJacobian.checkCapacity(jacobian, to);
+        try {
+            solveBatch(settings, eddyShape, in, from, to, out, true, null, jacobian, DirectStores.address(jacobian),
+                    jacobian.position());
+        } finally {
+            // the buffer (and so its memory) stays reachable until the last store through its address
+            Reference.reachabilityFence(jacobian);
+        }
     }
 
     /**
@@ -211,7 +242,8 @@ public final class MixingLengthZone {
      * written.
      */
     private static void solveBatch(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
-                                   ConvectionColumns out, boolean jacobian, double[] block) {
+                                   ConvectionColumns out, boolean jacobian, double[] block, DoubleBuffer buffer,
+                                   long address, int origin) {
         final double alpha = settings.alpha();
         final MixingLengthGeometry geometry = settings.geometry();
         final CentreLimit limit = settings.centreLimit();
@@ -220,7 +252,7 @@ public final class MixingLengthZone {
         final double[] starts = geometry.cubicStarts();
         final double[] work = out.work;
         // zone j of a chunk: scratch at j * SCRATCH, its staged Jacobian (column layout) at STAGE + j * PER_ZONE
-        final boolean staged = jacobian && block == null;
+        final boolean staged = jacobian && block == null && buffer == null;
         final double[] jac = staged ? work : block;
         final double[] t = in.temperature;
         final double[] rho = in.density;
@@ -256,10 +288,12 @@ public final class MixingLengthZone {
                 final int c = o + 2 * ZoneInput.COUNT;
                 final int code = (int) work[c + CODE];
                 // zone-major: output o of zone k at base + o * COUNT, in the block or in the chunk's staging
-                final int base = staged ? STAGE + (k - c0) * ZoneMajorJacobian.PER_ZONE : k * ZoneMajorJacobian.PER_ZONE;
+                final int base = staged ? STAGE + (k - c0) * ZoneMajorJacobian.PER_ZONE
+                        : origin + k * ZoneMajorJacobian.PER_ZONE;
                 try {
                     if (code >= CUBIC) {
-                        final double probe = back(code, work[c + GAMMA], jacobian, work, o, null, out, k, jac, base);
+                        final double probe = back(code, work[c + GAMMA], jacobian, work, o, null, out, k, jac, buffer,
+                                address, base);
                         if (probe != 0.0) {
                             ZoneChecks.finiteOutputs("nabla", out.nabla[k], probe, in.load(k, out.workZone));
                         }
@@ -268,7 +302,12 @@ public final class MixingLengthZone {
                         finish(code, in.load(k, out.workZone), settings.semiconvection(), settings.thermohaline(),
                                 work, o, res);
                         out.store(k, res, false);
-                        if (jacobian) {
+                        if (buffer != null) {
+                            buffer.put(base, res.dNabla);
+                            buffer.put(base + ZoneInput.COUNT, res.dVelocity);
+                            buffer.put(base + 2 * ZoneInput.COUNT, res.dConvectiveFraction);
+                            buffer.put(base + 3 * ZoneInput.COUNT, res.dDiffusion);
+                        } else if (jacobian) {
                             stage(res, jac, base);
                         }
                     }
@@ -400,7 +439,7 @@ public final class MixingLengthZone {
         if (code >= CUBIC) {
             final double[] b = out.dConvectiveFraction;
             final double gamma = efficiency(code, b[A0], b[RHS], b[BETA], eddyShape > 0.0, geometry.cubicStarts());
-            final double probe = back(code, gamma, jacobian, null, 0, out, null, 0, null, 0);
+            final double probe = back(code, gamma, jacobian, null, 0, out, null, 0, null, null, 0L, 0);
             ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
         } else {
             finish(code, z, semiconvection, thermohaline, null, 0, out);
@@ -658,7 +697,8 @@ public final class MixingLengthZone {
      * @return 0, or NaN when a value or a derivative is not finite (the caller refuses the zone)
      */
     private static double back(int code, double gamma, boolean jacobian, double[] scratch, int o,
-                               ConvectionResult out, ConvectionColumns columns, int k, double[] jac, int base) {
+                               ConvectionResult out, ConvectionColumns columns, int k, double[] jac,
+                               DoubleBuffer buffer, long address, int base) {
         // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
         final double[] a = scratch != null ? scratch : out.dVelocity;
         final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
@@ -833,7 +873,7 @@ public final class MixingLengthZone {
             final double velAlpha = velocity * lnV;
             final double fracAlpha = cMu * mu + cNu * nu;
             final double diffAlpha = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
+            put(out, jac, buffer, address, base, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
             sum = (nablaAlpha + velAlpha) + (fracAlpha + diffAlpha);
         }
         // T: nabla_rad ~ T^-4, U ~ T^3
@@ -845,7 +885,7 @@ public final class MixingLengthZone {
             final double velT = velocity * lnV;
             final double fracT = cR * dR + cMu * mu;
             final double diffT = diffusion * lnV;
-            put(out, jac, base, ZoneInput.T, nablaT, velT, fracT, diffT);
+            put(out, jac, buffer, address, base, ZoneInput.T, nablaT, velT, fracT, diffT);
             sum += (nablaT + velT) + (fracT + diffT);
         }
         // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
@@ -859,7 +899,7 @@ public final class MixingLengthZone {
             final double velRho = velocity * lnV;
             final double fracRho = cMu * mu + cNu * nu;
             final double diffRho = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
+            put(out, jac, buffer, address, base, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
             sum += (nablaRho + velRho) + (fracRho + diffRho);
         }
         // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
@@ -874,7 +914,7 @@ public final class MixingLengthZone {
             final double velP = velocity * lnV;
             final double fracP = cR * dR + cMu * mu + cNu * nu;
             final double diffP = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.P, nablaP, velP, fracP, diffP);
+            put(out, jac, buffer, address, base, ZoneInput.P, nablaP, velP, fracP, diffP);
             sum += (nablaP + velP) + (fracP + diffP);
         }
         // L: nabla_rad only
@@ -885,7 +925,7 @@ public final class MixingLengthZone {
             final double velL = velocity * lnV;
             final double fracL = cR * dR;
             final double diffL = diffusion * lnV;
-            put(out, jac, base, ZoneInput.L, nablaL, velL, fracL, diffL);
+            put(out, jac, buffer, address, base, ZoneInput.L, nablaL, velL, fracL, diffL);
             sum += (nablaL + velL) + (fracL + diffL);
         }
         // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
@@ -900,7 +940,7 @@ public final class MixingLengthZone {
             final double velM = velocity * lnV;
             final double fracM = cR * dR + cMu * mu + cNu * nu;
             final double diffM = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.M, nablaM, velM, fracM, diffM);
+            put(out, jac, buffer, address, base, ZoneInput.M, nablaM, velM, fracM, diffM);
             sum += (nablaM + velM) + (fracM + diffM);
         }
         // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
@@ -914,7 +954,7 @@ public final class MixingLengthZone {
             final double velRadius = velocity * lnV;
             final double fracRadius = cMu * mu + cNu * nu;
             final double diffRadius = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
+            put(out, jac, buffer, address, base, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
             sum += (nablaRadius + velRadius) + (fracRadius + diffRadius);
         }
         // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
@@ -927,7 +967,7 @@ public final class MixingLengthZone {
             final double velKappa = velocity * lnV;
             final double fracKappa = cR * dR + cMu * mu + cNu * nu;
             final double diffKappa = diffusion * lnV;
-            put(out, jac, base, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
+            put(out, jac, buffer, address, base, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
             sum += (nablaKappa + velKappa) + (fracKappa + diffKappa);
         }
         // c_P: U ~ 1/c_P
@@ -938,7 +978,7 @@ public final class MixingLengthZone {
             final double velCp = velocity * lnV;
             final double fracCp = cMu * mu;
             final double diffCp = diffusion * lnV;
-            put(out, jac, base, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
+            put(out, jac, buffer, address, base, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
             sum += (nablaCp + velCp) + (fracCp + diffCp);
         }
         // nabla_ad: dA = 1
@@ -948,7 +988,7 @@ public final class MixingLengthZone {
             final double velNablaAd = velocity * lnV;
             final double fracNablaAd = cA;
             final double diffNablaAd = diffusion * lnV;
-            put(out, jac, base, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
+            put(out, jac, buffer, address, base, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
             sum += (nablaNablaAd + velNablaAd) + (fracNablaAd + diffNablaAd);
         }
         // delta: U ~ delta^-1/2, sigma = +1/2
@@ -959,24 +999,19 @@ public final class MixingLengthZone {
             final double velDelta = velocity * lnV;
             final double fracDelta = cMu * mu;
             final double diffDelta = diffusion * lnV;
-            put(out, jac, base, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
+            put(out, jac, buffer, address, base, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
             sum += (nablaDelta + velDelta) + (fracDelta + diffDelta);
         }
         // nabla_mu and phi enter only through the composition term, added below
-        put(out, jac, base, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
-        put(out, jac, base, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
-        // the Jacobian's four rows: in the zone-major block from base, or the result's arrays
-        final double[] dn = jac != null ? jac : out.dNabla;
-        final double[] dv = jac != null ? jac : out.dVelocity;
-        final double[] df = jac != null ? jac : out.dConvectiveFraction;
-        final double[] dd = jac != null ? jac : out.dDiffusion;
-        final int dno = jac != null ? base : 0;
-        final int dvo = jac != null ? base + ZoneInput.COUNT : 0;
-        final int dfo = jac != null ? base + 2 * ZoneInput.COUNT : 0;
-        final int ddo = jac != null ? base + 3 * ZoneInput.COUNT : 0;
+        put(out, jac, buffer, address, base, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
+        put(out, jac, buffer, address, base, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
         double probe = values;
         if (!(Math.abs(sum) <= Double.MAX_VALUE)) {
-            probe += exactProbe(dn, dno) + exactProbe(dv, dvo) + exactProbe(df, dfo) + exactProbe(dd, ddo);
+            for (int output = 0; output < ZoneMajorJacobian.OUTPUTS; output++) {
+                for (int i = 0; i < ZoneInput.COUNT; i++) {
+                    probe += entry(out, jac, buffer, base, output, i) * 0.0;
+                }
+            }
         }
         if (driven) {
             // the composition term, after the entries it adds to (d/d delta)
@@ -984,25 +1019,38 @@ public final class MixingLengthZone {
             final double bMu = -(phi * invDelta);
             final double bPhi = -nablaMu * invDelta;
             final double bDelta = -buoyancy * invDelta;
-            probe += composition(dn, dno, -w * shareSlopeB, bMu, bPhi, bDelta)
-                    + composition(dv, dvo, velocity * vB, bMu, bPhi, bDelta)
-                    + composition(df, dfo, w * shareSlopeB * invNablaRad, bMu, bPhi, bDelta)
-                    + composition(dd, ddo, diffusion * vB, bMu, bPhi, bDelta);
+            probe += composition(out, jac, buffer, base, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
+                    + composition(out, jac, buffer, base, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
+                    + composition(out, jac, buffer, base, ZoneMajorJacobian.CONVECTIVE_FRACTION,
+                            w * shareSlopeB * invNablaRad, bMu, bPhi, bDelta)
+                    + composition(out, jac, buffer, base, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
+                            bDelta);
         }
         return probe;
     }
 
     /**
      * Stores the four entries of one input i: into the zone-major block from base (the highest offset
-     * first), or into the result's arrays when the block is null.
+     * first), into a buffer (straight into its memory when {@code address} is not 0, see
+     * {@link DirectStores}), or into the result's arrays when neither is given.
      */
-    private static void put(ConvectionResult out, double[] jac, int base, int i, double nabla, double velocity,
-                            double fraction, double diffusion) {
+    private static void put(ConvectionResult out, double[] jac, DoubleBuffer buffer, long address, int base, int i,
+                            double nabla, double velocity, double fraction, double diffusion) {
         if (jac != null) {
             jac[base + 3 * ZoneInput.COUNT + i] = diffusion;
             jac[base + 2 * ZoneInput.COUNT + i] = fraction;
             jac[base + ZoneInput.COUNT + i] = velocity;
             jac[base + i] = nabla;
+        } else if (address != 0L) {
+            DirectStores.put(address, base + 3 * ZoneInput.COUNT + i, diffusion);
+            DirectStores.put(address, base + 2 * ZoneInput.COUNT + i, fraction);
+            DirectStores.put(address, base + ZoneInput.COUNT + i, velocity);
+            DirectStores.put(address, base + i, nabla);
+        } else if (buffer != null) {
+            buffer.put(base + 3 * ZoneInput.COUNT + i, diffusion);
+            buffer.put(base + 2 * ZoneInput.COUNT + i, fraction);
+            buffer.put(base + ZoneInput.COUNT + i, velocity);
+            buffer.put(base + i, nabla);
         } else {
             out.dDiffusion[i] = diffusion;
             out.dConvectiveFraction[i] = fraction;
@@ -1011,13 +1059,28 @@ public final class MixingLengthZone {
         }
     }
 
-    /** Sum of (entry * 0) over one output's 13 entries: NaN exactly when one is not finite. */
-    private static double exactProbe(double[] d, int o) {
-        double sum = 0.0;
-        for (int i = 0; i < ZoneInput.COUNT; i++) {
-            sum += d[o + i] * 0.0;
+    /** Entry (o, i) of a Jacobian written by {@link #put}. */
+    private static double entry(ConvectionResult out, double[] jac, DoubleBuffer buffer, int base, int o, int i) {
+        final int at = base + o * ZoneInput.COUNT + i;
+        return jac != null ? jac[at] : buffer != null ? buffer.get(at) : row(out, o)[i];
+    }
+
+    /** Sets entry (o, i) of a Jacobian written by {@link #put}. */
+    private static void setEntry(ConvectionResult out, double[] jac, DoubleBuffer buffer, int base, int o, int i,
+                                 double value) {
+        final int at = base + o * ZoneInput.COUNT + i;
+        if (jac != null) {
+            jac[at] = value;
+        } else if (buffer != null) {
+            buffer.put(at, value);
+        } else {
+            row(out, o)[i] = value;
         }
-        return sum;
+    }
+
+    private static double[] row(ConvectionResult out, int o) {
+        return o == ZoneMajorJacobian.NABLA ? out.dNabla : o == ZoneMajorJacobian.VELOCITY ? out.dVelocity
+                : o == ZoneMajorJacobian.CONVECTIVE_FRACTION ? out.dConvectiveFraction : out.dDiffusion;
     }
 
     /**
@@ -1025,14 +1088,16 @@ public final class MixingLengthZone {
      *
      * @return the sum of (entry * 0) over the three: NaN exactly when one is not finite
      */
-    private static double composition(double[] d, int o, double perB, double bMu, double bPhi, double bDelta) {
-        d[o + ZoneInput.NABLA_MU] = perB * bMu;
-        d[o + ZoneInput.PHI] = perB * bPhi;
-        d[o + ZoneInput.DELTA] += perB * bDelta;
-        return (d[o + ZoneInput.NABLA_MU] * 0.0 + d[o + ZoneInput.PHI] * 0.0) + d[o + ZoneInput.DELTA] * 0.0;
+    private static double composition(ConvectionResult out, double[] jac, DoubleBuffer buffer, int base, int o,
+                                      double perB, double bMu, double bPhi, double bDelta) {
+        final double mu = perB * bMu;
+        final double phi = perB * bPhi;
+        final double delta = entry(out, jac, buffer, base, o, ZoneInput.DELTA) + perB * bDelta;
+        setEntry(out, jac, buffer, base, o, ZoneInput.NABLA_MU, mu);
+        setEntry(out, jac, buffer, base, o, ZoneInput.PHI, phi);
+        setEntry(out, jac, buffer, base, o, ZoneInput.DELTA, delta);
+        return (mu * 0.0 + phi * 0.0) + delta * 0.0;
     }
-
-
 
     /**
      * The refusal of a convective zone whose loss parameter is beyond what double precision can
