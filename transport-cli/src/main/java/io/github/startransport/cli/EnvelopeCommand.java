@@ -8,6 +8,7 @@ import io.github.startransport.spi.EnvelopeIntegrator;
 import io.github.startransport.spi.EnvelopeSetup;
 import io.github.startransport.spi.EnvelopeSolution;
 import io.github.startransport.spi.EnvelopeStar;
+import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.OpacityModel;
@@ -44,8 +45,9 @@ import java.util.concurrent.Callable;
                 + " summary.json and envelope.png (nabla, nabla_ad, nabla_rad against log P). Nothing is left"
                 + " half-written: the files appear in DIR only when everything succeeded.",
             ""},
-        footer = {"", "Exit codes: 0 success; 1 bad input (the message says which value and why); 2 usage error;"
-                + " 3 out of memory."})
+        footer = {"", "Exit codes: 0 success; 1 bad input (an opacity table that cannot be read or holds bad data,"
+                + " an output folder that cannot be written); 2 usage error (unknown option or model name, a bad"
+                + " option value: the message says which and why); 3 out of memory."})
 final class EnvelopeCommand implements Callable<Integer> {
     /** The envelope's data file. */
     static final String CSV = "envelope.csv";
@@ -142,10 +144,16 @@ final class EnvelopeCommand implements Callable<Integer> {
                     + (Files.exists(opacityTable) ? " (permission denied)" : " (no such file)"));
         }
         if (calibrateBase != null && !(calibrateBase > 0.0 && calibrateBase < 1.0)) {
-            throw new BadInputException("--calibrate-base " + calibrateBase + ": the base of the convection zone is a"
-                    + " fraction r/R of the radius, strictly between 0 and 1");
+            throw new ParameterException(spec.commandLine(), "--calibrate-base " + Text.number(calibrateBase) + ": the"
+                    + " base of the convection zone is a fraction r/R of the radius, strictly between 0 and 1");
         }
-        EnvelopeStar star = EnvelopeStar.inSolarUnits(mass, radius, luminosity, hydrogen, metals);
+        EnvelopeStar star;
+        try {
+            star = EnvelopeStar.inSolarUnits(mass, radius, luminosity, hydrogen, metals);
+        } catch (InvalidInputException e) {
+            throw new ParameterException(spec.commandLine(), "the star given by --mass-msun, --radius-rsun,"
+                    + " --luminosity-lsun, --hydrogen and --metals is refused: " + e.getMessage());
+        }
         Transport transport = cli.transport();
         String convectionName = convection != null ? convection
                 : Catalog.defaultModel(transport, ModelFamily.CONVECTION);
@@ -153,7 +161,9 @@ final class EnvelopeCommand implements Callable<Integer> {
         if (alpha != null) {
             convectionOptions = convectionOptions.with(ModelNames.CONVECTION_ALPHA, Double.toString(alpha));
         }
-        ConvectionModel convectionModel = transport.convection(convectionName, convectionOptions);
+        ModelOptions finalConvectionOptions = convectionOptions;
+        ConvectionModel convectionModel = DiagnosisOptions.asOption("--convection", convectionName,
+                () -> transport.convection(convectionName, finalConvectionOptions));
         OpacityModel opacityModel;
         String opacityName;
         if (opacityTable != null) {
@@ -162,11 +172,13 @@ final class EnvelopeCommand implements Callable<Integer> {
                     .with(ModelNames.OPACITY_TABLE_FILE, opacityTable.toAbsolutePath().toString()));
         } else {
             opacityName = opacity != null ? opacity : Catalog.defaultModel(transport, ModelFamily.OPACITY);
-            opacityModel = transport.opacity(opacityName, ModelOptions.defaults());
+            opacityModel = DiagnosisOptions.asOption("--opacity", opacityName,
+                    () -> transport.opacity(opacityName, ModelOptions.defaults()));
         }
         String thermoName = thermodynamics != null ? thermodynamics
                 : Catalog.defaultModel(transport, ModelFamily.THERMODYNAMICS);
-        ThermodynamicsModel thermo = transport.thermodynamics(thermoName, ModelOptions.defaults());
+        ThermodynamicsModel thermo = DiagnosisOptions.asOption("--thermodynamics", thermoName,
+                () -> transport.thermodynamics(thermoName, ModelOptions.defaults()));
         EnvelopeIntegrator integrator = transport.envelope(null, ModelOptions.defaults());
         EnvelopeSetup setup = new EnvelopeSetup(convectionModel, opacityModel, thermo);
         Used used = new Used(Catalog.bare(convectionName), Catalog.bare(opacityName),

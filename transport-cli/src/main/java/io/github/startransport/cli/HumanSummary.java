@@ -58,14 +58,20 @@ final class HumanSummary {
             }
         }
         Timescales t = d.timescales();
-        b.append(String.format(Locale.ROOT, "  timescales: photon diffusion %.3g yr, thermal diffusion %.3g yr,"
-                        + " Kelvin-Helmholtz %.3g yr\n", t.photonDiffusion() / SummaryJson.JULIAN_YEAR_S,
-                t.thermalDiffusion() / SummaryJson.JULIAN_YEAR_S, t.kelvinHelmholtz() / SummaryJson.JULIAN_YEAR_S));
+        b.append("  timescales: photon diffusion ").append(years(t.photonDiffusion())).append(", thermal diffusion ")
+                .append(years(t.thermalDiffusion())).append(", Kelvin-Helmholtz ").append(years(t.kelvinHelmholtz()))
+                .append('\n');
         for (String w : d.warnings()) {
             b.append("  warning: ").append(w).append('\n');
         }
         b.append("  written to ").append(where).append('\n');
         return b.toString();
+    }
+
+    /** A time in years, or "n/a" where it is undefined (as null in summary.json): never negative or infinite. */
+    static String years(double seconds) {
+        return seconds > 0 && Double.isFinite(seconds)
+                ? String.format(Locale.ROOT, "%.3g yr", seconds / SummaryJson.JULIAN_YEAR_S) : "n/a";
     }
 
     private static String days(OptionalDouble seconds) {

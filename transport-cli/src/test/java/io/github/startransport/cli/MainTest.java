@@ -93,12 +93,18 @@ class MainTest {
     }
 
     @Test
-    void unknownColumnInColumnsOptionExitsOneNamingIt(@TempDir Path dir) throws IOException {
+    void unknownColumnInColumnsOptionIsAUsageErrorNamingIt(@TempDir Path dir) throws IOException {
         Path p = ProfileFiles.valid(dir, "p.csv");
         Runs ours = Runs.run("diagnose", p.toString(), "--columns", "Temp=temprature", "--out",
                 dir.resolve("out").toString());
-        assertRefusedWithNothingWritten(ours, dir, p);
-        assertTrue(ours.err().contains("temprature"), ours.err());
+        assertEquals(2, ours.code(), ours.toString());
+        assertTrue(ours.err().contains("'temprature'"), ours.err());
+        assertEquals(List.of(), leftovers(dir, p));
+    }
+
+    @Test
+    void aColumnsMapNamingAColumnTheFileLacksIsBadInput(@TempDir Path dir) throws IOException {
+        Path p = ProfileFiles.valid(dir, "p.csv");
         Runs theirs = Runs.run("diagnose", p.toString(), "--columns", "Temp=temperature", "--out",
                 dir.resolve("out").toString());
         assertRefusedWithNothingWritten(theirs, dir, p);
@@ -170,12 +176,15 @@ class MainTest {
     }
 
     @Test
-    void unknownModelNameExitsOneNamingItAndWritesNothing(@TempDir Path dir) throws IOException {
+    void unknownModelNameIsAUsageErrorNamingItAndWritesNothing(@TempDir Path dir) throws IOException {
         Path p = ProfileFiles.valid(dir, "p.csv");
-        Runs r = Runs.run("diagnose", p.toString(), "--convection", "no-such-model", "--out",
-                dir.resolve("out").toString());
-        assertRefusedWithNothingWritten(r, dir, p);
-        assertTrue(r.err().contains("no-such-model"), r.err());
+        for (String option : List.of("--convection", "--opacity")) {
+            Runs r = Runs.run("diagnose", p.toString(), option, "no-such-model", "--out",
+                    dir.resolve("out").toString());
+            assertEquals(2, r.code(), r.toString());
+            assertTrue(r.err().contains(option + " no-such-model"), r.err());
+            assertEquals(List.of(), leftovers(dir, p));
+        }
     }
 
     @Test

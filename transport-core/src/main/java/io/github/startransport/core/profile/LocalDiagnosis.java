@@ -108,10 +108,14 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             nablaMu = ColumnSharing.read(p, ProfileColumn.NABLA_MU);
         } else {
             for (int k = 1; k < n; k++) {
-                if (!(pres[k] < pres[k - 1])) {
+                // nabla_mu = d ln mu / d ln P needs P to fall where mu changes; it may stay equal where X and Z do
+                boolean sameComposition = x[k] == x[k - 1] && z[k] == z[k - 1];
+                if (!(pres[k] < pres[k - 1] || pres[k] == pres[k - 1] && sameComposition)) {
                     throw new InvalidInputException(ProfileColumn.PRESSURE.header(), pres[k], ProfileColumn.PRESSURE.unit(),
-                            zoneAsGiven(p, k), "decreasing outwards to compute nabla_mu from the composition (zone before it: "
-                            + pres[k - 1] + "); give a nabla_mu column instead (" + p.source() + ")");
+                            zoneAsGiven(p, k), (sameComposition ? "equal to or below the pressure of the zone inside it"
+                            : "below the pressure of the zone inside it, which has another X or Z,")
+                            + " to compute nabla_mu from the composition (zone before it: " + pres[k - 1]
+                            + "); give a nabla_mu column instead (" + p.source() + ")");
                 }
             }
             nablaMu = new double[n];
@@ -225,6 +229,10 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         warnings.addAll(ModelConsistency.warnings(mismatch, regimes, k -> zoneAsGiven(p, k)));
 
         List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, marginC, nablaMu);
+        if (!(lum[n - 1] > 0.0)) {
+            warnings.add("the surface luminosity is L = " + lum[n - 1] + " erg/s, not > 0: the Kelvin-Helmholtz time"
+                    + " G M^2 / (R L) is undefined there and is not reported");
+        }
         Timescales times = new Timescales(
                 Timescale.photonDiffusion(r, kappa, rho),
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
