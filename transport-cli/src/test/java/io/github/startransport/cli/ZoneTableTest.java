@@ -17,10 +17,10 @@ import java.util.List;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 class ZoneTableTest {
-    /** The column list of issue 6, verbatim. */
+    /** The column list of issue 6, verbatim, then issue 15's overshoot column. */
     private static final String ISSUE_HEADER = "r_cm,m_g,T_K,rho_g_cm3,P_dyn_cm2,L_erg_s,X,Z,kappa_cm2_g,cp_erg_g_K,delta,"
             + "nabla_ad,nabla_mu,g_cm_s2,H_P_cm,nabla_rad,nabla_ledoux,regime,nabla,nabla_e,"
-            + "v_conv_cm_s,flux_conv_frac,D_mix_cm2_s";
+            + "v_conv_cm_s,flux_conv_frac,D_mix_cm2_s,D_overshoot_cm2_s";
 
     @Test
     void headerIsExactlyTheIssuesAndEveryCellReadsBackToTheSameDouble(@TempDir Path dir) throws Exception {

@@ -48,8 +48,10 @@ public enum DiagnosisColumn {
     VELOCITY("v_conv_cm_s", "cm s^-1"),
     /** F_conv / F. */
     CONVECTIVE_FRACTION("flux_conv_frac", "1"),
-    /** Mixing diffusion coefficient (cm^2 s^-1). */
-    DIFFUSION("D_mix_cm2_s", "cm^2 s^-1");
+    /** Mixing diffusion coefficient (cm^2 s^-1): the regime's own, or the overshoot coefficient where that is larger. */
+    DIFFUSION("D_mix_cm2_s", "cm^2 s^-1"),
+    /** Overshoot mixing coefficient beyond the edges of convective regions (cm^2 s^-1); 0 without overshoot. */
+    OVERSHOOT_DIFFUSION("D_overshoot_cm2_s", "cm^2 s^-1");
 
     private final String header;
     private final String unit;
