@@ -74,6 +74,17 @@ public interface ConvectionModel {
     }
 
     /**
+     * Whether this model's length scale is the distance to the nearest edge of the convective region, read
+     * from {@link ZoneState#edgeDistance} (and {@link ZoneColumns#edgeDistance}); a caller must then fill it
+     * (the diagnosis does, from the edges it locates).
+     *
+     * @return true when {@link ZoneState#edgeDistance} is read; the default is false
+     */
+    default boolean needsEdgeDistance() {
+        return false;
+    }
+
+    /**
      * The efficiency parameter of exponentially decaying overshoot beyond a convective
      * boundary: the velocity scale height is f H_P.
      *

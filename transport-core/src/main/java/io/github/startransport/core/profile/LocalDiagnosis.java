@@ -202,6 +202,15 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         OpacityResult opacity = new OpacityResult();
         ConvectionResult conv = new ConvectionResult();
         int cool = 0;
+        // a convection model whose length scale is the distance to the nearest edge needs the edges first:
+        // fill every zone's inputs, classify, locate the edges (EdgeDistances), then solve
+        double[] edgeDistance = null;
+        if (convection.needsEdgeDistance()) {
+            for (int k = 0; k < n; k++) {
+                cool += fill(p, setup, k, hasThermo, hasKappa, t, rho, x, z, nablaAd, cp, delta, kappa, thermo, opacity);
+            }
+            edgeDistance = EdgeDistances.of(criterion, r, m, t, pres, lum, kappa, nablaAd, delta, phi, nablaMu);
+        }
         for (int k = 0; k < n; k++) {
             zone.zone = zoneAsGiven(p, k);
             zone.radius = r[k];
@@ -212,24 +221,10 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             zone.luminosity = lum[k];
             zone.hydrogen = x[k];
             zone.metals = z[k];
-            if (!hasThermo) {
-                setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone.zone, thermo);
-                if (!p.has(ProfileColumn.NABLA_AD)) {
-                    nablaAd[k] = thermo.nablaAd;
-                }
-                if (!p.has(ProfileColumn.CP)) {
-                    cp[k] = thermo.cp;
-                }
-                if (!p.has(ProfileColumn.DELTA)) {
-                    delta[k] = thermo.delta;
-                }
-                if (t[k] < PARTIAL_IONISATION_T) {
-                    cool++;
-                }
-            }
-            if (!hasKappa) {
-                setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone.zone, opacity);
-                kappa[k] = opacity.kappa;
+            if (edgeDistance == null) {
+                cool += fill(p, setup, k, hasThermo, hasKappa, t, rho, x, z, nablaAd, cp, delta, kappa, thermo, opacity);
+            } else {
+                zone.edgeDistance = edgeDistance[k];
             }
             zone.opacity = kappa[k];
             zone.nablaAd = nablaAd[k];
@@ -287,6 +282,39 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
                 Timescale.kelvinHelmholtz(m[n - 1], r[n - 1], lum[n - 1]));
         return new ProfileDiagnosis(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings);
+    }
+
+    /**
+     * Fills zone k's missing inputs: nabla_ad, c_P and delta from the thermodynamics model, kappa from the
+     * opacity model.
+     *
+     * @return 1 when the thermodynamics fallback was used in a zone cooler than {@value #PARTIAL_IONISATION_T} K
+     */
+    private static int fill(Profile p, DiagnosisSetup setup, int k, boolean hasThermo, boolean hasKappa, double[] t,
+                            double[] rho, double[] x, double[] z, double[] nablaAd, double[] cp, double[] delta,
+                            double[] kappa, ThermoResult thermo, OpacityResult opacity) {
+        int zone = zoneAsGiven(p, k);
+        int cool = 0;
+        if (!hasThermo) {
+            setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone, thermo);
+            if (!p.has(ProfileColumn.NABLA_AD)) {
+                nablaAd[k] = thermo.nablaAd;
+            }
+            if (!p.has(ProfileColumn.CP)) {
+                cp[k] = thermo.cp;
+            }
+            if (!p.has(ProfileColumn.DELTA)) {
+                delta[k] = thermo.delta;
+            }
+            if (t[k] < PARTIAL_IONISATION_T) {
+                cool = 1;
+            }
+        }
+        if (!hasKappa) {
+            setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone, opacity);
+            kappa[k] = opacity.kappa;
+        }
+        return cool;
     }
 
     /**
