@@ -26,7 +26,7 @@ package io.github.startransport.core.convection;
  * whose left side increases from 0 to infinity, so there is one root S &gt; 0 for every R &gt; 0. With
  * mixing-length theory's Phi it is exactly the cubic of {@link MixingLengthCubic} (S = 162 Gamma (Gamma + 1),
  * R = 162 A^2 W). It is solved in sigma = ln S against rho = ln R, where h(sigma) = sigma + ln(1 + Phi) - rho
- * has slope h' = 1 + phi' Phi / (1 + Phi) between 1 and 3 (phi' = d ln Phi / d ln S lies between 1/2 and 2):
+ * has slope h' = 1 + phi' Phi / (1 + Phi) between 1 and 3 (phi' = d ln Phi / d ln S lies between k + m n = 0.5 and k + n = 2.00002):
  * a start from a table of the root (cubic Hermite in rho on nodes 1/16 apart, node values and slopes
  * 1 / h' exact; within ~1e-8 of the root), then one Newton step with the residual taken as
  * S (1 + Phi) / R - 1, which brings it to ~1e-14 relative. Outside the table (R below 1e-17 or above 5e34)
