@@ -199,4 +199,51 @@ class ConvectiveEdgesTest {
         assertEquals(convective(d).get(1).overshootBottom().orElseThrow(), reachBottom[1]);
         assertTrue(Double.isNaN(reachBottom[0]) && Double.isNaN(reachTop[1]));
     }
+
+    @Test
+    void withTheEdgeDistanceAsLengthScaleEachConvectiveZoneGetsItsDistanceToTheNearestInnerEdge() {
+        Profile star = new DemoStar(600).profile();
+        io.github.startransport.spi.ConvectionModel spectrum = TRANSPORT.convection("eddy-spectrum",
+                ModelOptions.parse("length-scale=edge-distance"));
+        io.github.startransport.spi.DiagnosisSetup setup = new io.github.startransport.spi.DiagnosisSetup(spectrum,
+                TRANSPORT.opacity(null, ModelOptions.defaults()), TRANSPORT.thermodynamics(null, ModelOptions.defaults()));
+        ProfileDiagnosis d = LocalDiagnosis.INSTANCE.diagnose(star, setup);
+        // the regimes do not depend on the length scale: the same as the default model's
+        assertArrayEquals(diagnose(LocalDiagnosis.INSTANCE, star, "schwarzschild").regimes(), d.regimes());
+        List<Region> regions = convective(d);
+        io.github.startransport.spi.ZoneState z = new io.github.startransport.spi.ZoneState();
+        io.github.startransport.spi.ConvectionResult out = new io.github.startransport.spi.ConvectionResult();
+        int checked = 0;
+        for (Region g : regions) {
+            for (int k = g.firstZone(); k <= g.lastZone(); k++) {
+                // distance to the nearer edge inside the star (the centre and the surface are no edges)
+                double r = d.value(DiagnosisColumn.RADIUS, k);
+                double distance = Double.POSITIVE_INFINITY;
+                if (g.firstZone() > 0) {
+                    distance = Math.min(distance, r - g.bottomRadius());
+                }
+                if (g.lastZone() < d.size() - 1) {
+                    distance = Math.min(distance, g.topRadius() - r);
+                }
+                z.radius = r;
+                z.mass = d.value(DiagnosisColumn.MASS, k);
+                z.temperature = d.value(DiagnosisColumn.TEMPERATURE, k);
+                z.density = d.value(DiagnosisColumn.DENSITY, k);
+                z.pressure = d.value(DiagnosisColumn.PRESSURE, k);
+                z.luminosity = d.value(DiagnosisColumn.LUMINOSITY, k);
+                z.opacity = d.value(DiagnosisColumn.OPACITY, k);
+                z.cp = d.value(DiagnosisColumn.CP, k);
+                z.nablaAd = d.value(DiagnosisColumn.NABLA_AD, k);
+                z.delta = d.value(DiagnosisColumn.DELTA, k);
+                z.nablaMu = d.value(DiagnosisColumn.NABLA_MU, k);
+                z.phi = 1.0;
+                z.edgeDistance = distance;
+                spectrum.solve(z, out);
+                assertEquals(out.nabla, d.value(DiagnosisColumn.NABLA, k), "zone " + k);
+                assertEquals(out.velocity, d.value(DiagnosisColumn.VELOCITY, k), "zone " + k);
+                checked++;
+            }
+        }
+        assertTrue(checked > 50, checked + " convective zones");
+    }
 }
