@@ -7,6 +7,7 @@
  */
 module io.github.startransport.spi {
     exports io.github.startransport.spi;
+    exports io.github.startransport.spi.sharing to io.github.startransport.core;
 
     uses io.github.startransport.spi.TransportProvider;
 }

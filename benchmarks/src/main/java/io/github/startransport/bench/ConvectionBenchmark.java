@@ -28,8 +28,9 @@ import java.util.concurrent.TimeUnit;
 /**
  * One convective zone: our mixing-length solve with the full Jacobian (13 inputs, four outputs), the
  * full-spectrum model's (Canuto &amp; Mazzitelli 1991) on the same zones with the same length (alpha H_P,
- * alpha = 1.8), and the mixing-length cubic against the same textbook cubic x^3 + (8U/9) x^2 + (16U^2/9) x - (8U/9) W = 0 solved, value only,
- * by Commons Math's LaguerreSolver on the bracket [0, sqrt(W)].
+ * alpha = 1.8), and the mixing-length cubic against the same textbook cubic
+ * x^3 + (8U/9) x^2 + (16U^2/9) x - (8U/9) W = 0 solved, value only, by Commons Math's LaguerreSolver on
+ * the bracket [0, sqrt(W)].
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)

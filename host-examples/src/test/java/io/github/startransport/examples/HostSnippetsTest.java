@@ -128,8 +128,13 @@ class HostSnippetsTest {
         assertTrue(nabla[centre] / nablaAd[centre] - 1.0 < 1e-4,
                 "zone " + centre + ": nabla " + nabla[centre] + ", nabla_ad " + nablaAd[centre]);
 
-        // a radiative zone: nabla = nabla_rad ~ T^-4 with kappa held fixed, so d nabla / d T = -4 nabla / T
-        int middle = n / 2;
+        // a radiative zone, in the middle of the radiative layer above the core: nabla = nabla_rad ~ T^-4
+        // with kappa held fixed, so d nabla / d T = -4 nabla / T
+        int layerEnd = coreEnd + 1;
+        while (layerEnd + 1 < n && !convective.contains(layerEnd + 1)) {
+            layerEnd++;
+        }
+        int middle = (coreEnd + 1 + layerEnd) / 2;
         assertTrue(!convective.contains(middle), "zone " + middle + " is radiative");
         assertEquals(-4.0 * nabla[middle] / t[middle], dNablaDT[middle], 1e-12 * Math.abs(dNablaDT[middle]));
 

@@ -3,6 +3,7 @@ package io.github.startransport.cli;
 import io.github.startransport.spi.Transport;
 
 import java.io.PrintStream;
+import java.util.List;
 import java.util.function.Supplier;
 
 /**
@@ -14,6 +15,7 @@ final class Cli {
     private final PrintStream err;
     private final boolean console;
     private final Supplier<Transport> discovery;
+    private final List<String> args;
     private Transport transport;
 
     /**
@@ -21,8 +23,10 @@ final class Cli {
      * @param err       standard error
      * @param console   whether a console is attached (progress bars are drawn only then)
      * @param discovery finds the providers
+     * @param args      the command line, as given
      */
-    Cli(PrintStream out, PrintStream err, boolean console, Supplier<Transport> discovery) {
+    Cli(PrintStream out, PrintStream err, boolean console, Supplier<Transport> discovery, List<String> args) {
+        this.args = List.copyOf(args);
         this.out = out;
         this.err = err;
         this.console = console;
@@ -39,6 +43,11 @@ final class Cli {
 
     boolean console() {
         return console;
+    }
+
+    /** @return the command line, as given */
+    List<String> args() {
+        return args;
     }
 
     /**

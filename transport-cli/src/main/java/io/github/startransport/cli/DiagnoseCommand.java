@@ -44,7 +44,7 @@ import java.util.concurrent.Future;
                 + " thermal and Kelvin-Helmholtz timescales.",
             "",
             "Writes into DIR: zones.csv (one row per zone), summary.json, gradients.png, velocity-mixing.png,"
-                + " opacity.png, and prints a short summary. With several profiles each goes to DIR/<file name"
+                + " opacity.png, propagation.png, and prints a short summary. With several profiles each goes to DIR/<file name"
                 + " without extension>/, and they are diagnosed in parallel. Nothing is left half-written: the"
                 + " files appear in DIR only when everything succeeded.",
             ""},
@@ -53,11 +53,11 @@ import java.util.concurrent.Future;
             "Profile files: CSV, one header row of column names, then one zone per row (centre to surface or"
                 + " surface to centre), cgs units. Lines starting with # and blank lines are skipped.",
             "  required: r_cm, m_g, T_K, rho_g_cm3, P_dyn_cm2, L_erg_s, X, Z",
-            "  optional: kappa_cm2_g, cp_erg_g_K, delta, nabla_ad, nabla_mu, phi (computed when absent)",
+            "  optional: kappa_cm2_g, cp_erg_g_K, delta, nabla_ad, nabla_mu, phi, Gamma1 (computed when absent)",
             "  other columns are ignored (with a note on standard error).",
             "",
             "Exit codes: 0 success; 1 bad input (the message names file, line, column and what is wrong);"
-                + " 2 usage error."})
+                + " 2 usage error; 3 out of memory (the message says which -Xmx to try)."})
 final class DiagnoseCommand implements Callable<Integer> {
     private final Cli cli;
 
@@ -72,8 +72,10 @@ final class DiagnoseCommand implements Callable<Integer> {
     private boolean demo;
 
     @Option(names = "--out", paramLabel = "DIR", defaultValue = "diagnosis",
-            description = "Output folder. Default: ${DEFAULT-VALUE}. Replaced only if it holds nothing but a"
-                    + " previous run's files.")
+            description = "Output folder. Default: ${DEFAULT-VALUE}. It becomes a link to a hidden versioned"
+                    + " folder beside it (.DIR.run-<run id>) holding the files and " + OutputFolder.MARKER + "; a later"
+                    + " run replaces it in one atomic step. An existing DIR is replaced only if this tool made it and"
+                    + " it holds nothing else; a link someone else made is followed.")
     private Path out;
 
     @Option(names = "--alpha", paramLabel = "A",
@@ -142,8 +144,8 @@ final class DiagnoseCommand implements Callable<Integer> {
         }
     }
 
-    /** One profile to diagnose: read from a file (then {@code read} is set) or built in. */
-    private record Job(String stem, Profile profile, ProfileCsvReader.Read read) {
+    /** One profile to diagnose: a file (then {@code file} is set) or the built-in star. */
+    private record Job(String stem, Path file) {
     }
 
     @Override
@@ -156,27 +158,22 @@ final class DiagnoseCommand implements Callable<Integer> {
                     + (Files.exists(opacityTable) ? " (permission denied)" : " (no such file)"));
         }
         List<Job> jobs = new ArrayList<>();
-        List<ProfileDiagnosis> results;
-        ModelsUsed used;
-        try (OutputFolder folder = OutputFolder.open(out)) {
-            for (Map.Entry<String, Path> e : stems.entrySet()) {
-                ProfileCsvReader.Read read = ProfileCsvReader.read(e.getValue(), map);
-                read.notes().forEach(n -> cli.err().println("note: " + n));
-                jobs.add(new Job(e.getKey(), read.profile(), read));
-            }
+        stems.forEach((stem, file) -> jobs.add(new Job(stem, file)));
+        if (demo) {
+            jobs.add(new Job(null, null));
+        }
+        List<String> summaries;
+        List<String> notes = new ArrayList<>();
+        List<String> warnings;
+        try (OutputFolder folder = OutputFolder.open(out, cli.args(), notes)) {
+            notes.forEach(n -> cli.err().println("note: " + n));
             Transport transport = cli.transport();
-            if (demo) {
-                jobs.add(new Job(null, transport.star(null, ModelOptions.defaults()).profile(), null));
-            }
             Setup setup = setup(transport);
-            used = setup.used();
-            results = diagnoseAndWrite(jobs, setup, folder.staging());
-            folder.commit();
+            summaries = diagnoseAndWrite(jobs, map, setup, folder.staging());
+            warnings = folder.commit();
         }
-        for (int i = 0; i < jobs.size(); i++) {
-            Path where = jobs.get(i).stem() == null || !multiple() ? out : out.resolve(jobs.get(i).stem());
-            cli.out().print(HumanSummary.text(results.get(i), used, where.toString()));
-        }
+        summaries.forEach(cli.out()::print);
+        warnings.forEach(w -> cli.err().println("warning: " + w));
         return 0;
     }
 
@@ -291,12 +288,19 @@ final class DiagnoseCommand implements Callable<Integer> {
         return new Setup(new DiagnosisSetup(convectionModel, opacityModel, thermo), diagnoser, used);
     }
 
-    private List<ProfileDiagnosis> diagnoseAndWrite(List<Job> jobs, Setup setup, Path staging) throws IOException {
+    /**
+     * Reads, diagnoses and writes each job, several at once when there are several; each job
+     * keeps its profile and diagnosis only while it runs.
+     *
+     * @return the printed summary of each job, in order
+     */
+    private List<String> diagnoseAndWrite(List<Job> jobs, ColumnMap map, Setup setup, Path staging)
+            throws IOException {
         ProgressBar bar = new ProgressBar(cli.err(), jobs.size(), cli.console() && jobs.size() > 1);
         bar.start();
-        List<ProfileDiagnosis> results = new ArrayList<>();
+        List<String> results = new ArrayList<>();
         if (jobs.size() == 1) {
-            results.add(diagnoseAndWrite(jobs.get(0), setup, staging, bar));
+            results.add(diagnoseAndWrite(jobs.get(0), map, setup, staging, bar));
             return results;
         }
         int threads = Math.min(jobs.size(), Runtime.getRuntime().availableProcessors());
@@ -306,11 +310,12 @@ final class DiagnoseCommand implements Callable<Integer> {
             return t;
         });
         try {
-            List<Future<ProfileDiagnosis>> futures = new ArrayList<>();
+            List<Future<String>> futures = new ArrayList<>();
             for (Job job : jobs) {
-                futures.add(pool.submit(() -> diagnoseAndWrite(job, setup, staging.resolve(job.stem()), bar)));
+                Path dir = job.stem() == null ? staging : staging.resolve(job.stem());
+                futures.add(pool.submit(() -> diagnoseAndWrite(job, map, setup, dir, bar)));
             }
-            for (Future<ProfileDiagnosis> f : futures) {
+            for (Future<String> f : futures) {
                 results.add(f.get());
             }
         } catch (ExecutionException e) {
@@ -320,6 +325,9 @@ final class DiagnoseCommand implements Callable<Integer> {
             }
             if (cause instanceof IOException io) {
                 throw io;
+            }
+            if (cause instanceof Error error) {
+                throw error;
             }
             throw new IllegalStateException(cause);
         } catch (InterruptedException e) {
@@ -342,15 +350,25 @@ final class DiagnoseCommand implements Callable<Integer> {
         }
     }
 
-    private ProfileDiagnosis diagnoseAndWrite(Job job, Setup setup, Path dir, ProgressBar bar) throws IOException {
+    private String diagnoseAndWrite(Job job, ColumnMap map, Setup setup, Path dir, ProgressBar bar)
+            throws IOException {
+        ProfileCsvReader.Read read = null;
+        Profile profile;
+        if (job.file() != null) {
+            read = ProfileCsvReader.read(job.file(), map);
+            read.notes().forEach(n -> cli.err().println("note: " + n));
+            profile = read.profile();
+        } else {
+            profile = cli.transport().star(null, ModelOptions.defaults()).profile();
+        }
         ProfileDiagnosis d;
         try {
-            d = setup.diagnoser().diagnose(job.profile(), setup.models());
+            d = setup.diagnoser().diagnose(profile, setup.models());
         } catch (InvalidInputException e) {
-            if (job.read() == null) {
+            if (read == null) {
                 throw e;
             }
-            throw job.read().locate(e, false);
+            throw read.locate(e, false);
         }
         try {
             Files.createDirectories(dir);
@@ -358,11 +376,12 @@ final class DiagnoseCommand implements Callable<Integer> {
             SummaryJson.write(d, setup.used(), dir.resolve("summary.json"));
             DiagnosisCharts.writeAll(d, dir);
         } catch (IOException | UncheckedIOException e) {
-            throw new BadInputException("cannot write the output for " + job.profile().source() + " into " + out
+            throw new BadInputException("cannot write the output for " + profile.source() + " into " + out
                     + ": " + e.getMessage(), e);
         }
-        bar.step(job.profile().source());
-        return d;
+        bar.step(profile.source());
+        Path where = job.stem() == null || !multiple() ? out : out.resolve(job.stem());
+        return HumanSummary.text(d, setup.used(), where.toString());
     }
 
     /** @return the model this command uses when no name is given, or {@code null} */

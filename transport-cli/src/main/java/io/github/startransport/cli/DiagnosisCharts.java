@@ -36,7 +36,7 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * The three plots of a diagnosis, drawn with JFreeChart and written as PNG at 1200 x 800.
+ * The four plots of a diagnosis, drawn with JFreeChart and written as PNG at 1200 x 800.
  *
  * <p>On logarithmic axes a value that is zero or negative cannot be drawn; it leaves a gap in
  * its line, and the plot's subtitle says so.
@@ -53,6 +53,8 @@ final class DiagnosisCharts {
     static final String MIXING_PNG = "velocity-mixing.png";
     /** File name of the opacity plot. */
     static final String OPACITY_PNG = "opacity.png";
+    /** File name of the propagation diagram. */
+    static final String PROPAGATION_PNG = "propagation.png";
 
     private static final Map<Regime, Color> SHADE = new EnumMap<>(Map.of(
             Regime.CONVECTIVE, new Color(255, 170, 60, 70),
@@ -69,7 +71,7 @@ final class DiagnosisCharts {
     }
 
     /**
-     * Writes all three plots into a folder.
+     * Writes all four plots into a folder.
      *
      * @param diagnosis the diagnosis
      * @param dir       an existing folder
@@ -79,6 +81,7 @@ final class DiagnosisCharts {
         write(gradients(diagnosis), dir.resolve(GRADIENTS_PNG));
         write(velocityAndMixing(diagnosis), dir.resolve(MIXING_PNG));
         write(opacity(diagnosis), dir.resolve(OPACITY_PNG));
+        write(propagation(diagnosis), dir.resolve(PROPAGATION_PNG));
     }
 
     /**
@@ -92,21 +95,29 @@ final class DiagnosisCharts {
 
     /**
      * @param d a diagnosis
-     * @return nabla_rad, nabla_ad, nabla_L and the actual nabla against r/R, regions shaded
+     * @return nabla_rad, nabla_ad, nabla_L, the actual nabla and the profile's own d ln T / d ln P against r/R,
+     *         regions shaded
      */
     static JFreeChart gradients(ProfileDiagnosis d) {
-        double[] x = radiusFraction(d);
+        Values x = radiusFraction(d);
         XYSeriesCollection data = new XYSeriesCollection();
         int hidden = 0;
-        hidden += add(data, "\u2207_rad (radiative)", x, d.column(DiagnosisColumn.NABLA_RAD), true);
-        hidden += add(data, "\u2207_ad (adiabatic)", x, d.column(DiagnosisColumn.NABLA_AD), true);
-        hidden += add(data, "\u2207_L (Ledoux)", x, d.column(DiagnosisColumn.NABLA_LEDOUX), true);
-        hidden += add(data, "\u2207 (actual)", x, d.column(DiagnosisColumn.NABLA), true);
+        hidden += add(data, "\u2207_rad (radiative)", d.size(), x, column(d, DiagnosisColumn.NABLA_RAD), true);
+        hidden += add(data, "\u2207_ad (adiabatic)", d.size(), x, column(d, DiagnosisColumn.NABLA_AD), true);
+        hidden += add(data, "\u2207_L (Ledoux)", d.size(), x, column(d, DiagnosisColumn.NABLA_LEDOUX), true);
+        hidden += add(data, "\u2207 (actual)", d.size(), x, column(d, DiagnosisColumn.NABLA), true);
+        double[] model = d.column(DiagnosisColumn.NABLA_MODEL);
+        int undefined = 0; // where the pressure does not fall outwards; the diagnosis warns about those zones
+        for (double v : model) {
+            undefined += Double.isNaN(v) ? 1 : 0;
+        }
+        hidden += add(data, "\u2207_model (the profile's own d ln T / d ln P)", d.size(), x, k -> model[k], true)
+                - undefined;
         ValueAxis y = logAxis("temperature gradient \u2207 = d ln T / d ln P (dimensionless)", data);
         XYPlot plot = new XYPlot(data, fractionAxis(), y, new XYLineAndShapeRenderer(true, false));
         JFreeChart chart = chart("Temperature gradients of " + d.source() + " (" + d.criterion().label()
                 + " criterion, \u03b1 = " + d.alpha() + ")", plot);
-        style(plot, 0, 4);
+        style(plot, 0, 5);
         shadeRegions(d, plot);
         note(chart, hidden, "gradient values \u2264 0");
         return chart;
@@ -117,11 +128,12 @@ final class DiagnosisCharts {
      * @return v_conv (left axis) and D_mix (right axis) against r/R, regions shaded
      */
     static JFreeChart velocityAndMixing(ProfileDiagnosis d) {
-        double[] x = radiusFraction(d);
+        Values x = radiusFraction(d);
         XYSeriesCollection velocity = new XYSeriesCollection();
         XYSeriesCollection mixing = new XYSeriesCollection();
-        int hidden = add(velocity, "v_conv (left axis)", x, d.column(DiagnosisColumn.VELOCITY), true);
-        int hiddenMixing = add(mixing, "D_mix (right axis)", x, d.column(DiagnosisColumn.DIFFUSION), true);
+        int hidden = add(velocity, "v_conv (left axis)", d.size(), x, column(d, DiagnosisColumn.VELOCITY), true);
+        int hiddenMixing = add(mixing, "D_mix (right axis)", d.size(), x, column(d, DiagnosisColumn.DIFFUSION),
+                true);
         XYPlot plot = new XYPlot(velocity, fractionAxis(),
                 logAxis("convective velocity v_conv (cm s\u207b\u00b9)", velocity),
                 new XYLineAndShapeRenderer(true, false));
@@ -148,12 +160,13 @@ final class DiagnosisCharts {
      */
     static JFreeChart opacity(ProfileDiagnosis d) {
         double[] t = d.column(DiagnosisColumn.TEMPERATURE);
-        double[] logT = new double[t.length];
         for (int k = 0; k < t.length; k++) {
-            logT[k] = Math.log10(t[k]);
+            t[k] = Math.log10(t[k]);
         }
+        Values logT = k -> t[k];
         XYSeriesCollection data = new XYSeriesCollection();
-        int hidden = add(data, "\u03ba (Rosseland mean, as used)", logT, d.column(DiagnosisColumn.OPACITY), false);
+        int hidden = add(data, "\u03ba (Rosseland mean, as used)", d.size(), logT, column(d, DiagnosisColumn.OPACITY),
+                false);
         NumberAxis x = new NumberAxis("log\u2081\u2080 (T / K)");
         x.setAutoRangeIncludesZero(false);
         XYPlot plot = new XYPlot(data, x, logAxis("opacity \u03ba (cm\u00b2 g\u207b\u00b9)", data),
@@ -164,25 +177,180 @@ final class DiagnosisCharts {
         return chart;
     }
 
-    private static double[] radiusFraction(ProfileDiagnosis d) {
+    /**
+     * The propagation diagram: the buoyancy frequency N and the l = 1 Lamb frequency S_1 as cyclic
+     * frequencies (N / 2 pi, S_1 / 2 pi, in microhertz) against r/R on a logarithmic axis, the large
+     * separation Delta nu marked, non-radiative regions shaded. Zones with N^2 &lt;= 0 (convectively
+     * unstable) leave gaps in N.
+     *
+     * @param d a diagnosis
+     * @return the chart
+     */
+    static JFreeChart propagation(ProfileDiagnosis d) {
+        Values x = radiusFraction(d);
+        double[] n2 = d.column(DiagnosisColumn.BUOYANCY_SQUARED);
+        double[] s1 = d.column(DiagnosisColumn.LAMB_L1);
+        double[] n = new double[n2.length];
+        for (int k = 0; k < n2.length; k++) {
+            n[k] = n2[k] > 0 ? Math.sqrt(n2[k]) / (2 * Math.PI) * 1e6 : 0.0;
+            s1[k] = s1[k] / (2 * Math.PI) * 1e6;
+        }
+        XYSeriesCollection data = new XYSeriesCollection();
+        int hidden = add(data, "N / 2\u03c0 (buoyancy frequency)", d.size(), x, k -> n[k], true);
+        add(data, "S\u2081 / 2\u03c0 (Lamb frequency, l = 1)", d.size(), x, k -> s1[k], true);
+        ValueAxis y = logAxis("cyclic frequency (\u03bcHz)", data);
+        XYPlot plot = new XYPlot(data, fractionAxis(), y, new XYLineAndShapeRenderer(true, false));
+        JFreeChart chart = chart("Propagation diagram of " + d.source(), plot);
+        XYLineAndShapeRenderer lines = (XYLineAndShapeRenderer) plot.getRenderer();
+        lines.setSeriesPaint(0, new Color(200, 30, 30));
+        lines.setSeriesStroke(0, new BasicStroke(2.5f));
+        lines.setSeriesPaint(1, new Color(30, 110, 200));
+        lines.setSeriesStroke(1, new BasicStroke(2.5f));
+        shadeRegions(d, plot);
+        double deltaNu = d.seismic().map(sm -> sm.largeSeparation() * 1e6).orElse(Double.NaN);
+        if (Double.isFinite(deltaNu) && deltaNu > 0) {
+            org.jfree.chart.plot.ValueMarker marker = new org.jfree.chart.plot.ValueMarker(deltaNu);
+            marker.setPaint(new Color(120, 60, 160));
+            marker.setStroke(new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f,
+                    new float[] {8f, 5f}, 0f));
+            marker.setLabel(String.format(java.util.Locale.ROOT, "\u0394\u03bd = %.4g \u03bcHz", deltaNu));
+            marker.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 16));
+            marker.setLabelPaint(new Color(120, 60, 160));
+            marker.setLabelAnchor(org.jfree.chart.ui.RectangleAnchor.TOP_RIGHT);
+            marker.setLabelTextAnchor(org.jfree.chart.ui.TextAnchor.BOTTOM_RIGHT);
+            marker.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+            plot.addRangeMarker(marker);
+            includeInRange(y, data, deltaNu);
+        }
+        note(chart, hidden, "zones with N\u00b2 \u2264 0 (convectively unstable)");
+        return chart;
+    }
+
+    /** Widens a logarithmic axis so that {@code value} and every drawn point lie inside it. */
+    private static void includeInRange(ValueAxis axis, XYSeriesCollection data, double value) {
+        double lo = value;
+        double hi = value;
+        for (int s = 0; s < data.getSeriesCount(); s++) {
+            for (int i = 0; i < data.getItemCount(s); i++) {
+                double v = data.getYValue(s, i);
+                if (v > 0 && Double.isFinite(v)) {
+                    lo = Math.min(lo, v);
+                    hi = Math.max(hi, v);
+                }
+            }
+        }
+        axis.setRange(lo / 1.5, hi * 1.5);
+    }
+
+    /** One value per zone. */
+    interface Values {
+        /**
+         * @param zone zone index, centre = 0
+         * @return the value
+         */
+        double at(int zone);
+    }
+
+    /** One column as values (a copy: a plain array is read ten times faster than through the diagnosis). */
+    private static Values column(ProfileDiagnosis d, DiagnosisColumn c) {
+        double[] v = d.column(c);
+        return k -> v[k];
+    }
+
+    private static Values radiusFraction(ProfileDiagnosis d) {
         double[] r = d.column(DiagnosisColumn.RADIUS);
         double big = d.radius();
         for (int k = 0; k < r.length; k++) {
             r[k] /= big;
         }
-        return r;
+        return k -> r[k];
     }
 
-    /** Adds a series; values a log axis cannot show become gaps. @return how many were left out */
-    private static int add(XYSeriesCollection data, String name, double[] x, double[] y, boolean sortByX) {
+    /** Up to this many zones a series draws every zone. */
+    static final int MAX_POINTS = 4000;
+    /** Beyond {@link #MAX_POINTS} zones, a series is cut into this many runs of neighbouring zones. */
+    static final int RUNS = 1000;
+
+    /**
+     * Zones to draw of one series: all of them when there are at most {@link #MAX_POINTS};
+     * otherwise, in each of {@link #RUNS} runs of neighbouring zones, the first, the last, the
+     * smallest and the largest drawable value, and one undrawable zone if the run holds any (so
+     * a gap stays a gap): at most 5 points a run, fewer than a 1200-pixel plot can tell apart.
+     * Extremes are never lost, and the cost beyond one pass over the zones does not grow with
+     * their number.
+     *
+     * @param n number of zones
+     * @param x the abscissa
+     * @param y the values
+     * @return zone indices, increasing
+     */
+    static int[] decimate(int n, Values x, Values y) {
+        if (n <= MAX_POINTS) {
+            int[] all = new int[n];
+            for (int k = 0; k < n; k++) {
+                all[k] = k;
+            }
+            return all;
+        }
+        int buckets = RUNS;
+        int[] keep = new int[buckets * 5];
+        int m = 0;
+        for (int b = 0; b < buckets; b++) {
+            int from = (int) ((long) n * b / buckets);
+            int to = (int) ((long) n * (b + 1) / buckets);
+            int lo = -1;
+            int hi = -1;
+            int gap = -1;
+            for (int k = from; k < to; k++) {
+                double v = y.at(k);
+                if (drawable(x.at(k), v)) {
+                    if (lo < 0 || v < y.at(lo)) {
+                        lo = k;
+                    }
+                    if (hi < 0 || v > y.at(hi)) {
+                        hi = k;
+                    }
+                } else if (gap < 0) {
+                    gap = k;
+                }
+            }
+            int[] picks = {from, lo, hi, gap, to - 1};
+            java.util.Arrays.sort(picks);
+            int last = m > 0 ? keep[m - 1] : -1;
+            for (int p : picks) {
+                if (p >= 0 && p != last) {
+                    keep[m++] = p;
+                    last = p;
+                }
+            }
+        }
+        return java.util.Arrays.copyOf(keep, m);
+    }
+
+    private static boolean drawable(double x, double y) {
+        return y > 0 && Double.isFinite(y) && Double.isFinite(x);
+    }
+
+    /**
+     * Adds a series, decimated ({@link #decimate}); values a log axis cannot show become gaps.
+     *
+     * @return how many zones (of all, not only those drawn) cannot be shown
+     */
+    private static int add(XYSeriesCollection data, String name, int n, Values x, Values y, boolean sortByX) {
         XYSeries s = new XYSeries(name, sortByX, true);
         int hidden = 0;
-        for (int k = 0; k < x.length; k++) {
-            if (y[k] > 0 && Double.isFinite(y[k]) && Double.isFinite(x[k])) {
-                s.add(x[k], y[k]);
-            } else {
-                s.add(x[k], null);
+        for (int k = 0; k < n; k++) {
+            if (!drawable(x.at(k), y.at(k))) {
                 hidden++;
+            }
+        }
+        for (int k : decimate(n, x, y)) {
+            double xv = x.at(k);
+            double yv = y.at(k);
+            if (drawable(xv, yv)) {
+                s.add(xv, yv, false);
+            } else if (Double.isFinite(xv)) {
+                s.add(xv, null, false);
             }
         }
         data.addSeries(s);
@@ -199,7 +367,7 @@ final class DiagnosisCharts {
      * A logarithmic axis: powers of ten over a wide range; over less than three decades, where
      * those would be too few, ticks at 1, 2, ... 9 times a power of ten.
      */
-    private static ValueAxis logAxis(String label, XYSeriesCollection data) {
+    static ValueAxis logAxis(String label, XYSeriesCollection data) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = 0.0;
         for (int s = 0; s < data.getSeriesCount(); s++) {
@@ -229,11 +397,12 @@ final class DiagnosisCharts {
     private static void style(XYPlot plot, int index, int series) {
         XYLineAndShapeRenderer r = (XYLineAndShapeRenderer) plot.getRenderer(index);
         Paint[] paints = {new Color(200, 30, 30), new Color(30, 30, 30), new Color(30, 110, 200),
-            new Color(20, 150, 60)};
+            new Color(20, 150, 60), new Color(150, 60, 180)};
         Stroke[] strokes = {new BasicStroke(2.5f),
             new BasicStroke(2.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {10f, 6f}, 0f),
             new BasicStroke(2.5f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {3f, 4f}, 0f),
-            new BasicStroke(3.5f)};
+            new BasicStroke(3.5f),
+            new BasicStroke(2.0f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {12f, 4f, 2f, 4f}, 0f)};
         if (series == 1) {
             r.setSeriesPaint(0, index == 0 ? new Color(200, 30, 30) : new Color(30, 110, 200));
             r.setSeriesStroke(0, index == 0 ? strokes[0] : strokes[1]);

@@ -65,6 +65,10 @@ final class HumanSummary {
         b.append(String.format(Locale.ROOT, "  timescales: photon diffusion %.3g yr, thermal diffusion %.3g yr,"
                         + " Kelvin-Helmholtz %.3g yr\n", t.photonDiffusion() / SummaryJson.JULIAN_YEAR_S,
                 t.thermalDiffusion() / SummaryJson.JULIAN_YEAR_S, t.kelvinHelmholtz() / SummaryJson.JULIAN_YEAR_S));
+        d.seismic().ifPresent(s -> b.append(String.format(Locale.ROOT, "  seismic: acoustic radius %.4g s,"
+                + " large separation %.4g uHz, l = 1 period spacing %s\n", s.acousticRadius(),
+                s.largeSeparation() * 1e6, Double.isFinite(s.periodSpacingL1())
+                        ? String.format(Locale.ROOT, "%.4g s", s.periodSpacingL1()) : "n/a (no zone with N^2 > 0)")));
         for (String w : d.warnings()) {
             b.append("  warning: ").append(w).append('\n');
         }

@@ -22,7 +22,8 @@ import java.util.function.Supplier;
  * the physics only through the SPI ({@link Transport#discover()}).
  *
  * <p>Exit codes: {@value #OK} success, {@value #BAD_INPUT} bad input (file, line or zone,
- * column and what is wrong), {@value #USAGE} usage error.
+ * column and what is wrong), {@value #USAGE} usage error, {@value #OUT_OF_MEMORY} out of memory
+ * (one line saying how many zones and which {@code -Xmx} to try).
  */
 public final class Main {
     /** Exit code: success. */
@@ -31,6 +32,8 @@ public final class Main {
     public static final int BAD_INPUT = 1;
     /** Exit code: the command line itself is wrong. */
     public static final int USAGE = 2;
+    /** Exit code: the Java heap is too small for the input (the message says which -Xmx to try). */
+    public static final int OUT_OF_MEMORY = 3;
 
     private Main() {
     }
@@ -38,7 +41,8 @@ public final class Main {
     /** The top-level command; it only dispatches. */
     @Command(name = "startransport", mixinStandardHelpOptions = true, versionProvider = Version.class,
             description = {"Energy-transport diagnostics of stellar model profiles.", ""},
-            footer = {"", "Exit codes: 0 success; 1 bad input; 2 usage error.",
+            footer = {"", "Exit codes: 0 success; 1 bad input; 2 usage error; 3 out of memory (the message says which"
+                + " -Xmx to try).",
                 "Run 'startransport diagnose --help' for the profile format and every option."})
     static final class Root implements Runnable {
         @Spec
@@ -46,7 +50,7 @@ public final class Main {
 
         @Override
         public void run() {
-            throw new ParameterException(spec.commandLine(), "missing command: diagnose or models");
+            throw new ParameterException(spec.commandLine(), "missing command: diagnose, envelope, models or table");
         }
     }
 
@@ -127,9 +131,10 @@ public final class Main {
         if (System.getProperty("java.awt.headless") == null) {
             System.setProperty("java.awt.headless", "true");
         }
-        Cli cli = new Cli(out, err, console, discovery);
+        Cli cli = new Cli(out, err, console, discovery, java.util.Arrays.asList(args));
         CommandLine cl = new CommandLine(new Root());
         cl.addSubcommand(new CommandLine(new DiagnoseCommand(cli)));
+        cl.addSubcommand(new CommandLine(new EnvelopeCommand(cli)));
         cl.addSubcommand(new CommandLine(new ModelsCommand(cli)));
         CommandLine table = new CommandLine(new TableCommand());
         table.addSubcommand(new CommandLine(new TableCommand.Build(cli)));
@@ -139,6 +144,9 @@ public final class Main {
         cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
         cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
         cl.setExecutionExceptionHandler((e, line, parsed) -> {
+            if (e instanceof IllegalStateException && e.getCause() instanceof OutOfMemoryError) {
+                return outOfMemory(err);
+            }
             err.println("startransport: " + describe(e));
             if (!(e instanceof TransportException || e instanceof BadInputException)) {
                 e.printStackTrace(err);
@@ -146,10 +154,22 @@ public final class Main {
             err.flush();
             return BAD_INPUT;
         });
-        int code = cl.execute(args);
+        int code;
+        try {
+            code = cl.execute(args);
+        } catch (OutOfMemoryError e) {
+            code = outOfMemory(err);
+        }
         out.flush();
         err.flush();
         return code;
+    }
+
+    /** One line, no stack trace: the output folder has already been cleaned up by then. */
+    private static int outOfMemory(PrintStream err) {
+        err.println("startransport: " + MemoryAdvice.message(Runtime.getRuntime().maxMemory()));
+        err.flush();
+        return OUT_OF_MEMORY;
     }
 
     private static String describe(Exception e) {

@@ -31,7 +31,7 @@ class DiagnosisChartsTest {
     @Test
     void writesThreePngsOf1200By800(@TempDir Path dir) throws Exception {
         DiagnosisCharts.writeAll(HandMadeDiagnosis.build(), dir);
-        for (String name : List.of("gradients.png", "velocity-mixing.png", "opacity.png")) {
+        for (String name : List.of("gradients.png", "velocity-mixing.png", "opacity.png", "propagation.png")) {
             BufferedImage image = ImageIO.read(dir.resolve(name).toFile());
             assertNotNull(image, name + " is not a readable PNG");
             assertEquals(1200, image.getWidth(), name);

@@ -41,7 +41,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  */
 class EndToEndTest {
     private static final List<String> FILES = List.of("zones.csv", "summary.json", "gradients.png",
-            "velocity-mixing.png", "opacity.png");
+            "velocity-mixing.png", "opacity.png", "propagation.png");
 
     private final Transport transport = Transport.discover();
 
@@ -160,7 +160,7 @@ class EndToEndTest {
         // the year of the summary is the Julian year, 365.25 d of 86400 s (IAU)
         assertEquals(expected.timescales().kelvinHelmholtz() / (365.25 * 86400),
                 s.get("kelvin_helmholtz_time_yr").asDouble(), 1e-12 * s.get("kelvin_helmholtz_time_yr").asDouble());
-        for (String png : List.of("gradients.png", "velocity-mixing.png", "opacity.png")) {
+        for (String png : List.of("gradients.png", "velocity-mixing.png", "opacity.png", "propagation.png")) {
             BufferedImage image = ImageIO.read(out.resolve(png).toFile());
             assertNotNull(image, png);
             assertEquals(1200, image.getWidth());
@@ -168,7 +168,7 @@ class EndToEndTest {
         }
         assertTrue(r.out().contains("timescales"), r.out());
         assertRegionsMatchZones(out);
-        assertEquals(List.of("out"), Files.list(dir).map(p -> p.getFileName().toString()).toList());
+        assertEquals(OutputFolderTest.expectedBeside(dir, "out"), OutputFolderTest.names(dir));
     }
 
     @Test

@@ -96,6 +96,8 @@ final class HandMadeDiagnosis {
             put(c, DiagnosisColumn.NABLA_RAD, k, nablaRad);
             put(c, DiagnosisColumn.NABLA_LEDOUX, k, regime == Regime.SEMICONVECTIVE ? 0.5 : 0.4);
             put(c, DiagnosisColumn.NABLA, k, conv ? 0.4 + 1e-4 * (1 + 100 * Math.max(0, f - 0.95)) : nablaRad);
+            put(c, DiagnosisColumn.NABLA_MODEL, k, 0.25);
+            put(c, DiagnosisColumn.NABLA_MISMATCH, k, 0.5 * f);
             put(c, DiagnosisColumn.NABLA_ELEMENT, k, conv ? 0.4 + 5e-5 : nablaRad);
             put(c, DiagnosisColumn.VELOCITY, k, conv ? 1e4 * (1 + 50 * f * f) : 0.0);
             put(c, DiagnosisColumn.CONVECTIVE_FRACTION, k, conv ? 0.99 - 0.5 * Math.max(0, f - 0.95) : 0.0);

@@ -2,6 +2,7 @@ package io.github.startransport.cli;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import io.github.startransport.spi.DiagnosisColumn;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -28,7 +29,7 @@ class SummaryJsonTest {
         JsonNode j = written(dir);
         for (String key : List.of("mass_g", "radius_cm", "luminosity_erg_s", "alpha", "criterion", "convection_model",
                 "opacity_model", "photon_diffusion_time_yr", "thermal_diffusion_time_yr", "kelvin_helmholtz_time_yr",
-                "regions")) {
+                "max_nabla_mismatch", "regions")) {
             assertTrue(j.has(key), "no " + key + " in " + j);
         }
         assertEquals(HandMadeDiagnosis.MASS, j.get("mass_g").asDouble());
@@ -40,6 +41,16 @@ class SummaryJsonTest {
         assertEquals(HandMadeDiagnosis.PHOTON_S / YEAR, j.get("photon_diffusion_time_yr").asDouble(), 1e-12 * 2e5);
         assertEquals(HandMadeDiagnosis.THERMAL_S / YEAR, j.get("thermal_diffusion_time_yr").asDouble(), 1e-12 * 3e6);
         assertEquals(HandMadeDiagnosis.KH_S / YEAR, j.get("kelvin_helmholtz_time_yr").asDouble(), 1e-12 * 4e7);
+        // the largest nabla_mismatch of any zone, and of each region's zones
+        double max = 0;
+        for (double v : HandMadeDiagnosis.build().column(DiagnosisColumn.NABLA_MISMATCH)) {
+            max = Math.max(max, v);
+        }
+        assertEquals(max, j.get("max_nabla_mismatch").asDouble());
+        for (JsonNode region : j.get("regions")) {
+            assertEquals(HandMadeDiagnosis.build().value(DiagnosisColumn.NABLA_MISMATCH, 0),
+                    region.get("max_nabla_mismatch").asDouble());
+        }
     }
 
     @Test

@@ -79,9 +79,13 @@ class SuperadiabaticPlotTest {
             for (int k = envelope.firstZone(); k <= envelope.lastZone(); k++) {
                 double excess = d.value(DiagnosisColumn.NABLA, k) - d.value(DiagnosisColumn.NABLA_AD, k);
                 double radiative = d.value(DiagnosisColumn.NABLA_RAD, k) - d.value(DiagnosisColumn.NABLA_AD, k);
-                // convection carries flux: 0 < nabla - nabla_ad < nabla_rad - nabla_ad (Kippenhahn, Weigert & Weiss ch. 7)
-                assertTrue(excess > 0 && excess < radiative, names.get(i) + ", zone " + k);
-                s.add(d.value(DiagnosisColumn.RADIUS, k) / radius, excess);
+                // convection carries flux: 0 < nabla - nabla_ad < nabla_rad - nabla_ad (Kippenhahn, Weigert & Weiss
+                // ch. 7); read back as differences of columns, the two ends are reached to rounding where convection
+                // is very efficient (the excess rounds to 0) or very inefficient (to nabla_rad - nabla_ad)
+                assertTrue(excess >= 0 && excess <= radiative, names.get(i) + ", zone " + k + ": " + excess + " vs " + radiative);
+                if (excess > 0) {
+                    s.add(d.value(DiagnosisColumn.RADIUS, k) / radius, excess);
+                }
             }
             data.addSeries(s);
         }

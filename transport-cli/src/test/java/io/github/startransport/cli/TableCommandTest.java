@@ -70,7 +70,7 @@ class TableCommandTest {
     void diagnoseReadsATableBuiltByTheTool(@TempDir Path dir) {
         Path file = dir.resolve("k.csv");
         assertEquals(0, Runs.run("table", "build", "--out", file.toString(), "--hydrogen", "0.6,0.7,0.8",
-                "--metals", "0.01,0.02,0.03", "--log-t", "3.9:7.3:69", "--log-r", "-7:1:33").code());
+                "--metals", "0.01,0.02,0.03", "--log-t", "3.8:7.3:71", "--log-r", "-7:1:33").code());
         Runs r = Runs.run("diagnose", "--demo", "--opacity-table", file.toString(), "--out",
                 dir.resolve("out").toString());
         assertEquals(0, r.code(), r.toString());
@@ -110,5 +110,55 @@ class TableCommandTest {
         int expectedLine = 2 + (n - innermostCool);
         assertTrue(r.err().contains("surface-first.csv:" + expectedLine + ":"), r.err() + " expected line " + expectedLine);
         assertFalse(Files.exists(out));
+    }
+    @Test
+    void aGridBeyondTheLimitIsRefusedUpFrontAndTheExistingFileKept(@TempDir Path dir) throws IOException {
+        // the case: 2300 x 2200 nodes for 9 compositions into an existing file
+        Path file = Files.writeString(dir.resolve("existing.csv"), "precious\n");
+        Runs r = Runs.run("table", "build", "--out", file.toString(), "--hydrogen", "0,0.35,0.7", "--metals",
+                "0.01,0.02,0.03", "--log-t", "3:8:2300", "--log-r", "-9:1:2200");
+        assertEquals(1, r.code(), r.toString());
+        assertTrue(r.err().contains("45,540,000") && r.err().contains("at most 4,000,000"), r.err());
+        assertFalse(r.err().contains("Exception"), r.err());
+        assertEquals("precious\n", Files.readString(file));
+        assertEquals(List.of("existing.csv"), OutputFolderTest.names(dir));
+    }
+
+    @Test
+    void aBuildThatFailsLeavesTheExistingFileAsItWasAndNoTemporaryFile(@TempDir Path dir) throws IOException {
+        Path small = dir.resolve("small.csv");
+        assertEquals(0, Runs.run("table", "build", "--out", small.toString(), "--hydrogen", "0.7", "--metals", "0.02",
+                "--log-t", "4:5:3", "--log-r", "-3:-2:3").code());
+        Path file = Files.writeString(dir.resolve("existing.csv"), "precious\n");
+        // a table model that refuses every node of a grid outside its own: no row at all can be written
+        Runs r = Runs.run("table", "build", "--out", file.toString(), "--opacity", "table", "--model-options",
+                "file=" + small + ",out-of-range=refuse", "--hydrogen", "0.7", "--metals", "0.02", "--log-t", "7:8:3",
+                "--log-r", "0:1:3");
+        assertEquals(1, r.code(), r.toString());
+        assertEquals("precious\n", Files.readString(file));
+        assertEquals(List.of("existing.csv", "small.csv"), OutputFolderTest.names(dir));
+        // a build that succeeds replaces it whole
+        Runs ok = Runs.run("table", "build", "--out", file.toString(), "--hydrogen", "0.7", "--metals", "0.02",
+                "--log-t", "4:5:3", "--log-r", "-3:-2:3");
+        assertEquals(0, ok.code(), ok.toString());
+        assertEquals(Files.readString(small), Files.readString(file));
+        assertEquals(List.of("existing.csv", "small.csv"), OutputFolderTest.names(dir));
+    }
+
+    @Test
+    void checkNamesTheRowThatIsOffTheGrid(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("t.csv");
+        StringBuilder b = new StringBuilder("X,Z,log_T,log_R,log_kappa\n");
+        for (int i = 0; i < 5; i++) {
+            for (int j = 0; j < 5; j++) {
+                String logR = i == 3 && j == 2 ? "-2.000000000001" : String.valueOf(-4.0 + j);
+                b.append("0.7,0.02,").append(4.0 + 0.5 * i).append(',').append(logR).append(",1.0\n");
+            }
+        }
+        Files.writeString(file, b.toString());
+        Runs r = Runs.run("table", "check", file.toString());
+        assertEquals(1, r.code(), r.toString());
+        // header on line 1, row (i, j) on line 2 + 5 i + j: the odd row is line 19, log_R from column 14
+        assertTrue(r.err().contains("t.csv:19:14:") && r.err().contains("off the grid"), r.err());
     }
 }

@@ -18,6 +18,19 @@ public interface ConvectionModel {
     Criterion criterion();
 
     /**
+     * The same model with another mixing-length parameter and every other setting kept; what an
+     * alpha calibration (for instance of an envelope, {@link EnvelopeIntegrator}) varies.
+     *
+     * @param alpha mixing-length parameter l / H_P (dimensionless), &gt; 0
+     * @return the model with that alpha (immutable, thread-safe)
+     * @throws InvalidInputException         when alpha is not finite and &gt; 0
+     * @throws UnsupportedOperationException when the model has no mixing-length parameter
+     */
+    default ConvectionModel withAlpha(double alpha) {
+        throw new UnsupportedOperationException(getClass().getName() + " cannot change its mixing-length parameter");
+    }
+
+    /**
      * Solves one zone. A zone that is stable under {@link #criterion()} gets nabla = nabla_rad,
      * zero convective velocity and flux, and the diffusion coefficient of its regime
      * (semiconvective, thermohaline, or zero).

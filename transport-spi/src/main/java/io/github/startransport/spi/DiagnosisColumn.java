@@ -42,6 +42,17 @@ public enum DiagnosisColumn {
     NABLA_LEDOUX("nabla_ledoux", "1"),
     /** Actual gradient from the convection model. */
     NABLA("nabla", "1"),
+    /**
+     * The profile's own structure gradient d ln T / d ln P, from its T and P columns (three-point
+     * derivative in ln P, centred at interior zones, one-sided at the two ends); NaN where the pressure
+     * does not decrease strictly outwards (the diagnosis warns).
+     */
+    NABLA_MODEL("nabla_model", "1"),
+    /**
+     * |nabla_model - nabla| over nabla_ad in convective zones, over |nabla_rad| elsewhere (where nabla =
+     * nabla_rad; not below 0.01 nabla_ad): above 0.1 the model and the transport physics disagree.
+     */
+    NABLA_MISMATCH("nabla_mismatch", "1"),
     /** Gradient inside convective elements. */
     NABLA_ELEMENT("nabla_e", "1"),
     /** Convective velocity (cm s^-1). */
@@ -50,6 +61,16 @@ public enum DiagnosisColumn {
     CONVECTIVE_FRACTION("flux_conv_frac", "1"),
     /** Mixing diffusion coefficient (cm^2 s^-1): the regime's own, or the overshoot coefficient where that is larger. */
     DIFFUSION("D_mix_cm2_s", "cm^2 s^-1"),
+    /** Gamma_1 in use: the profile's, or the thermodynamics model's at the zone's rho and T. */
+    GAMMA1("Gamma1", "1"),
+    /** phi in use: the profile's, or the thermodynamics model's. */
+    PHI("phi", "1"),
+    /** Adiabatic sound speed c_s = sqrt(Gamma_1 P / rho) with the profile's P (cm s^-1). */
+    SOUND_SPEED("c_s_cm_s", "cm s^-1"),
+    /** Buoyancy frequency squared N^2 = (g^2 rho / P) delta (nabla_L - nabla), the actual nabla (rad^2 s^-2). */
+    BUOYANCY_SQUARED("N2_rad2_s2", "rad^2 s^-2"),
+    /** Lamb frequency of degree l = 1, S_1 = sqrt(2) c_s / r (rad s^-1). */
+    LAMB_L1("S1_rad_s", "rad s^-1"),
     /** Overshoot mixing coefficient beyond the edges of convective regions (cm^2 s^-1); 0 without overshoot. */
     OVERSHOOT_DIFFUSION("D_overshoot_cm2_s", "cm^2 s^-1");
 

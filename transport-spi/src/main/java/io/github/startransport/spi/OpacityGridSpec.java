@@ -75,6 +75,11 @@ public record OpacityGridSpec(double[] hydrogen, double[] metals, double[] logT,
         return logR.clone();
     }
 
+    /** @return the number of nodes, every X, Z, log T, log R combination (a {@code long}: it can pass 2^31) */
+    public long nodes() {
+        return (long) hydrogen.length * metals.length * logT.length * logR.length;
+    }
+
     /**
      * Evenly spaced nodes, computed as lo + k (hi - lo) / (n - 1) so that end points are exact.
      *

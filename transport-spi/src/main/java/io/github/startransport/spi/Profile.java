@@ -158,6 +158,11 @@ public final class Profile {
         return v.clone();
     }
 
+    /** @return the column's own array (not a copy), or {@code null}; for {@link io.github.startransport.spi.sharing.ColumnSharing} */
+    double[] shared(ProfileColumn column) {
+        return columns.get(column);
+    }
+
     /**
      * @param column a column the profile holds
      * @param zone   zone index, centre = 0

@@ -3,6 +3,7 @@ package io.github.startransport.spi;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * The diagnosis of one profile: per-zone columns (centre to surface), regimes, regions,
@@ -17,6 +18,7 @@ public final class ProfileDiagnosis {
     private final List<Region> regions;
     private final Timescales timescales;
     private final List<String> warnings;
+    private final SeismicSummary seismic;
 
     /**
      * @param source     where the profile came from
@@ -30,6 +32,18 @@ public final class ProfileDiagnosis {
      */
     public ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
                             Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings) {
+        this(source, criterion, alpha, columns, regimes, regions, timescales, warnings, true);
+    }
+
+    /**
+     * @param copy whether to copy the arrays; {@code false} only through
+     *             {@link io.github.startransport.spi.sharing.ColumnSharing}, whose caller hands
+     *             the arrays over (they are arrays of an immutable {@link Profile}, or new ones
+     *             nobody else keeps)
+     */
+    ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
+                     Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings,
+                     boolean copy) {
         this.source = source;
         this.criterion = criterion;
         this.alpha = alpha;
@@ -39,12 +53,57 @@ public final class ProfileDiagnosis {
             if (v == null || v.length != regimes.length) {
                 throw new IllegalArgumentException("column " + c.header() + " missing or of the wrong length");
             }
-            this.columns.put(c, v.clone());
+            this.columns.put(c, copy ? v.clone() : v);
         }
-        this.regimes = regimes.clone();
+        this.regimes = copy ? regimes.clone() : regimes;
         this.regions = List.copyOf(regions);
         this.timescales = timescales;
         this.warnings = List.copyOf(warnings);
+        this.seismic = null;
+    }
+
+    /**
+     * @param source     where the profile came from
+     * @param criterion  criterion the regimes were decided by
+     * @param alpha      mixing-length parameter used
+     * @param columns    every {@link DiagnosisColumn}, each as long as {@code regimes}
+     * @param regimes    regime per zone
+     * @param regions    non-radiative regions, centre to surface
+     * @param timescales whole-star timescales
+     * @param warnings   what the diagnosis had to assume or could not trust, one sentence each
+     * @param seismic    whole-model seismic integrals, or {@code null} when not computed
+     */
+    public ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
+                            Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings,
+                            SeismicSummary seismic) {
+        this(new ProfileDiagnosis(source, criterion, alpha, columns, regimes, regions, timescales, warnings, true),
+                seismic);
+    }
+
+    /** The same diagnosis (its arrays shared: they are never handed out) with the seismic integrals. */
+    private ProfileDiagnosis(ProfileDiagnosis d, SeismicSummary seismic) {
+        this.source = d.source;
+        this.criterion = d.criterion;
+        this.alpha = d.alpha;
+        this.columns = d.columns;
+        this.regimes = d.regimes;
+        this.regions = d.regions;
+        this.timescales = d.timescales;
+        this.warnings = d.warnings;
+        this.seismic = seismic;
+    }
+
+    /**
+     * @param seismic whole-model seismic integrals of this diagnosis
+     * @return this diagnosis with them (nothing copied: the columns are never handed out)
+     */
+    public ProfileDiagnosis withSeismic(SeismicSummary seismic) {
+        return new ProfileDiagnosis(this, seismic);
+    }
+
+    /** @return the whole-model seismic integrals, when the diagnoser computed them */
+    public Optional<SeismicSummary> seismic() {
+        return Optional.ofNullable(seismic);
     }
 
     /** @return where the profile came from */
@@ -84,6 +143,14 @@ public final class ProfileDiagnosis {
         return columns.get(column)[zone];
     }
 
+    /**
+     * @param zone zone index, centre = 0
+     * @return the regime of that zone
+     */
+    public Regime regime(int zone) {
+        return regimes[zone];
+    }
+
     /** @return a copy of the regime of every zone */
     public Regime[] regimes() {
         return regimes.clone();
@@ -102,6 +169,30 @@ public final class ProfileDiagnosis {
     /** @return warnings, one sentence each */
     public List<String> warnings() {
         return warnings;
+    }
+
+    /**
+     * @return the largest {@link DiagnosisColumn#NABLA_MISMATCH} over all zones, NaN when no zone has one:
+     *         above 0.1 the model's own gradient and the transport physics disagree somewhere
+     */
+    public double maxNablaMismatch() {
+        return maxNablaMismatch(0, size() - 1);
+    }
+
+    /**
+     * @param firstZone first zone (centre = 0), e.g. {@link Region#firstZone()}
+     * @param lastZone  last zone, inclusive
+     * @return the largest {@link DiagnosisColumn#NABLA_MISMATCH} over those zones, NaN when none has one
+     */
+    public double maxNablaMismatch(int firstZone, int lastZone) {
+        double[] m = columns.get(DiagnosisColumn.NABLA_MISMATCH);
+        double max = Double.NaN;
+        for (int k = firstZone; k <= lastZone; k++) {
+            if (!Double.isNaN(m[k]) && !(m[k] <= max)) {
+                max = m[k];
+            }
+        }
+        return max;
     }
 
     /** @return total mass M (g) */

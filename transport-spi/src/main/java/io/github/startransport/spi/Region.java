@@ -23,8 +23,12 @@ import java.util.OptionalDouble;
  * @param topSchwarzschild        top radius by the Schwarzschild margin, where one lies next to the top (cm)
  * @param bottomLedoux            bottom radius by the Ledoux margin, where one lies next to the bottom (cm)
  * @param topLedoux               top radius by the Ledoux margin, where one lies next to the top (cm)
- * @param turnoverGlobal          convective regions: integral of dr / v_conv across the region (s)
- * @param turnoverLocal           convective regions: l / v_conv half a pressure scale height above the bottom (s)
+ * @param turnoverGlobal          convective regions: integral of dr / v_conv across the region; for a region
+ *                                that reaches the centre (a core, where that integral diverges) its radius over
+ *                                its mass-weighted mean v_conv (s)
+ * @param turnoverLocal           convective regions: l / v_conv half a mixing length inside the region from its
+ *                                boundary with the radiative interior: above the bottom, or below the top of a
+ *                                core (s)
  * @param maxVelocity             convective regions: largest v_conv in the region (cm s^-1)
  * @param firstZone               index of the innermost zone in the region
  * @param lastZone                index of the outermost zone in the region

@@ -15,8 +15,12 @@ import java.util.List;
 /**
  * The built-in demonstration star "Corvina": an invented main-sequence star of 1.6 solar masses,
  * built as an {@link EddingtonStandardModel} with a CNO-like energy generation rate
- * epsilon ~ rho T^16, so that it shows a convective core; its cool, opaque outer layers give a
- * convective envelope. Demo data, not a calibrated model of any real star.
+ * epsilon ~ rho T^16, so that it shows a convective core. By default its outer quarter is an
+ * envelope integrated inward from a grey atmosphere with the library's own physics
+ * ({@link DemoSurface}), so the outermost zone is the photosphere at the T_eff of L and R and the
+ * surface convection zone comes from the envelope physics; with {@code surface=polytrope} it is the
+ * bare polytrope cut where T = {@value #SURFACE_TEMPERATURE} K. Demo data, not a calibrated model
+ * of any real star.
  */
 public final class DemoStar implements StarModel {
     /** Name to ask for this model by. */
@@ -34,7 +38,7 @@ public final class DemoStar implements StarModel {
     public static final double METALS = 0.02;
     /** Temperature exponent of the energy generation rate (CNO cycle near 2e7 K: ~16, from memory). */
     public static final double NU = 16.0;
-    /** Temperature of the outermost zone (K). */
+    /** Temperature of the outermost zone of the bare polytrope, {@code surface=polytrope} (K). */
     public static final double SURFACE_TEMPERATURE = 1.0e4;
 
     private static final int DEFAULT_ZONES = 800;
@@ -42,16 +46,36 @@ public final class DemoStar implements StarModel {
     /** Describes this model and its options. */
     public static final ModelInfo INFO = new ModelInfo(ModelFamily.STAR, NAME,
             "demo star 'Corvina' (invented): 1.6 M_sun, 1.7 R_sun, 6 L_sun, X = 0.70, Z = 0.02, Eddington standard "
-                    + "model (n = 3 polytrope, constant beta) with epsilon ~ rho T^16",
+                    + "model (n = 3 polytrope, constant beta) with epsilon ~ rho T^16, joined at 0.75-0.85 R to an "
+                    + "envelope integrated from a grey atmosphere",
             List.of(new OptionInfo("zones", String.valueOf(DEFAULT_ZONES), "1",
-                    "number of zones, half uniform in radius, half uniform in log T; 10 to 100000")));
+                            "about this many zones; the polytrope's half uniform in radius, half uniform in log T,"
+                                    + " the envelope's uniform in ln P; 10 to 100000"),
+                    new OptionInfo("surface", "envelope", "",
+                            "envelope: an envelope integrated from a grey Eddington atmosphere with the library's"
+                                    + " physics (T_eff of L and R at the outermost zone); polytrope: the bare n = 3"
+                                    + " polytrope cut at T = 1e4 K")));
 
     private final int zones;
+    private final boolean envelope;
 
-    /** @param zones number of zones, 10 to 100000 */
+    /**
+     * The bare polytrope (no integrated envelope), as the resampling tests of the diagnosis use it.
+     *
+     * @param zones number of zones, 10 to 100000
+     */
     public DemoStar(int zones) {
+        this(zones, false);
+    }
+
+    /**
+     * @param zones    about this many zones, 10 to 100000
+     * @param envelope whether the outer layers are an integrated envelope (the provider's default)
+     */
+    public DemoStar(int zones, boolean envelope) {
         Checks.closedInterval("zones", zones, 10, 100_000, "1", -1);
         this.zones = zones;
+        this.envelope = envelope;
     }
 
     /**
@@ -64,7 +88,11 @@ public final class DemoStar implements StarModel {
         if (z != Math.rint(z) || z < 10 || z > 100_000) {
             throw new InvalidOptionException(NAME, "zones", String.valueOf(z), "a whole number from 10 to 100000");
         }
-        return new DemoStar((int) z);
+        String surface = options.getString(NAME, "surface", "envelope");
+        if (!surface.equals("envelope") && !surface.equals("polytrope")) {
+            throw new InvalidOptionException(NAME, "surface", surface, "envelope or polytrope");
+        }
+        return new DemoStar((int) z, surface.equals("envelope"));
     }
 
     /** @return the underlying standard model */
@@ -80,11 +108,14 @@ public final class DemoStar implements StarModel {
 
     @Override
     public Profile profile() {
+        if (envelope) {
+            return DemoSurface.profile(standardModel(), "demo star Corvina", zones);
+        }
         return standardModel().profile("demo star Corvina", zones, SURFACE_TEMPERATURE);
     }
 
     @Override
     public String toString() {
-        return NAME + "(zones=" + zones + ")";
+        return NAME + "(zones=" + zones + ", surface=" + (envelope ? "envelope" : "polytrope") + ")";
     }
 }

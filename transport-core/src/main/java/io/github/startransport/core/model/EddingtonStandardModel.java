@@ -87,6 +87,48 @@ public final class EddingtonStandardModel {
         }, 1e-9, 1.0 - 1e-15);
     }
 
+    /** @return M (g) */
+    public double mass() {
+        return mass;
+    }
+
+    /** @return R, where theta = 0 (cm) */
+    public double radius() {
+        return radius;
+    }
+
+    /** @return the surface luminosity (erg s^-1) */
+    public double luminosity() {
+        return luminosity;
+    }
+
+    /** @return X */
+    public double hydrogen() {
+        return hydrogen;
+    }
+
+    /** @return Z */
+    public double metals() {
+        return metals;
+    }
+
+    /**
+     * The model's state at a radius.
+     *
+     * @param r   radius (cm), in (0, R)
+     * @param out receives T (K), rho (g cm^-3), P (dyn cm^-2), m (g), L (erg s^-1) in that order
+     */
+    public void state(double r, double[] out) {
+        double[] s = new double[3];
+        solution.sample(r / radius * solution.firstZero(), s);
+        double theta = s[0];
+        out[0] = centralTemperature * theta;
+        out[1] = centralDensity * theta * theta * theta;
+        out[2] = centralPressure * Math.pow(theta, 4);
+        out[3] = mass * s[1] / solution.massConstant();
+        out[4] = luminosity * s[2] / solution.lambdaTotal();
+    }
+
     /** @return beta = P_gas / P */
     public double beta() {
         return beta;

@@ -195,59 +195,77 @@ public final class OpacityTableReader {
 
     private static OpacityGrid buildGrid(Key key, Table table, String source, List<double[]> axes) {
         String name = "table X=" + key.x + ", Z=" + key.z;
-        for (Row row : table.rows) {
-            for (Hole h : table.holes) {
-                if (h.covers(row.t, row.r)) {
-                    throw new DataFormatException(source, row.line, row.colT,
-                            "point log_T=" + row.t + ", log_R=" + row.r + " of " + name
-                                    + " lies inside the hole declared on line " + h.line);
-                }
-            }
-        }
         TreeSet<Double> ts = new TreeSet<>();
         TreeSet<Double> rs = new TreeSet<>();
-        Map<Double, Row> firstT = new HashMap<>();
         for (Row row : table.rows) {
             ts.add(row.t);
             rs.add(row.r);
-            firstT.putIfAbsent(row.t, row);
+        }
+        double[] logT = ts.stream().mapToDouble(Double::doubleValue).toArray();
+        double[] logR = rs.stream().mapToDouble(Double::doubleValue).toArray();
+        int nt = logT.length;
+        int nr = logR.length;
+        // how many declared holes cover each node: a 2-D difference array over the axes, summed once,
+        // so the cost is O(rows + holes + nodes) however many holes there are
+        int[] cover = new int[(nt + 1) * (nr + 1)];
+        for (Hole h : table.holes) {
+            int i0 = firstAtLeast(logT, h.tLo);
+            int i1 = firstAtLeast(logT, Math.nextUp(h.tHi)) - 1;
+            int j0 = firstAtLeast(logR, h.rLo);
+            int j1 = firstAtLeast(logR, Math.nextUp(h.rHi)) - 1;
+            if (i0 <= i1 && j0 <= j1) {
+                cover[i0 * (nr + 1) + j0]++;
+                cover[i0 * (nr + 1) + j1 + 1]--;
+                cover[(i1 + 1) * (nr + 1) + j0]--;
+                cover[(i1 + 1) * (nr + 1) + j1 + 1]++;
+            }
+        }
+        for (int i = 0; i <= nt; i++) {
+            for (int j = 0; j <= nr; j++) {
+                int at = i * (nr + 1) + j;
+                cover[at] += (i > 0 ? cover[at - nr - 1] : 0) + (j > 0 ? cover[at - 1] : 0)
+                        - (i > 0 && j > 0 ? cover[at - nr - 2] : 0);
+            }
+        }
+        int[] rowsAtT = new int[nt];
+        int[] rowsAtR = new int[nr];
+        for (Row row : table.rows) {
+            int i = Arrays.binarySearch(logT, row.t);
+            int j = Arrays.binarySearch(logR, row.r);
+            if (cover[i * (nr + 1) + j] > 0) {
+                Hole h = table.holes.stream().filter(o -> o.covers(row.t, row.r)).findFirst().orElseThrow();
+                throw new DataFormatException(source, row.line, row.colT,
+                        "point log_T=" + row.t + ", log_R=" + row.r + " of " + name
+                                + " lies inside the hole declared on line " + h.line);
+            }
+            rowsAtT[i]++;
+            rowsAtR[j]++;
         }
         Row first = table.rows.get(0);
-        if (ts.size() < 2) {
+        if (nt < 2) {
             throw new DataFormatException(source, first.line, first.colT,
                     name + " has a single log_T value (" + ts.first() + "); an axis needs at least 2 values");
         }
-        if (rs.size() < 2) {
+        if (nr < 2) {
             throw new DataFormatException(source, first.line, first.colR,
                     name + " has a single log_R value (" + rs.first() + "); an axis needs at least 2 values");
         }
-        double[] logT = share(ts.stream().mapToDouble(Double::doubleValue).toArray(), axes);
-        double[] logR = share(rs.stream().mapToDouble(Double::doubleValue).toArray(), axes);
-        double[][] v = new double[logT.length][logR.length];
+        double[][] v = new double[nt][nr];
         for (double[] row : v) {
             Arrays.fill(row, Double.NaN);
         }
         for (Row row : table.rows) {
             v[Arrays.binarySearch(logT, row.t)][Arrays.binarySearch(logR, row.r)] = row.v;
         }
-        for (int i = 0; i < logT.length; i++) {
-            for (int j = 0; j < logR.length; j++) {
-                if (!Double.isNaN(v[i][j])) {
-                    continue;
-                }
-                boolean declared = false;
-                for (Hole h : table.holes) {
-                    declared |= h.covers(logT[i], logR[j]);
-                }
-                if (!declared) {
-                    Row at = firstT.get(logT[i]);
-                    throw new DataFormatException(source, at.line, at.colR,
-                            "grid of " + name + " is not rectangular: no row for log_T=" + logT[i] + ", log_R="
-                                    + logR[j] + "; add it, or declare it with '# " + ABSENT + " X=" + key.x + " Z="
-                                    + key.z + " log_T=" + logT[i] + " log_R=" + logR[j] + "'");
+        for (int i = 0; i < nt; i++) {
+            for (int j = 0; j < nr; j++) {
+                if (Double.isNaN(v[i][j]) && cover[i * (nr + 1) + j] == 0) {
+                    throw notRectangular(source, key, name, table, logT, logR, rowsAtT, rowsAtR, i, j);
                 }
             }
         }
+        logT = share(logT, axes);
+        logR = share(logR, axes);
         OpacityGrid grid = new OpacityGrid(key.x, key.z, logT, logR, v);
         if (!grid.complete()) {
             boolean any = false;
@@ -262,6 +280,74 @@ public final class OpacityTableReader {
             }
         }
         return grid;
+    }
+
+
+    /** Two axis values closer than this fraction of the axis's mean spacing are taken as one value written twice. */
+    static final double OFF_AXIS = 1e-6;
+
+    /** @return the first index whose value is &gt;= v (the length when none is) */
+    private static int firstAtLeast(double[] axis, double v) {
+        int lo = 0;
+        int hi = axis.length;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (axis[mid] < v) {
+                lo = mid + 1;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+
+    /**
+     * The error for an undeclared missing node (i, j). When an axis holds two values closer than
+     * {@link #OFF_AXIS} of its spacing, the rarer one (on a tie, the longer decimal) is a row written
+     * slightly off the grid: the
+     * error points at that row. Otherwise it names the missing node, points at a row next to it,
+     * and shows the {@code # absent:} line that would declare it.
+     */
+    private static DataFormatException notRectangular(String source, Key key, String name, Table table,
+                                                      double[] logT, double[] logR, int[] rowsAtT, int[] rowsAtR,
+                                                      int i, int j) {
+        for (int axis = 0; axis < 2; axis++) {
+            double[] a = axis == 0 ? logT : logR;
+            int[] count = axis == 0 ? rowsAtT : rowsAtR;
+            double spacing = (a[a.length - 1] - a[0]) / (a.length - 1);
+            for (int k = 0; k + 1 < a.length; k++) {
+                if (a[k + 1] - a[k] < OFF_AXIS * spacing) {
+                    // the value fewer rows use is the odd one; on a tie, the one with more digits
+                    int odd = count[k] != count[k + 1] ? (count[k] < count[k + 1] ? k : k + 1)
+                            : Double.toString(a[k]).length() >= Double.toString(a[k + 1]).length() ? k : k + 1;
+                    int other = odd == k ? k + 1 : k;
+                    String field = axis == 0 ? "log_T" : "log_R";
+                    for (Row row : table.rows) {
+                        if ((axis == 0 ? row.t : row.r) == a[odd]) {
+                            return new DataFormatException(source, row.line, axis == 0 ? row.colT : row.colR,
+                                    field + "=" + a[odd] + " is off the grid of " + name + ": " + count[other]
+                                            + " other rows have " + field + "=" + a[other] + " (a difference of "
+                                            + (float) Math.abs(a[odd] - a[other]) + "), and " + count[odd]
+                                            + (count[odd] == 1 ? " row has" : " rows have") + " this value; write "
+                                            + field + "=" + a[other] + " here");
+                        }
+                    }
+                }
+            }
+        }
+        Row near = null;
+        for (Row row : table.rows) {
+            if (row.t == logT[i] && (near == null || Math.abs(row.r - logR[j]) < Math.abs(near.r - logR[j]))) {
+                near = row;
+            }
+        }
+        if (near == null) {
+            near = table.rows.get(0);
+        }
+        return new DataFormatException(source, near.line, near.colR,
+                "grid of " + name + " is not rectangular: no row for log_T=" + logT[i] + ", log_R=" + logR[j]
+                        + " (this row is its neighbour); add it, or declare it with '# " + ABSENT + " X=" + key.x
+                        + " Z=" + key.z + " log_T=" + logT[i] + " log_R=" + logR[j] + "'");
     }
 
     private static double[] share(double[] axis, List<double[]> axes) {

@@ -15,12 +15,12 @@ package io.github.startransport.core.profile;
  * value, which differs from the edge's by the margin's change over up to one zone. For a smooth profile the
  * edge was located by the straight line through the last convective zone and the first stable one, so the
  * extrapolation from the other side leaves only the error of straight lines over about one zone, which
- * vanishes as the zones get finer: on the demo star the core's top edge gives -0.017, -0.0037, -1.4e-4 and
- * -2.7e-5 at 100, 400, 800 and 3200 zones, and the envelope's bottom edge -1.9e-3 to -1.0e-5. A jump at the
+ * vanishes as the zones get finer: on the demo star the core's top edge gives -0.020, -7.7e-4, -9.1e-5 and
+ * -3.2e-5 at 100, 200, 800 and 3200 zones, and the envelope's bottom edge -2.4e-3 to -8.9e-6. A jump at the
  * edge stays whatever the resolution.
  *
  * <p>The diagnosis warns where |margin| exceeds {@link #MISPLACED} = 0.02. Why that value: it is above what
- * a smooth profile leaves at any resolution a host uses (the figures above, from 100 zones upwards), and a
+ * a smooth profile leaves at the resolutions hosts use (the figures above, from 200 zones upwards), and a
  * composition step at the edge that changes the opacity by a few per cent (kappa of an ionised mixture is
  * proportional to 1 + X for electron scattering and Kramers' laws) already leaves more on the convective
  * side. It is a threshold of our own choosing (no source). Pure static helpers.

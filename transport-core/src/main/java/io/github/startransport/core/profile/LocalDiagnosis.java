@@ -2,7 +2,10 @@ package io.github.startransport.core.profile;
 
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.convection.OvershootMixing;
+import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.gradient.LedouxGradient;
+import io.github.startransport.core.seismic.AsymptoticIntegrals;
+import io.github.startransport.core.seismic.LocalFrequencies;
 import io.github.startransport.core.gradient.StabilityClassifier;
 import io.github.startransport.core.timescale.Timescale;
 import io.github.startransport.spi.ConvectionModel;
@@ -23,9 +26,11 @@ import io.github.startransport.spi.ProfileDiagnoser;
 import io.github.startransport.spi.ProfileDiagnosis;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Region;
+import io.github.startransport.spi.SeismicSummary;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.Timescales;
 import io.github.startransport.spi.ZoneState;
+import io.github.startransport.spi.sharing.ColumnSharing;
 
 import java.util.ArrayList;
 import java.util.EnumMap;
@@ -37,10 +42,16 @@ import java.util.OptionalDouble;
  * Zone-by-zone diagnosis of a whole profile with local models: per-zone gradients and
  * convection, regions with interpolated boundaries, and timescales.
  *
- * <p>Missing optional columns are filled: kappa from the setup's opacity model; nabla_ad, c_P and
- * delta from its thermodynamics model (a warning says so, and counts zones cooler than
- * {@value #PARTIAL_IONISATION_T} K where a fully ionised fallback is wrong); nabla_mu from the
- * composition ({@link CompositionGradient}); phi = 1 (ideal gas).
+ * <p>Missing optional columns are filled: kappa from the setup's opacity model; nabla_ad, c_P,
+ * delta, Gamma_1 and phi from its thermodynamics model, called with the profile's rho and T (a warning
+ * says so, and counts the zones where that model leaves its validity: degenerate electrons, pressure
+ * ionisation, a pressure more than 1 % from the profile's; with the fully ionised fallback, zones
+ * cooler than {@value #PARTIAL_IONISATION_T} K); nabla_mu from the composition
+ * ({@link CompositionGradient}). Dimensional quantities use the profile's own P: H_P,
+ * c_s = sqrt(Gamma_1 P / rho), N^2 = (g^2 rho / P) delta (nabla_L - nabla) with the actual nabla, and
+ * S_1 = sqrt(2) c_s / r ({@link LocalFrequencies}); the whole-model integrals (acoustic radius, large
+ * separation, l = 1 period spacing, acoustic depths of convective edges) follow from them
+ * ({@link AsymptoticIntegrals}).
  *
  * <p>Region boundaries lie where the quantity that separates the two regimes changes sign, found
  * by {@link BoundaryFinder} between the two zones: the chosen criterion's convective margin
@@ -49,7 +60,8 @@ import java.util.OptionalDouble;
  * at the edge of a thermohaline region. The Schwarzschild and Ledoux boundaries are both
  * reported where a margin of each kind changes sign next to the edge.
  *
- * <p>Immutable and thread-safe; each call allocates its own working arrays.
+ * <p>Immutable and thread-safe; each call allocates its own working arrays. The diagnosis shares
+ * the profile's columns (both are immutable) rather than copying them.
  */
 public final class LocalDiagnosis implements ProfileDiagnoser {
     /** Name to ask for this model by. */
@@ -149,14 +161,14 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         if (p.wasReversed()) {
             warnings.add("the profile was ordered surface to centre and has been reversed");
         }
-        double[] r = p.column(ProfileColumn.RADIUS);
-        double[] m = p.column(ProfileColumn.MASS);
-        double[] t = p.column(ProfileColumn.TEMPERATURE);
-        double[] rho = p.column(ProfileColumn.DENSITY);
-        double[] pres = p.column(ProfileColumn.PRESSURE);
-        double[] lum = p.column(ProfileColumn.LUMINOSITY);
-        double[] x = p.column(ProfileColumn.HYDROGEN);
-        double[] z = p.column(ProfileColumn.METALS);
+        double[] r = ColumnSharing.read(p, ProfileColumn.RADIUS);
+        double[] m = ColumnSharing.read(p, ProfileColumn.MASS);
+        double[] t = ColumnSharing.read(p, ProfileColumn.TEMPERATURE);
+        double[] rho = ColumnSharing.read(p, ProfileColumn.DENSITY);
+        double[] pres = ColumnSharing.read(p, ProfileColumn.PRESSURE);
+        double[] lum = ColumnSharing.read(p, ProfileColumn.LUMINOSITY);
+        double[] x = ColumnSharing.read(p, ProfileColumn.HYDROGEN);
+        double[] z = ColumnSharing.read(p, ProfileColumn.METALS);
 
         boolean hasKappa = p.has(ProfileColumn.OPACITY);
         double[] kappa = columnOr(p, ProfileColumn.OPACITY, 0.0);
@@ -164,10 +176,14 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] nablaAd = columnOr(p, ProfileColumn.NABLA_AD, 0.0);
         double[] cp = columnOr(p, ProfileColumn.CP, 0.0);
         double[] delta = columnOr(p, ProfileColumn.DELTA, 0.0);
-        double[] phi = columnOr(p, ProfileColumn.PHI, 1.0); // ideal gas
+        boolean hasPhi = p.has(ProfileColumn.PHI);
+        double[] phi = columnOr(p, ProfileColumn.PHI, 1.0); // ideal gas, unless the thermodynamics model says
+        boolean hasGamma1 = p.has(ProfileColumn.GAMMA1);
+        double[] gamma1 = columnOr(p, ProfileColumn.GAMMA1, 0.0);
+        boolean useThermo = !hasThermo || !hasGamma1 || !hasPhi;
         double[] nablaMu;
         if (p.has(ProfileColumn.NABLA_MU)) {
-            nablaMu = p.column(ProfileColumn.NABLA_MU);
+            nablaMu = ColumnSharing.read(p, ProfileColumn.NABLA_MU);
         } else {
             for (int k = 1; k < n; k++) {
                 if (!(pres[k] < pres[k - 1])) {
@@ -191,6 +207,10 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] v = computed(out, DiagnosisColumn.VELOCITY, n);
         double[] fconv = computed(out, DiagnosisColumn.CONVECTIVE_FRACTION, n);
         double[] dmix = computed(out, DiagnosisColumn.DIFFUSION, n);
+        double[] soundSpeed = computed(out, DiagnosisColumn.SOUND_SPEED, n);
+        double[] n2 = computed(out, DiagnosisColumn.BUOYANCY_SQUARED, n);
+        double[] lamb1 = computed(out, DiagnosisColumn.LAMB_L1, n);
+        ThermoChecks thermoChecks = new ThermoChecks();
         double[] ell = new double[n];
         double[] marginS = new double[n];
         double[] marginL = new double[n];
@@ -202,57 +222,109 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         OpacityResult opacity = new OpacityResult();
         ConvectionResult conv = new ConvectionResult();
         int cool = 0;
-        // a convection model whose length scale is the distance to the nearest edge needs the edges first:
-        // fill every zone's inputs, classify, locate the edges (EdgeDistances), then solve
+        // a convection model whose length scale is the distance to the nearest edge needs the edges first: a
+        // first pass fills every zone's inputs, EdgeDistances classifies them and locates the edges, and the
+        // second pass solves with the distances (one pass, filling and solving, for every other model)
+        final boolean deferred = convection.needsEdgeDistance();
         double[] edgeDistance = null;
-        if (convection.needsEdgeDistance()) {
+        for (int pass = deferred ? 0 : 1; pass <= 1; pass++) {
             for (int k = 0; k < n; k++) {
-                cool += fill(p, setup, k, hasThermo, hasKappa, t, rho, x, z, nablaAd, cp, delta, kappa, thermo, opacity);
+                zone.zone = zoneAsGiven(p, k);
+                zone.radius = r[k];
+                zone.mass = m[k];
+                zone.temperature = t[k];
+                zone.density = rho[k];
+                zone.pressure = pres[k];
+                zone.luminosity = lum[k];
+                zone.hydrogen = x[k];
+                zone.metals = z[k];
+                if (pass == 0 || !deferred) {
+                    if (useThermo) {
+                        setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone.zone, thermo);
+                        if (!hasThermo) {
+                            if (!p.has(ProfileColumn.NABLA_AD)) {
+                                nablaAd[k] = thermo.nablaAd;
+                            }
+                            if (!p.has(ProfileColumn.CP)) {
+                                cp[k] = thermo.cp;
+                            }
+                            if (!p.has(ProfileColumn.DELTA)) {
+                                delta[k] = thermo.delta;
+                            }
+                            if (t[k] < PARTIAL_IONISATION_T) {
+                                cool++;
+                            }
+                        }
+                        if (!hasGamma1) {
+                            gamma1[k] = thermo.gamma1;
+                        }
+                        if (!hasPhi) {
+                            phi[k] = thermo.phi;
+                        }
+                        thermoChecks.add(thermo, pres[k]);
+                    }
+                    if (!hasKappa) {
+                        setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone.zone, opacity);
+                        kappa[k] = opacity.kappa;
+                    }
+                }
+                if (pass == 0) {
+                    continue;
+                }
+                if (edgeDistance != null) {
+                    zone.edgeDistance = edgeDistance[k];
+                }
+                zone.opacity = kappa[k];
+                zone.nablaAd = nablaAd[k];
+                zone.cp = cp[k];
+                zone.delta = delta[k];
+                zone.phi = phi[k];
+                zone.nablaMu = nablaMu[k];
+                convection.solve(zone, conv);
+                g[k] = Codata2018.GRAVITATIONAL_CONSTANT * m[k] / (r[k] * r[k]);
+                hp[k] = pres[k] / (rho[k] * g[k]);
+                nablaRad[k] = conv.nablaRad;
+                nablaL[k] = LedouxGradient.value(nablaAd[k], phi[k], delta[k], nablaMu[k]);
+                nabla[k] = conv.nabla;
+                nablaE[k] = conv.nablaElement;
+                v[k] = conv.velocity;
+                fconv[k] = conv.convectiveFraction;
+                dmix[k] = conv.diffusion;
+                ell[k] = conv.mixingLength;
+                regimes[k] = conv.regime;
+                soundSpeed[k] = LocalFrequencies.soundSpeed(gamma1[k], pres[k], rho[k]);
+                n2[k] = LocalFrequencies.buoyancySquared(r[k], m[k], rho[k], pres[k], delta[k], nablaAd[k], phi[k],
+                        nablaMu[k], nabla[k]);
+                lamb1[k] = LocalFrequencies.lamb(1, soundSpeed[k], r[k]);
+                marginS[k] = nablaRad[k] - nablaAd[k];
+                marginL[k] = nablaRad[k] - nablaL[k];
+                marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
             }
-            edgeDistance = EdgeDistances.of(criterion, r, m, t, pres, lum, kappa, nablaAd, delta, phi, nablaMu);
-        }
-        for (int k = 0; k < n; k++) {
-            zone.zone = zoneAsGiven(p, k);
-            zone.radius = r[k];
-            zone.mass = m[k];
-            zone.temperature = t[k];
-            zone.density = rho[k];
-            zone.pressure = pres[k];
-            zone.luminosity = lum[k];
-            zone.hydrogen = x[k];
-            zone.metals = z[k];
-            if (edgeDistance == null) {
-                cool += fill(p, setup, k, hasThermo, hasKappa, t, rho, x, z, nablaAd, cp, delta, kappa, thermo, opacity);
-            } else {
-                zone.edgeDistance = edgeDistance[k];
+            if (pass == 0) {
+                edgeDistance = EdgeDistances.of(criterion, r, m, t, pres, lum, kappa, nablaAd, delta, phi, nablaMu);
             }
-            zone.opacity = kappa[k];
-            zone.nablaAd = nablaAd[k];
-            zone.cp = cp[k];
-            zone.delta = delta[k];
-            zone.phi = phi[k];
-            zone.nablaMu = nablaMu[k];
-            convection.solve(zone, conv);
-            g[k] = Codata2018.GRAVITATIONAL_CONSTANT * m[k] / (r[k] * r[k]);
-            hp[k] = pres[k] / (rho[k] * g[k]);
-            nablaRad[k] = conv.nablaRad;
-            nablaL[k] = LedouxGradient.value(nablaAd[k], phi[k], delta[k], nablaMu[k]);
-            nabla[k] = conv.nabla;
-            nablaE[k] = conv.nablaElement;
-            v[k] = conv.velocity;
-            fconv[k] = conv.convectiveFraction;
-            dmix[k] = conv.diffusion;
-            ell[k] = conv.mixingLength;
-            regimes[k] = conv.regime;
-            marginS[k] = nablaRad[k] - nablaAd[k];
-            marginL[k] = nablaRad[k] - nablaL[k];
-            marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
         }
         if (!hasThermo) {
+            boolean fullyIonised = IdealGasRadiation.NAME.equals(setup.thermodynamics().toString());
             warnings.add("nabla_ad, c_P and delta were computed by " + setup.thermodynamics()
-                    + " (fully ionised ideal gas plus radiation): a fallback, not the model's own equation of state"
-                    + (cool > 0 ? "; " + cool + " zones are cooler than 1e5 K, where partial ionisation makes it wrong"
-                    : ""));
+                    + (fullyIonised ? " (fully ionised ideal gas plus radiation)" : "")
+                    + ": a fallback, not the model's own equation of state"
+                    + (fullyIonised && cool > 0 ? "; " + cool + " zones are cooler than 1e5 K, where partial ionisation"
+                    + " makes it wrong" : ""));
+        }
+        if (useThermo) {
+            List<String> missing = new ArrayList<>();
+            if (!hasGamma1) {
+                missing.add("Gamma_1");
+            }
+            if (!hasPhi) {
+                missing.add("phi");
+            }
+            if (hasThermo && !missing.isEmpty()) {
+                warnings.add(String.join(" and ", missing) + " computed by " + setup.thermodynamics()
+                        + " at the profile's rho and T");
+            }
+            thermoChecks.warnings(setup.thermodynamics().toString(), warnings);
         }
         if (!hasKappa) {
             warnings.add("kappa was computed by the opacity model " + setup.opacity());
@@ -273,6 +345,15 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         out.put(DiagnosisColumn.DELTA, delta);
         out.put(DiagnosisColumn.NABLA_AD, nablaAd);
         out.put(DiagnosisColumn.NABLA_MU, nablaMu);
+        out.put(DiagnosisColumn.GAMMA1, gamma1);
+        out.put(DiagnosisColumn.PHI, phi);
+
+        // does the profile's own gradient agree with the physics? (see ModelConsistency)
+        double[] nablaModel = computed(out, DiagnosisColumn.NABLA_MODEL, n);
+        double[] mismatch = computed(out, DiagnosisColumn.NABLA_MISMATCH, n);
+        ModelConsistency.nablaModel(t, pres, nablaModel);
+        ModelConsistency.mismatch(nablaModel, nabla, nablaRad, nablaAd, regimes, mismatch);
+        warnings.addAll(ModelConsistency.warnings(mismatch, regimes, k -> zoneAsGiven(p, k)));
 
         List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, marginC, nablaMu);
         double[] dov = computed(out, DiagnosisColumn.OVERSHOOT_DIFFUSION, n);
@@ -281,42 +362,87 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 Timescale.photonDiffusion(r, kappa, rho),
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
                 Timescale.kelvinHelmholtz(m[n - 1], r[n - 1], lum[n - 1]));
-        return new ProfileDiagnosis(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings);
+        // the diagnosis shares the profile's columns and takes the computed ones: no copy of millions of zones
+        return ColumnSharing.adopt(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings)
+                .withSeismic(seismic(r, soundSpeed, n2, regions));
+    }
+
+    /** The asymptotic integrals of the whole model and the acoustic depths of each convective region's edges. */
+    private static SeismicSummary seismic(double[] r, double[] soundSpeed, double[] n2, List<Region> regions) {
+        double tau = AsymptoticIntegrals.acousticRadius(r, soundSpeed);
+        List<SeismicSummary.RegionDepths> depths = new ArrayList<>();
+        for (Region region : regions) {
+            if (region.regime() == Regime.CONVECTIVE) {
+                depths.add(new SeismicSummary.RegionDepths(region,
+                        AsymptoticIntegrals.acousticDepth(r, soundSpeed, region.bottomRadius()),
+                        AsymptoticIntegrals.acousticDepth(r, soundSpeed, region.topRadius())));
+            }
+        }
+        return new SeismicSummary(tau, AsymptoticIntegrals.largeSeparation(tau),
+                AsymptoticIntegrals.periodSpacing(1, AsymptoticIntegrals.buoyancyIntegral(r, n2)), depths);
     }
 
     /**
-     * Fills zone k's missing inputs: nabla_ad, c_P and delta from the thermodynamics model, kappa from the
-     * opacity model.
-     *
-     * @return 1 when the thermodynamics fallback was used in a zone cooler than {@value #PARTIAL_IONISATION_T} K
+     * Where the thermodynamics model leaves its validity or disagrees with the profile: zones with
+     * degenerate electrons (the first Fermi-Dirac correction to the electron pressure,
+     * n_e lambda^3 / 2^(7/2), above {@value #DEGENERACY_LIMIT}; Landau &amp; Lifshitz, Statistical Physics
+     * §56), zones where pressure ionisation decides the state of more than {@value #PRESSURE_IONISATION_LIMIT}
+     * of hydrogen, and the largest difference between the model's pressure at the profile's rho and T and
+     * the profile's own P.
      */
-    private static int fill(Profile p, DiagnosisSetup setup, int k, boolean hasThermo, boolean hasKappa, double[] t,
-                            double[] rho, double[] x, double[] z, double[] nablaAd, double[] cp, double[] delta,
-                            double[] kappa, ThermoResult thermo, OpacityResult opacity) {
-        int zone = zoneAsGiven(p, k);
-        int cool = 0;
-        if (!hasThermo) {
-            setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone, thermo);
-            if (!p.has(ProfileColumn.NABLA_AD)) {
-                nablaAd[k] = thermo.nablaAd;
+    private static final class ThermoChecks {
+        int degenerate;
+        int pressureIonised;
+        int mismatched;
+        double worstMismatch;
+
+        void add(ThermoResult thermo, double profilePressure) {
+            if (thermo.degeneracy / FERMI_CORRECTION > DEGENERACY_LIMIT) {
+                degenerate++;
             }
-            if (!p.has(ProfileColumn.CP)) {
-                cp[k] = thermo.cp;
+            if (thermo.pressureIonisation > PRESSURE_IONISATION_LIMIT) {
+                pressureIonised++;
             }
-            if (!p.has(ProfileColumn.DELTA)) {
-                delta[k] = thermo.delta;
+            double mismatch = Math.abs(thermo.pressure / profilePressure - 1.0);
+            if (mismatch > PRESSURE_MISMATCH_LIMIT) {
+                mismatched++;
             }
-            if (t[k] < PARTIAL_IONISATION_T) {
-                cool = 1;
+            worstMismatch = Math.max(worstMismatch, mismatch);
+        }
+
+        void warnings(String model, List<String> warnings) {
+            if (degenerate > 0) {
+                warnings.add(degenerate + " zones have degenerate electrons (the first Fermi-Dirac correction to the"
+                        + " electron pressure exceeds " + percent(DEGENERACY_LIMIT) + "), which " + model
+                        + " treats as an ideal gas");
+            }
+            if (pressureIonised > 0) {
+                warnings.add(pressureIonised + " zones are pressure-ionised (the state of more than "
+                        + percent(PRESSURE_IONISATION_LIMIT) + " of hydrogen is set by " + model
+                        + "'s approximate pressure ionisation, not by the Saha equation)");
+            }
+            if (mismatched > 0) {
+                warnings.add(model + " at the profile's rho and T gives a pressure up to "
+                        + String.format(java.util.Locale.ROOT, "%.3g", 100.0 * worstMismatch)
+                        + " % away from the profile's P (" + mismatched + " zones beyond "
+                        + percent(PRESSURE_MISMATCH_LIMIT) + "); its response functions are taken at (rho, T),"
+                        + " and H_P, c_s and N^2 use the profile's P");
             }
         }
-        if (!hasKappa) {
-            setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone, opacity);
-            kappa[k] = opacity.kappa;
+
+        private static String percent(double f) {
+            return String.format(java.util.Locale.ROOT, "%.3g %%", 100.0 * f);
         }
-        return cool;
     }
 
+    /** 2^(5/2): the first Fermi-Dirac correction to P_e is n_e lambda^3 / 2 over this. */
+    private static final double FERMI_CORRECTION = Math.pow(2.0, 2.5);
+    /** Count zones whose first Fermi-Dirac correction to the electron pressure exceeds this. */
+    public static final double DEGENERACY_LIMIT = 0.01;
+    /** Count zones where pressure ionisation decides the state of more than this share of hydrogen. */
+    public static final double PRESSURE_IONISATION_LIMIT = 0.01;
+    /** Count zones where the thermodynamics model's P differs from the profile's by more than this. */
+    public static final double PRESSURE_MISMATCH_LIMIT = 0.01;
     /**
      * The edges of the convective regions: overshoot (when this diagnosis applies it) into {@code dov}, with
      * D_mix raised to it where it is larger; each edge's margin on the convective side
@@ -398,10 +524,13 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         return a;
     }
 
-    /** The profile's column, or a column filled with {@code absent} (to be computed, or a default). */
+    /**
+     * The profile's own column (shared, never written), or a new column filled with {@code absent}
+     * (to be computed, or a default).
+     */
     private static double[] columnOr(Profile p, ProfileColumn c, double absent) {
         if (p.has(c)) {
-            return p.column(c);
+            return ColumnSharing.read(p, c);
         }
         double[] a = new double[p.size()];
         java.util.Arrays.fill(a, absent);
@@ -461,8 +590,11 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 }
                 vmax = OptionalDouble.of(peak);
                 if (peak > 0.0) {
-                    turnGlobal = OptionalDouble.of(Timescale.turnoverGlobal(r, v, first, last, rb, rt));
-                    double local = Timescale.turnoverLocal(r, hp, ell, v, first, last, rb, rt);
+                    // the envelope integral of dr / v diverges at the centre of a core: there the
+                    // core's radius over its mass-weighted mean velocity (see Timescale)
+                    turnGlobal = OptionalDouble.of(first == 0 ? Timescale.turnoverCore(m, v, last, rt, top[1])
+                            : Timescale.turnoverGlobal(r, v, first, last, rb, rt));
+                    double local = Timescale.turnoverLocal(r, ell, v, first, last, rb, rt);
                     if (local > 0.0) {
                         turnLocal = OptionalDouble.of(local);
                     }

@@ -43,12 +43,42 @@ class EddingtonStandardModelTest {
 
     @Test
     void demoProfileIsOrderedAndEndsAtTheSurfaceTemperature() {
-        Profile p = DemoStar.fromOptions(ModelOptions.parse("zones=300")).profile();
+        Profile p = DemoStar.fromOptions(ModelOptions.parse("zones=300,surface=polytrope")).profile();
         assertTrue(p.size() >= 298 && p.size() <= 300, "zones " + p.size());
         assertEquals(DemoStar.SURFACE_TEMPERATURE, p.value(ProfileColumn.TEMPERATURE, p.size() - 1),
                 1e-6 * DemoStar.SURFACE_TEMPERATURE);
         double lSurface = p.luminosity();
         assertEquals(DemoStar.LUMINOSITY_SOLAR * Iau2015.SOLAR_LUMINOSITY, lSurface, 1e-6 * lSurface);
         assertTrue(p.mass() < DemoStar.MASS_SOLAR * MSUN && p.mass() > 0.999 * DemoStar.MASS_SOLAR * MSUN);
+    }
+
+    @Test
+    void demoStarWithAnEnvelopeEndsAtThePhotosphereOfItsLAndR() {
+        Profile p = DemoStar.fromOptions(ModelOptions.parse("zones=300")).profile();
+        double r = DemoStar.RADIUS_SOLAR * Iau2015.SOLAR_RADIUS;
+        double l = DemoStar.LUMINOSITY_SOLAR * Iau2015.SOLAR_LUMINOSITY;
+        // Stefan-Boltzmann: L = 4 pi R^2 sigma T_eff^4 at the photosphere, the outermost zone
+        double teff = Math.pow(l / (4 * Math.PI * r * r * Codata2018.STEFAN_BOLTZMANN), 0.25);
+        assertEquals(teff, p.value(ProfileColumn.TEMPERATURE, p.size() - 1), 1e-9 * teff);
+        assertEquals(r, p.radius(), 1e-9 * r);
+        assertEquals(l, p.luminosity(), 1e-12 * l);
+        assertEquals(DemoStar.MASS_SOLAR * MSUN, p.mass(), 1e-12 * DemoStar.MASS_SOLAR * MSUN);
+        assertTrue(p.size() > 250 && p.size() < 400, "about the zones asked for: " + p.size());
+        // the join (0.75-0.85 R) leaves no step (common practice, no source): the logarithmic slopes
+        // d ln T / d ln r, d ln rho / d ln r and d ln P / d ln r of successive zone pairs differ by < 25 %
+        for (int k = 2; k < p.size(); k++) {
+            double rk = p.value(ProfileColumn.RADIUS, k) / r;
+            if (rk < 0.7 || rk > 0.9) {
+                continue;
+            }
+            double dlnr = Math.log(p.value(ProfileColumn.RADIUS, k) / p.value(ProfileColumn.RADIUS, k - 1));
+            double dlnrBefore = Math.log(p.value(ProfileColumn.RADIUS, k - 1) / p.value(ProfileColumn.RADIUS, k - 2));
+            for (ProfileColumn c : new ProfileColumn[] {ProfileColumn.TEMPERATURE, ProfileColumn.DENSITY,
+                ProfileColumn.PRESSURE}) {
+                double here = Math.log(p.value(c, k) / p.value(c, k - 1)) / dlnr;
+                double before = Math.log(p.value(c, k - 1) / p.value(c, k - 2)) / dlnrBefore;
+                assertEquals(1.0, here / before, 0.25, c.header() + " slope at r/R = " + rk);
+            }
+        }
     }
 }

@@ -1,6 +1,10 @@
 package io.github.startransport.core.opacity;
 
+import io.github.startransport.core.constants.Codata2018;
+import io.github.startransport.core.constants.Iau2015;
 import io.github.startransport.spi.InvalidInputException;
+import io.github.startransport.spi.InvalidOptionException;
+import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.OpacityResult;
 import io.github.startransport.spi.OpacityStatus;
 import net.jqwik.api.ForAll;
@@ -69,12 +73,142 @@ class AnalyticOpacityTest {
     }
 
     @Test
-    void hMinusAndConductionMatchHansenKawalerTrimble() {
+    void hMinusMatchesHansenKawalerTrimble() {
         // Hansen, Kawaler & Trimble (2004): kappa_H- = 2.5e-31 (Z/0.02) rho^1/2 T^9; rho = 1e-7, T = 5000 K gives 0.15441.
         assertRel(0.15441, HMinus.kappa(5000, 1e-7, 0.02), 1e-4, "H-minus");
-        // Same book: kappa_cd = 4e-8 (mu_e^2 / mu_I) Z_c^2 (T/rho)^2; pure 12C (mu_e = 2, Z^2/A = 3) at
-        // rho = 1e6, T = 1e7 gives 4.8e-5.
-        assertRel(4.8e-5, Conduction.kappa(1e7, 1e6, 2.0, 36.0 / 12.0), 1e-12, "conduction");
+    }
+
+    @Test
+    void conductionCoefficientIsTheWiedemannFranzLorentzGasValue() {
+        // Wiedemann-Franz for degenerate electrons, lambda = (pi^2/3) n_e k^2 T tau / m_e, with the Lorentz-gas
+        // collision time 1/tau = 4 pi n_i Z^2 e^4 Lambda / (p_F^2 v_F), p_F^3 = 3 pi^2 hbar^3 n_e (Rutherford
+        // transport cross-section; e.g. Yakovlev & Urpin 1980, from memory) and kappa = 4 a c T^3 / (3 rho lambda).
+        // Evaluated here step by step from CODATA 2018 values for pure 12C (mu_e = 2, Z^2/A = 3) at
+        // rho = 1e6 g/cm^3, T = 1e7 K, Lambda = 1.
+        double c = 2.99792458e10;
+        double a = 4 * 5.670374419e-5 / c;
+        double me = 9.1093837015e-28;
+        double mu = 1.66053906660e-24;
+        double k = 1.380649e-16;
+        double hbar = 6.62607015e-27 / (2 * Math.PI);
+        double e = 1.602176634e-19 * c / 10; // statC
+        double rho = 1e6;
+        double t = 1e7;
+        double ne = rho / (2 * mu);
+        double ni = rho / (12 * mu);
+        double pF = hbar * Math.cbrt(3 * Math.PI * Math.PI * ne);
+        double vF = pF / me;
+        double tau = pF * pF * vF / (4 * Math.PI * ni * 36 * Math.pow(e, 4));
+        double lambda = Math.PI * Math.PI / 3 * ne * k * k * t * tau / me;
+        double expected = 4 * a * c * t * t * t / (3 * rho * lambda);
+        assertRel(expected, Conduction.kappa(t, rho, 2.0, 36.0 / 12.0), 1e-12, "conduction, 12C");
+        // Hansen, Kawaler & Trimble's rounded coefficient 4e-8 gives 4.8e-5 here: ours is 3.2x larger, i.e. their
+        // value corresponds to a Coulomb logarithm of 0.31, below the 0.6-1.5 of Yakovlev & Urpin (1980) for
+        // white-dwarf conditions (from memory), which is why we take Lambda = 1.
+        double impliedLambda = 4.8e-5 / Conduction.kappa(t, rho, 2.0, 3.0);
+        assertEquals(0.31, impliedLambda, 0.01);
+    }
+
+    // ---- the default composite against tabulated Rosseland means ----
+    // The default's one fitted constant, T_A of the guillotine factor, was fixed at the solar centre (the
+    // calibration anchor below). Every other point here was NOT used to fix anything: held-out checks.
+
+    private static double kappa(double t, double rho, double x, double z) {
+        OpacityResult r = new OpacityResult();
+        AnalyticOpacity.DEFAULT.evaluate(t, rho, x, z, -1, r);
+        return r.kappa;
+    }
+
+    private static void assertWithinFactor(double expected, double actual, double factor, String what) {
+        assertTrue(actual > expected / factor && actual < expected * factor,
+                what + ": " + actual + " cm^2/g, expected " + expected + " within a factor " + factor);
+    }
+
+    @Test
+    void calibrationAnchorSolarCentre() {
+        // CALIBRATION ANCHOR, not an independent check: T_A was chosen so that the composite gives 1.25 cm^2/g here,
+        // the middle of the 1.2-1.3 cm^2/g of tabulated Rosseland means at the centre of standard solar models
+        // (T = 1.57e7 K, rho = 150 g/cm^3, X = 0.34, Z = 0.02; values from memory). This only checks the arithmetic
+        // of that calibration (T_A is rounded to three digits).
+        assertRel(1.25, kappa(1.57e7, 150, 0.34, 0.02), 0.01, "solar centre");
+    }
+
+    @Test
+    void heldOutBaseOfTheSolarConvectionZone() {
+        // Held out. At the base of the solar convection zone (helioseismic r = 0.713 R_sun, Christensen-Dalsgaard,
+        // Gough & Thompson 1991) nabla_rad = nabla_ad = 0.4, so kappa = 0.4 * 16 pi a c G m T^4 / (3 L P)
+        // (Kippenhahn, Weigert & Weiss 2012 eq. 5.28). State from memory of standard solar models: T = 2.2e6 K,
+        // rho = 0.19 g/cm^3, X = 0.74, Z = 0.02, m = 0.976 M_sun, L = L_sun; P = rho k T / (mu m_u) + a T^4 / 3 with
+        // the fully ionised mu. This gives 20.8 cm^2/g, the "~20" of tabulated means there.
+        double t = 2.2e6;
+        double rho = 0.19;
+        double mu = 1 / (2 * 0.74 + 0.75 * 0.24 + 0.5 * 0.02);
+        double pressure = rho * Codata2018.BOLTZMANN * t / (mu * Codata2018.ATOMIC_MASS_UNIT)
+                + Codata2018.RADIATION_CONSTANT * Math.pow(t, 4) / 3;
+        double m = 0.976 * Iau2015.SOLAR_MASS;
+        double expected = 0.4 * 16 * Math.PI * Codata2018.RADIATION_CONSTANT * Codata2018.SPEED_OF_LIGHT
+                * Codata2018.GRAVITATIONAL_CONSTANT * m * Math.pow(t, 4) / (3 * Iau2015.SOLAR_LUMINOSITY * pressure);
+        assertEquals(20.8, expected, 0.5, "the radiative-equilibrium estimate itself");
+        assertWithinFactor(expected, kappa(t, rho, 0.74, 0.02), 1.5, "base of the solar convection zone");
+    }
+
+    @Test
+    void heldOutOneMillionKelvin() {
+        // Held out. T = 1e6 K, rho = 0.1 g/cm^3 (log R = -1), X = 0.7, Z = 0.02: ~150 cm^2/g in tabulated Rosseland
+        // means (value from memory).
+        assertWithinFactor(150, kappa(1e6, 0.1, 0.7, 0.02), 1.5, "1 MK");
+    }
+
+    @Test
+    void heldOutPhotosphereIsWithinAFactorThree() {
+        // Held out, and a known weakness. Near the solar photosphere (T = 5800 K, rho = 3e-7 g/cm^3, X = 0.7,
+        // Z = 0.02) tabulated Rosseland means give ~0.3-0.5 cm^2/g (value from memory; optical depth 2/3 at
+        // P = 1.1e5 dyn/cm^2 and g = 2.74e4 cm/s^2 needs kappa = tau g / P ~ 0.17). The H-minus law, ~ T^9, is ~2.5x
+        // high there, at the top of its 3000-6000 K range: the README states a factor 3 for the photosphere.
+        assertWithinFactor(0.4, kappa(5800, 3e-7, 0.7, 0.02), 3, "photosphere");
+    }
+
+    @Test
+    void guillotineFactorHasBothPhysicalLimits() {
+        // Kramers regime: t = 1 (the published law) while the light metals keep their K-shell electrons; with the
+        // oxygen K-shell energy 64 Rydberg = 870.76 eV (CODATA 2018), t - 1 < 1e-4 at 1 MK.
+        assertEquals(870.7643598716 / 8.617333262e-5, Kramers.K_SHELL_TEMPERATURE, 1e-3);
+        assertEquals(1.0, Kramers.guillotine(1e6), 1e-4);
+        // Stripped limit (Saha: bound fraction ~ rho T^-3/2 exp(chi/kT), cross-section ~ T^-3 above the edge):
+        // kappa_bf ~ rho T^-4.5, i.e. d ln t / d ln T -> 1 for T >> theta_K.
+        assertEquals(1.0, Kramers.dLnGuillotineDLnT(1e11), 2e-4);
+        // monotonic in between
+        double previous = 1.0;
+        for (double lt = 5; lt <= 9; lt += 0.01) {
+            double g = Kramers.guillotine(Math.pow(10, lt));
+            assertTrue(g >= previous, "t decreases at log T = " + lt);
+            previous = g;
+        }
+    }
+
+    @Property(tries = 300, seed = "20261203")
+    void defaultDerivativesMatchCentralDifferences(@ForAll @DoubleRange(min = 3.3, max = 9.0) double logT,
+                                                   @ForAll @DoubleRange(min = -12, max = 8) double logRho,
+                                                   @ForAll @DoubleRange(min = 0, max = 1) double x,
+                                                   @ForAll @DoubleRange(min = 0, max = 0.1) double zFrac) {
+        assertDerivativesMatch(AnalyticOpacity.DEFAULT, logT, logRho, x, zFrac * (1 - x));
+    }
+
+    @Property(tries = 300, seed = "20261204")
+    void conductionIsNegligibleInNonDegenerateGas(@ForAll @DoubleRange(min = 0, max = 1) double u,
+                                                  @ForAll @DoubleRange(min = 0, max = 1) double v,
+                                                  @ForAll @DoubleRange(min = 0, max = 3.99) double box) {
+        // Conduction matters only where electrons are degenerate, rho / mu_e > ~2.4e-8 T^3/2 (Hansen, Kawaler &
+        // Trimble 2004 §3.5, from memory). The four boxes of the Conduction javadoc lie at least 5x below that
+        // density; there the stand-in conductive term must take < 1 % of 1/kappa.
+        double[][] boxes = {{4.5, 9.0, -12, -3}, {5.5, 9.0, -12, -1}, {6.0, 9.0, -12, 0}, {7.0, 9.0, -12, 2}};
+        double[] b = boxes[(int) box];
+        double t = Math.pow(10, b[0] + u * (b[1] - b[0]));
+        double rho = Math.pow(10, b[2] + v * (b[3] - b[2]));
+        assertTrue(rho * 1.7 / 2 < 2.4e-8 * Math.pow(t, 1.5) / 5, "box not well non-degenerate");
+        double cd = Conduction.kappa(t, rho, 2 / 1.7, Conduction.chargeSquaredPerMass(0.7, 0.02));
+        double share = kappa(t, rho, 0.7, 0.02) / cd;
+        assertTrue(share < 0.01, "conduction share " + share + " at T = " + t + ", rho = " + rho);
     }
 
     @Test
@@ -120,19 +254,22 @@ class AnalyticOpacityTest {
                                             @ForAll @DoubleRange(min = -12, max = 8) double logRho,
                                             @ForAll @DoubleRange(min = 0, max = 1) double x,
                                             @ForAll @DoubleRange(min = 0, max = 0.1) double zFrac) {
-        double z = zFrac * (1 - x);
+        assertDerivativesMatch(MODEL, logT, logRho, x, zFrac * (1 - x));
+    }
+
+    private static void assertDerivativesMatch(AnalyticOpacity model, double logT, double logRho, double x, double z) {
         double t = Math.pow(10, logT);
         double rho = Math.pow(10, logRho);
         OpacityResult r = new OpacityResult();
-        MODEL.evaluate(t, rho, x, z, -1, r);
-        double h = 1e-5; // in ln; central difference error ~ h^2 f''' / 6 < 1e-7 here
+        model.evaluate(t, rho, x, z, -1, r);
+        double h = 1e-5; // in ln; central difference error ~ h^2 f(3) / 6 < 1e-7 here
         OpacityResult p = new OpacityResult();
         OpacityResult m = new OpacityResult();
-        MODEL.evaluate(t, rho * Math.exp(h), x, z, -1, p);
-        MODEL.evaluate(t, rho * Math.exp(-h), x, z, -1, m);
+        model.evaluate(t, rho * Math.exp(h), x, z, -1, p);
+        model.evaluate(t, rho * Math.exp(-h), x, z, -1, m);
         double fdRho = (Math.log(p.kappa) - Math.log(m.kappa)) / (2 * h);
-        MODEL.evaluate(t * Math.exp(h), rho, x, z, -1, p);
-        MODEL.evaluate(t * Math.exp(-h), rho, x, z, -1, m);
+        model.evaluate(t * Math.exp(h), rho, x, z, -1, p);
+        model.evaluate(t * Math.exp(-h), rho, x, z, -1, m);
         double fdT = (Math.log(p.kappa) - Math.log(m.kappa)) / (2 * h);
         assertEquals(fdRho, r.dLnKappaDLnRho, 1e-6 * Math.max(1, Math.abs(fdRho)), "d ln kappa / d ln rho");
         assertEquals(fdT, r.dLnKappaDLnT, 1e-6 * Math.max(1, Math.abs(fdT)), "d ln kappa / d ln T");
@@ -164,4 +301,18 @@ class AnalyticOpacityTest {
         assertEquals(3, e.zone());
         assertThrows(InvalidInputException.class, () -> new AnalyticOpacity(-1, 1));
     }
+
+    @Test
+    void guillotineOptionTakesTheLawOrAConstant() {
+        assertEquals(AnalyticOpacity.DEFAULT.toString(), AnalyticOpacity.fromOptions(ModelOptions.defaults()).toString());
+        assertTrue(AnalyticOpacity.fromOptions(ModelOptions.parse("bound-free-gaunt-over-guillotine=k-shell"))
+                .boundFreeGauntOverGuillotine().isEmpty());
+        assertEquals(0.05, AnalyticOpacity.fromOptions(ModelOptions.parse("bound-free-gaunt-over-guillotine=0.05"))
+                .boundFreeGauntOverGuillotine().getAsDouble());
+        assertEquals("bound-free-gaunt-over-guillotine", assertThrows(InvalidOptionException.class,
+                () -> AnalyticOpacity.fromOptions(ModelOptions.parse("bound-free-gaunt-over-guillotine=-2"))).option());
+        assertThrows(InvalidOptionException.class,
+                () -> AnalyticOpacity.fromOptions(ModelOptions.parse("bound-free-gaunt-over-guillotine=shell")));
+    }
+
 }

@@ -152,6 +152,87 @@ class OpacityTableReaderTest {
     }
 
     @Test
+    void aRowSlightlyOffTheGridIsNamedAsSuch() {
+        // the issue's case: one log_R off by 1e-12 (line 7, the 5th data row; log_R starts at column 14)
+        String off = GOOD.replace("0.7,0.02,4.5,-2.5,0.6\n", "0.7,0.02,4.5,-2.499999999999,0.6\n");
+        assertRefused(off, 7, 14, "off the grid");
+        assertTrue(refused(off).reason().contains("log_R=-2.5"), refused(off).getMessage());
+        String offT = GOOD.replace("0.7,0.02,4.5,-3.0,0.5\n", "0.7,0.02,4.500000000001,-3.0,0.5\n");
+        assertRefused(offT, 6, 10, "log_T=4.500000000001 is off the grid");
+    }
+
+    @Test
+    void aMissingNodeIsNamedAtItsNeighbour() {
+        String missing = GOOD.replace("0.7,0.02,4.5,-2.0,0.7\n", "");
+        // the missing node is (4.5, -2.0); its nearest row in the log_T = 4.5 line is line 7
+        assertRefused(missing, 7, 14, "no row for log_T=4.5, log_R=-2.0");
+    }
+
+    @Test
+    void fortyThousandSingleNodeHolesAreRead() {
+        // log_T 0..400 x log_R 0..200; the nodes with log_T >= 201 and odd log_R are absent, each declared
+        // on its own line, and every declaration given twice: 40,000 lines (the holes table build used to write)
+        StringBuilder holes = new StringBuilder();
+        for (int i = 201; i <= 400; i++) {
+            for (int j = 1; j <= 200; j += 2) {
+                holes.append("# absent: X=0.7 Z=0.02 log_T=").append(i).append(" log_R=").append(j).append('\n');
+            }
+        }
+        StringBuilder b = new StringBuilder().append(holes).append(holes).append(HEADER);
+        for (int i = 0; i <= 400; i++) {
+            for (int j = 0; j <= 200; j++) {
+                if (i <= 200 || j % 2 == 0) {
+                    b.append("0.7,0.02,").append(i).append(',').append(j).append(",1.0\n");
+                }
+            }
+        }
+        OpacityTableSet set = OpacityTableReader.parse(b.toString(), "many");
+        assertEquals(401 * 201 - 20_000, set.tabulatedValues());
+        // a row inside a declared hole is found and named with the first line declaring it
+        DataFormatException e = refused(b + "0.7,0.02,201,1,1.0\n");
+        assertTrue(e.reason().contains("inside the hole declared on line 1"), e.getMessage());
+        // and an undeclared missing node among them is still found
+        String undeclared = b.toString().replace("0.7,0.02,300,4,1.0\n", "");
+        assertTrue(refused(undeclared).reason().contains("no row for log_T=300.0, log_R=4.0"));
+    }
+
+    @Test
+    void builderWritesRectanglesOfRefusedNodesAsRanges() {
+        // a model that refuses two blocks: log_T > 5 with log_R > -2, and log_T < 4.2 with log_R < -5
+        OpacityModel blocks = (t, rho, x, z, zone, out) -> {
+            double lt = Math.log10(t);
+            double lr = Math.log10(rho) - 3 * lt + 18;
+            if ((lt > 5.0001 && lr > -1.9999) || (lt < 4.1999 && lr < -5.0001)) {
+                throw new InvalidInputException("T", t, "K", zone, "outside the test's blocks");
+            }
+            AnalyticOpacity.DEFAULT.evaluate(t, rho, x, z, zone, out);
+        };
+        OpacityGridSpec grid = new OpacityGridSpec(new double[] {0.0, 0.7}, new double[] {0.02},
+                OpacityGridSpec.evenly(4.0, 6.0, 21), OpacityGridSpec.evenly(-6.0, -1.0, 21));
+        StringBuilder text = new StringBuilder();
+        long refusedNodes = OpacityTableBuilder.write(blocks, grid, "", text);
+        // per table: log_T 5.1..6.0 (10 values) x log_R -1.75..-1.0 (4); log_T 4.0..4.1 (2) x log_R -6.0..-5.25 (4)
+        assertEquals(2 * (10 * 4 + 2 * 4), refusedNodes);
+        long absentLines = text.toString().lines().filter(l -> l.startsWith("# absent:")).count();
+        assertEquals(4, absentLines, text.toString().lines().filter(l -> l.startsWith("#")).toList().toString());
+        OpacityTableSet set = OpacityTableReader.parse(text.toString(), "blocks");
+        assertEquals(2 * 21 * 21 - refusedNodes, set.tabulatedValues());
+    }
+
+    @Test
+    void aTooLargeGridIsRefusedBeforeAnythingIsWritten() {
+        // the issue's grid: 2300 x 2200 log T, log R nodes, 9 compositions (45.5 million nodes; 48 * that overflows an int)
+        OpacityGridSpec huge = new OpacityGridSpec(new double[] {0.0, 0.35, 0.7}, new double[] {0.01, 0.02, 0.03},
+                OpacityGridSpec.evenly(3.0, 8.0, 2300), OpacityGridSpec.evenly(-9.0, 1.0, 2200));
+        assertEquals(45_540_000L, huge.nodes());
+        StringBuilder text = new StringBuilder();
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> OpacityTableBuilder.write(AnalyticOpacity.DEFAULT, huge, "", text));
+        assertTrue(e.getMessage().contains("45,540,000") && e.getMessage().contains("4,000,000"), e.getMessage());
+        assertEquals(0, text.length());
+    }
+
+    @Test
     void builderRoundTripIsExactAtNodes() {
         OpacityGridSpec grid = new OpacityGridSpec(new double[] {0.0, 0.7}, new double[] {0.02},
                 OpacityGridSpec.evenly(4.0, 6.0, 9), OpacityGridSpec.evenly(-6.0, -1.0, 6));

@@ -127,12 +127,14 @@ class LocalDiagnosisTest {
         }
         // the semiconvective layer sits at the step, where nabla_mu > 0
         assertTrue(semi.firstZone() <= step + 1 && semi.lastZone() >= step, semi.toString());
-        // both boundaries reported, and they differ: the Ledoux margin changes sign at the step,
-        // the Schwarzschild margin only at the top of the (Schwarzschild) core
+        // both boundaries reported, and they differ: the Ledoux margin changes sign at the step, the
+        // Schwarzschild margin where a region of the Schwarzschild diagnosis ends
         double ledouxBottom = semi.bottomLedoux().orElseThrow();
         double schwarzschildTop = semi.topSchwarzschild().orElseThrow();
         assertNotEquals(ledouxBottom, schwarzschildTop);
-        assertEquals(s.regions().get(0).topRadius(), schwarzschildTop, 1e-9 * schwarzschildTop);
+        assertTrue(s.regions().stream().anyMatch(r -> Math.abs(r.topRadius() - schwarzschildTop) <= 1e-9 * schwarzschildTop
+                        || Math.abs(r.bottomRadius() - schwarzschildTop) <= 1e-9 * schwarzschildTop),
+                schwarzschildTop + " is no edge of " + s.regions());
     }
 
     /**
@@ -215,6 +217,38 @@ class LocalDiagnosisTest {
         assertEquals(photon[3], photon[2], 1e-4 * photon[3]);
     }
 
+    @Test
+    void turnoverTimesConvergeWithResolution() {
+        // A converged quantity changes by less than 1 % when the zones are doubled (common practice, no source).
+        // The core's global time is its radius over its mass-weighted mean velocity: the integral of dr / v
+        // diverged logarithmically (152, 174, 197, 220, 242 d at 200-3200 zones before this definition). The
+        // envelope integral converges more slowly (its integrand ~ (r - r_b)^-1/3 at the base), so it is
+        // checked from 800 zones on.
+        int[] zones = {400, 800, 1600, 3200};
+        List<List<Region>> runs = new java.util.ArrayList<>();
+        for (int n : zones) {
+            runs.add(diagnose(new DemoStar(n).profile(), "schwarzschild").regions().stream()
+                    .filter(r -> r.regime() == Regime.CONVECTIVE).toList());
+        }
+        for (int i = 1; i < zones.length; i++) {
+            List<Region> coarse = runs.get(i - 1);
+            List<Region> fine = runs.get(i);
+            assertEquals(coarse.size(), fine.size());
+            for (int j = 0; j < fine.size(); j++) {
+                boolean core = fine.get(j).bottomRadius() == 0.0;
+                if (!core && zones[i - 1] < 800) {
+                    continue;
+                }
+                for (boolean global : new boolean[] {true, false}) {
+                    double a = (global ? coarse.get(j).turnoverGlobal() : coarse.get(j).turnoverLocal()).orElseThrow();
+                    double b = (global ? fine.get(j).turnoverGlobal() : fine.get(j).turnoverLocal()).orElseThrow();
+                    assertEquals(b, a, 0.01 * b, (core ? "core" : "region " + j) + (global ? " global" : " local")
+                            + " turnover, " + zones[i - 1] + " -> " + zones[i] + " zones");
+                }
+            }
+        }
+    }
+
     @Property(tries = 8, seed = "503")
     void regionsDoNotDependOnTheZoneCountBeyondDiscretisation(@ForAll @IntRange(min = 300, max = 2500) int n) {
         ProfileDiagnosis ref = diagnose(new DemoStar(3000).profile(), "schwarzschild");
@@ -232,10 +266,13 @@ class LocalDiagnosisTest {
     }
 
     @Test
-    void fallbackThermodynamicsAndCoolZonesAreReported() {
+    void fallbackThermodynamicsAndItsLimitsAreReported() {
         ProfileDiagnosis d = diagnose(new DemoStar(300).profile(), "schwarzschild");
-        assertTrue(d.warnings().stream().anyMatch(w -> w.contains("fallback") && w.contains("cooler than 1e5 K")),
+        assertTrue(d.warnings().stream().anyMatch(w -> w.contains("fallback") && w.contains("saha-ionising-gas")),
                 d.warnings().toString());
+        // the demo star's centre (T ~ 2e7 K, rho ~ 25 g cm^-3): the Saha equation alone would leave ~6 % of
+        // hydrogen neutral there (Kippenhahn, Weigert & Weiss 2012 §14.5 on pressure ionisation, from memory)
+        assertTrue(d.warnings().stream().anyMatch(w -> w.contains("pressure-ionised")), d.warnings().toString());
         // given c_P, nabla_ad and delta columns, no fallback warning
         Profile p = new DemoStar(300).profile();
         Map<ProfileColumn, double[]> cols = columns(p);

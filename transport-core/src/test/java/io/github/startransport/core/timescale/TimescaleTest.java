@@ -70,9 +70,9 @@ class TimescaleTest {
     }
 
     @Test
-    void localTurnoverIsMixingLengthOverVelocityHalfAScaleHeightAboveTheBase() {
+    void localTurnoverIsMixingLengthOverVelocityHalfAMixingLengthAboveTheBase() {
+        // Kim & Demarque (1996, ApJ 457, 340; from memory): tau_c = l / v half a mixing length above the base
         double[] r = grid(20, 1e10);
-        double[] hp = constant(20, 1e9);
         double[] v = new double[20];
         double[] l = new double[20];
         for (int k = 0; k < 20; k++) {
@@ -80,8 +80,36 @@ class TimescaleTest {
             l[k] = 1.8e9;
         }
         double bottom = 2.2e9;
-        double at = bottom + 0.5e9;
+        double at = bottom + 0.9e9;
         double expected = 1.8e9 / (1e3 * at / 1e8);
-        assertEquals(expected, Timescale.turnoverLocal(r, hp, l, v, 2, 18, bottom, 9.6e9), 1e-12 * expected);
+        assertEquals(expected, Timescale.turnoverLocal(r, l, v, 2, 18, bottom, 9.6e9), 1e-12 * expected);
+        // a core (bottom at the centre): half a mixing length below its top
+        double top = 6.3e9;
+        double atCore = top - 0.9e9;
+        double expectedCore = 1.8e9 / (1e3 * atCore / 1e8);
+        assertEquals(expectedCore, Timescale.turnoverLocal(r, l, v, 0, 12, 0.0, top), 1e-12 * expectedCore);
+        // thinner than half a mixing length: the middle
+        double mid = 0.5 * (2.2e9 + 2.9e9);
+        assertEquals(1.8e9 / (1e3 * mid / 1e8), Timescale.turnoverLocal(r, l, v, 3, 5, 2.2e9, 2.9e9), 1e-3);
+    }
+
+    @Test
+    void coreTurnoverIsRadiusOverMassWeightedVelocity() {
+        // uniform v: r_top / v, the same as the integral of dr / v (definition)
+        int n = 30;
+        double[] m = new double[n];
+        double[] v = new double[n];
+        for (int k = 0; k < n; k++) {
+            m[k] = 1e31 * (k + 0.5); // each zone at the middle of the mass it owns
+            v[k] = 2e3;
+        }
+        assertEquals(4e10 / 2e3, Timescale.turnoverCore(m, v, 19, 4e10, 2.05e32), 1e-6);
+        // v linear in m: <v>_m = v at half the mass, which the midpoint rule gets exactly (v = 1e3 m / 1e32)
+        for (int k = 0; k < n; k++) {
+            v[k] = 1e3 * m[k] / 1e32;
+        }
+        double topMass = 2.0e32;
+        double mean = 1e3 * (topMass / 2) / 1e32;
+        assertEquals(4e10 / mean, Timescale.turnoverCore(m, v, 19, 4e10, topMass), 1e-9 * 4e10 / mean);
     }
 }
