@@ -15,6 +15,8 @@ module io.github.startransport.core {
     exports io.github.startransport.core.model;
     exports io.github.startransport.core.opacity;
     exports io.github.startransport.core.profile;
+    exports io.github.startransport.core.seismic;
+    exports io.github.startransport.core.thermo;
     exports io.github.startransport.core.timescale;
 
     provides io.github.startransport.spi.TransportProvider with io.github.startransport.core.CoreProvider;

@@ -52,6 +52,7 @@ final class ColumnMap {
         alias(m, ProfileColumn.CP, "cp", "specific_heat");
         alias(m, ProfileColumn.NABLA_AD, "adiabatic_gradient");
         alias(m, ProfileColumn.NABLA_MU, "composition_gradient");
+        alias(m, ProfileColumn.GAMMA1, "gamma_1", "first_adiabatic_exponent");
         return Collections.unmodifiableMap(m);
     }
 

@@ -34,8 +34,8 @@ import java.util.concurrent.Callable;
                 + " thermal and Kelvin-Helmholtz timescales.",
             "",
             "Writes into DIR: zones.csv (one row per zone), summary.json, gradients.png, velocity-mixing.png,"
-                + " opacity.png, and prints a short summary. With several profiles each goes to DIR/<file name"
-                + " without extension>/, and they are diagnosed in parallel: every file is attempted, each refused"
+                + " opacity.png, propagation.png, and prints a short summary. With several profiles each goes to"
+                + " DIR/<file name without extension>/, and they are diagnosed in parallel: every file is attempted, each refused"
                 + " one is reported with its line and column, a closing line counts them, and the exit code is 1"
                 + " if any was refused. Nothing is left half-written: the files appear in DIR only when they are"
                 + " complete, and DIR is left as it was when every profile was refused.",
@@ -45,7 +45,7 @@ import java.util.concurrent.Callable;
             "Profile files: CSV, one header row of column names, then one zone per row (centre to surface or"
                 + " surface to centre), cgs units. Lines starting with # and blank lines are skipped.",
             "  required: r_cm, m_g, T_K, rho_g_cm3, P_dyn_cm2, L_erg_s, X, Z (at least 3 zones)",
-            "  optional: kappa_cm2_g, cp_erg_g_K, delta, nabla_ad, nabla_mu, phi (computed when absent)",
+            "  optional: kappa_cm2_g, cp_erg_g_K, delta, nabla_ad, nabla_mu, phi, Gamma1 (computed when absent)",
             "  our names in any case and the aliases radius, mass, temperature, density, pressure, luminosity,"
                 + " hydrogen, metals, kappa, cp, ... are read as ours; other columns are ignored (with a note on"
                 + " standard error). Numbers: 1.5e7, 1.5E+07 or Fortran's 1.5D+07.",

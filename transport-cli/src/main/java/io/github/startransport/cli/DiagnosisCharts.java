@@ -36,7 +36,7 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * The three plots of a diagnosis, drawn with JFreeChart and written as PNG at 1200 x 800.
+ * The four plots of a diagnosis, drawn with JFreeChart and written as PNG at 1200 x 800.
  *
  * <p>On logarithmic axes a value that is zero or negative cannot be drawn; it leaves a gap in
  * its line, and the plot's subtitle says so. Along the star the plots use the {@link PlotAxis}
@@ -55,12 +55,17 @@ final class DiagnosisCharts {
     static final String MIXING_PNG = "velocity-mixing.png";
     /** File name of the opacity plot. */
     static final String OPACITY_PNG = "opacity.png";
+    /** File name of the propagation diagram. */
+    static final String PROPAGATION_PNG = "propagation.png";
 
     private static final Map<Regime, Color> SHADE = new EnumMap<>(Map.of(
             Regime.CONVECTIVE, new Color(255, 170, 60, 70),
             Regime.SEMICONVECTIVE, new Color(80, 190, 90, 70),
             Regime.THERMOHALINE, new Color(90, 140, 230, 70),
             Regime.RADIATIVE, new Color(0, 0, 0, 0)));
+
+    /** Shade of the layers that overshoot mixes beyond the edges of convective regions. */
+    private static final Color OVERSHOOT_SHADE = new Color(200, 60, 200, 60);
 
     /**
      * nabla_L is drawn only where it differs from nabla_ad by more than this fraction of nabla_ad
@@ -83,7 +88,7 @@ final class DiagnosisCharts {
     }
 
     /**
-     * Writes all three plots into a folder, in the {@link Style#DEFAULT} style.
+     * Writes all four plots into a folder, in the {@link Style#DEFAULT} style.
      *
      * @param diagnosis the diagnosis
      * @param dir       an existing folder
@@ -94,7 +99,7 @@ final class DiagnosisCharts {
     }
 
     /**
-     * Writes all three plots into a folder.
+     * Writes all four plots into a folder.
      *
      * @param diagnosis the diagnosis
      * @param style     how to draw them
@@ -105,6 +110,7 @@ final class DiagnosisCharts {
         write(gradients(diagnosis, style), dir.resolve(GRADIENTS_PNG));
         write(velocityAndMixing(diagnosis, style), dir.resolve(MIXING_PNG));
         write(opacity(diagnosis, style), dir.resolve(OPACITY_PNG));
+        write(propagation(diagnosis, style), dir.resolve(PROPAGATION_PNG));
     }
 
     /**
@@ -243,6 +249,82 @@ final class DiagnosisCharts {
         style(plot, 0, 1);
         note(chart, hidden, "opacity values \u2264 0");
         return chart;
+    }
+
+    /**
+     * The propagation diagram: the buoyancy frequency N and the l = 1 Lamb frequency S_1 as cyclic
+     * frequencies (N / 2 pi, S_1 / 2 pi, in microhertz) along the star on a logarithmic axis, the large
+     * separation Delta nu marked, non-radiative regions shaded. Zones with N^2 &lt;= 0 (convectively
+     * unstable) leave gaps in N.
+     *
+     * @param d a diagnosis
+     * @return the chart in the default style
+     */
+    static JFreeChart propagation(ProfileDiagnosis d) {
+        return propagation(d, Style.DEFAULT);
+    }
+
+    /**
+     * @param d     a diagnosis
+     * @param style how to draw it
+     * @return the propagation diagram
+     */
+    static JFreeChart propagation(ProfileDiagnosis d, Style style) {
+        double[] xs = style.axis().of(d);
+        Values x = k -> xs[k];
+        double[] n2 = d.column(DiagnosisColumn.BUOYANCY_SQUARED);
+        double[] s1 = d.column(DiagnosisColumn.LAMB_L1);
+        double[] n = new double[n2.length];
+        for (int k = 0; k < n2.length; k++) {
+            n[k] = n2[k] > 0 ? Math.sqrt(n2[k]) / (2 * Math.PI) * 1e6 : 0.0;
+            s1[k] = s1[k] / (2 * Math.PI) * 1e6;
+        }
+        XYSeriesCollection data = new XYSeriesCollection();
+        int hidden = add(data, "N / 2\u03c0 (buoyancy frequency)", d.size(), x, k -> n[k], true);
+        add(data, "S\u2081 / 2\u03c0 (Lamb frequency, l = 1)", d.size(), x, k -> s1[k], true);
+        ValueAxis y = logAxis("cyclic frequency (\u03bcHz)", data);
+        XYPlot plot = new XYPlot(data, style.axis().axis(xs), y, new XYLineAndShapeRenderer(true, false));
+        JFreeChart chart = chart("Propagation diagram of " + d.source(), plot);
+        XYLineAndShapeRenderer lines = (XYLineAndShapeRenderer) plot.getRenderer();
+        lines.setSeriesPaint(0, new Color(200, 30, 30));
+        lines.setSeriesStroke(0, new BasicStroke(2.5f));
+        lines.setSeriesPaint(1, new Color(30, 110, 200));
+        lines.setSeriesStroke(1, new BasicStroke(2.5f));
+        lines.setDrawSeriesLineAsPath(true);
+        shadeRegions(d, plot, style.axis(), xs);
+        double deltaNu = d.seismic().map(sm -> sm.largeSeparation() * 1e6).orElse(Double.NaN);
+        if (Double.isFinite(deltaNu) && deltaNu > 0) {
+            org.jfree.chart.plot.ValueMarker marker = new org.jfree.chart.plot.ValueMarker(deltaNu);
+            marker.setPaint(new Color(120, 60, 160));
+            marker.setStroke(new BasicStroke(2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f,
+                    new float[] {8f, 5f}, 0f));
+            marker.setLabel(String.format(java.util.Locale.ROOT, "\u0394\u03bd = %.4g \u03bcHz", deltaNu));
+            marker.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 16));
+            marker.setLabelPaint(new Color(120, 60, 160));
+            marker.setLabelAnchor(org.jfree.chart.ui.RectangleAnchor.TOP_RIGHT);
+            marker.setLabelTextAnchor(org.jfree.chart.ui.TextAnchor.BOTTOM_RIGHT);
+            marker.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+            plot.addRangeMarker(marker);
+            includeInRange(y, data, deltaNu);
+        }
+        note(chart, hidden, "zones with N\u00b2 \u2264 0 (convectively unstable)");
+        return chart;
+    }
+
+    /** Widens a logarithmic axis so that {@code value} and every drawn point lie inside it. */
+    private static void includeInRange(ValueAxis axis, XYSeriesCollection data, double value) {
+        double lo = value;
+        double hi = value;
+        for (int s = 0; s < data.getSeriesCount(); s++) {
+            for (int i = 0; i < data.getItemCount(s); i++) {
+                double v = data.getYValue(s, i);
+                if (v > 0 && Double.isFinite(v)) {
+                    lo = Math.min(lo, v);
+                    hi = Math.max(hi, v);
+                }
+            }
+        }
+        axis.setRange(lo / 1.5, hi * 1.5);
     }
 
     /** One value per zone. */
@@ -523,6 +605,7 @@ final class DiagnosisCharts {
     /** Shades each non-radiative region and adds one legend entry per regime shown. */
     private static void shadeRegions(ProfileDiagnosis d, XYPlot plot, PlotAxis axis, double[] xs) {
         Set<Regime> shown = EnumSet.noneOf(Regime.class);
+        boolean overshot = false;
         for (Region region : d.regions()) {
             if (region.regime() == Regime.RADIATIVE) {
                 continue;
@@ -533,6 +616,8 @@ final class DiagnosisCharts {
             m.setOutlinePaint(null);
             plot.addDomainMarker(m, Layer.BACKGROUND);
             shown.add(region.regime());
+            overshot |= shadeOvershoot(d, plot, axis, xs, region.overshootBottom(), region.bottomRadius(), e[0]);
+            overshot |= shadeOvershoot(d, plot, axis, xs, region.overshootTop(), region.topRadius(), e[1]);
         }
         LegendItemCollection items = new LegendItemCollection();
         LegendItemCollection series = plot.getLegendItems();
@@ -545,7 +630,40 @@ final class DiagnosisCharts {
                     new Rectangle(-8, -8, 16, 16), new Color(c.getRed(), c.getGreen(), c.getBlue(), 140));
             items.add(item);
         }
+        if (overshot) {
+            items.add(new LegendItem("overshoot mixing", null, null, null, new Rectangle(-8, -8, 16, 16),
+                    new Color(OVERSHOOT_SHADE.getRed(), OVERSHOOT_SHADE.getGreen(), OVERSHOOT_SHADE.getBlue(), 140)));
+        }
         plot.setFixedLegendItems(items);
+    }
+
+    /**
+     * Shades the layer between an edge (already placed on the x axis) and the point where overshoot mixing
+     * beyond it ends, placed by its radius.
+     *
+     * @return whether anything was shaded (an edge with overshoot of non-zero extent)
+     */
+    private static boolean shadeOvershoot(ProfileDiagnosis d, XYPlot plot, PlotAxis axis, double[] xs,
+                                          java.util.OptionalDouble reach, double edge, double edgeOnAxis) {
+        if (reach.isEmpty() || reach.getAsDouble() == edge) {
+            return false;
+        }
+        ValueAxis x = plot.getDomainAxis();
+        double a = edgeOnAxis;
+        double b = clamp(onAxis(d, axis, xs, reach.getAsDouble()), x);
+        if (a == b) {
+            return false;
+        }
+        IntervalMarker m = new IntervalMarker(Math.min(a, b), Math.max(a, b));
+        m.setPaint(OVERSHOOT_SHADE);
+        m.setOutlinePaint(null);
+        plot.addDomainMarker(m, Layer.BACKGROUND);
+        return true;
+    }
+
+    /** A point given by its radius on the x axis: r/R directly, otherwise between the zones either side. */
+    private static double onAxis(ProfileDiagnosis d, PlotAxis axis, double[] xs, double radius) {
+        return axis == PlotAxis.RADIUS ? radius / d.radius() : PlotAxis.atRadius(d, xs, radius);
     }
 
     private static void note(JFreeChart chart, int hidden, String what) {

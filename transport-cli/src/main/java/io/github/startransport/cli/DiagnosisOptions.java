@@ -24,8 +24,8 @@ import java.util.function.Supplier;
 
 /**
  * The options that say how profiles are read and diagnosed, shared by {@code diagnose} and
- * {@code track} (a picocli mixin): criterion, convection model and alpha, opacity, and how to
- * read another program's file ({@code --columns}, {@code --delimiter}).
+ * {@code track} (a picocli mixin): criterion, convection model and alpha, opacity, overshoot, and
+ * how to read another program's file ({@code --columns}, {@code --delimiter}).
  */
 final class DiagnosisOptions {
     @Option(names = "--criterion", paramLabel = "schwarzschild|ledoux", defaultValue = "schwarzschild",
@@ -66,6 +66,22 @@ final class DiagnosisOptions {
             description = "What separates the cells of the profile files. Default: ${DEFAULT-VALUE}.")
     Delimiter delimiter;
 
+    @Option(names = "--overshoot-f", paramLabel = "F",
+            description = "Apply exponential diffusive overshoot at both edges of every convective region,"
+                    + " D = D_0 exp(-2|r - r_0|/(F H)) (Freytag, Ludwig & Steffen 1996; Herwig 2000); e.g. 0.016."
+                    + " Default: none.")
+    Double overshootF;
+
+    @Option(names = "--overshoot-f0", paramLabel = "F0",
+            description = "With --overshoot-f or --overshoot-step: take D_0 at F0 H inside each edge, where the"
+                    + " overshoot profile starts. Default: the diagnosis's own (0.005).")
+    Double overshootF0;
+
+    @Option(names = "--overshoot-step", paramLabel = "A",
+            description = "Apply step overshoot instead: D = D_0 up to A H beyond each edge (the temperature"
+                    + " gradient stays radiative there); e.g. 0.2. Default: none.")
+    Double overshootStep;
+
     /** Converts {@code schwarzschild} / {@code ledoux}, any case. */
     static final class CriterionConverter implements ITypeConverter<Criterion> {
         @Override
@@ -99,9 +115,43 @@ final class DiagnosisOptions {
         if (matched(spec, "--alpha") && !(alpha > 0 && Double.isFinite(alpha))) {
             throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not " + alpha);
         }
+        nonNegative(spec, "--overshoot-f", overshootF);
+        nonNegative(spec, "--overshoot-step", overshootStep);
+        if (overshootF0 != null && !(overshootF0 >= 0 && overshootF0 < 1)) {
+            throw new ParameterException(spec.commandLine(), "--overshoot-f0 must be a number in [0, 1), not "
+                    + overshootF0);
+        }
+        if (overshootF != null && overshootF > 0 && overshootStep != null && overshootStep > 0) {
+            throw new ParameterException(spec.commandLine(), "give either --overshoot-f or --overshoot-step, not both:"
+                    + " exponential and step overshoot are alternatives");
+        }
+        if (overshootF0 != null && overshootF == null && overshootStep == null) {
+            throw new ParameterException(spec.commandLine(), "--overshoot-f0 needs --overshoot-f or --overshoot-step");
+        }
         if (opacityTable != null && matched(spec, "--opacity")) {
             throw new ParameterException(spec.commandLine(), "give either --opacity or --opacity-table, not both");
         }
+    }
+
+    private static void nonNegative(CommandSpec spec, String option, Double value) {
+        if (value != null && !(value >= 0 && Double.isFinite(value))) {
+            throw new ParameterException(spec.commandLine(), option + " must be a finite number >= 0, not " + value);
+        }
+    }
+
+    /** @return the diagnosis's options: the overshoot settings given on the command line */
+    private ModelOptions diagnosisOptions() {
+        ModelOptions options = ModelOptions.defaults();
+        if (overshootF != null) {
+            options = options.with(ModelNames.DIAGNOSIS_OVERSHOOT_F, Double.toString(overshootF));
+        }
+        if (overshootF0 != null) {
+            options = options.with(ModelNames.DIAGNOSIS_OVERSHOOT_F0, Double.toString(overshootF0));
+        }
+        if (overshootStep != null) {
+            options = options.with(ModelNames.DIAGNOSIS_OVERSHOOT_STEP, Double.toString(overshootStep));
+        }
+        return options;
     }
 
     /**
@@ -160,7 +210,8 @@ final class DiagnosisOptions {
                     ModelOptions.defaults()));
         }
         ThermodynamicsModel thermo = transport.thermodynamics(null, ModelOptions.defaults());
-        ProfileDiagnoser diagnoser = transport.diagnoser(null, ModelOptions.defaults());
+        ProfileDiagnoser diagnoser = asOption("--overshoot-f", "", () -> transport.diagnoser(null,
+                diagnosisOptions()));
         ModelsUsed used = new ModelsUsed(convectionName == null ? "(default)" : Catalog.bare(convectionName),
                 opacityName == null ? "(default)" : Catalog.bare(opacityName),
                 opacityTable == null ? null : opacityTable.toString());

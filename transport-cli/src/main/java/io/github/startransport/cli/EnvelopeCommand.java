@@ -190,12 +190,20 @@ final class EnvelopeCommand implements Callable<Integer> {
         List<String> warnings;
         try (OutputFolder folder = OutputFolder.open(out, cli.args(), notes)) {
             notes.forEach(n -> cli.err().println("note: " + n));
-            if (calibrateBase != null) {
-                cli.out().printf(Locale.ROOT, "calibrating alpha to r_b/R = %.6f%n", calibrateBase);
-                calibration = integrator.calibrate(star, setup, calibrateBase, this::printStep);
-                envelope = calibration.envelope();
-            } else {
-                envelope = integrator.integrate(star, setup);
+            try {
+                if (calibrateBase != null) {
+                    cli.out().printf(Locale.ROOT, "calibrating alpha to r_b/R = %.6f%n", calibrateBase);
+                    calibration = integrator.calibrate(star, setup, calibrateBase, this::printStep);
+                    envelope = calibration.envelope();
+                } else {
+                    envelope = integrator.integrate(star, setup);
+                }
+            } catch (InvalidInputException e) {
+                if (e.zone() != InvalidInputException.NO_ZONE) {
+                    throw e;
+                }
+                // not about a zone: about the star or a target given on the command line
+                throw new ParameterException(spec.commandLine(), e.getMessage());
             }
             Path dir = folder.staging();
             try {

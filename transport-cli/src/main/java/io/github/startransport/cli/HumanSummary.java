@@ -53,6 +53,10 @@ final class HumanSummary {
                             .append(days(r.turnoverLocal())).append(" (local), max v_conv ")
                             .append(r.maxVelocity().isPresent()
                                     ? String.format(Locale.ROOT, "%.3g cm/s", r.maxVelocity().getAsDouble()) : "n/a");
+                    if (r.overshootBottom().isPresent() || r.overshootTop().isPresent()) {
+                        b.append("   overshoot to r/R ").append(fraction(r.overshootBottom(), d.radius()))
+                                .append(" below, ").append(fraction(r.overshootTop(), d.radius())).append(" above");
+                    }
                 }
                 b.append('\n');
             }
@@ -61,6 +65,10 @@ final class HumanSummary {
         b.append("  timescales: photon diffusion ").append(years(t.photonDiffusion())).append(", thermal diffusion ")
                 .append(years(t.thermalDiffusion())).append(", Kelvin-Helmholtz ").append(years(t.kelvinHelmholtz()))
                 .append('\n');
+        d.seismic().ifPresent(s -> b.append(String.format(Locale.ROOT, "  seismic: acoustic radius %.4g s,"
+                + " large separation %.4g uHz, l = 1 period spacing %s\n", s.acousticRadius(),
+                s.largeSeparation() * 1e6, Double.isFinite(s.periodSpacingL1())
+                        ? String.format(Locale.ROOT, "%.4g s", s.periodSpacingL1()) : "n/a (no zone with N^2 > 0)")));
         for (String w : d.warnings()) {
             b.append("  warning: ").append(w).append('\n');
         }
@@ -72,6 +80,10 @@ final class HumanSummary {
     static String years(double seconds) {
         return seconds > 0 && Double.isFinite(seconds)
                 ? String.format(Locale.ROOT, "%.3g yr", seconds / SummaryJson.JULIAN_YEAR_S) : "n/a";
+    }
+
+    private static String fraction(OptionalDouble r, double radius) {
+        return r.isPresent() ? String.format(Locale.ROOT, "%.4f", r.getAsDouble() / radius) : "-";
     }
 
     private static String days(OptionalDouble seconds) {

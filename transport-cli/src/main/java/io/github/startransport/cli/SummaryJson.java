@@ -7,6 +7,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import io.github.startransport.spi.ProfileDiagnosis;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Region;
+import io.github.startransport.spi.SeismicSummary;
 import io.github.startransport.spi.Timescales;
 
 import java.io.IOException;
@@ -14,8 +15,8 @@ import java.nio.file.Path;
 import java.util.OptionalDouble;
 
 /**
- * Writes {@code summary.json}: the whole-star numbers, the models used, the timescales and the
- * non-radiative regions. Non-finite numbers are written as {@code null} (JSON has no NaN).
+ * Writes {@code summary.json}: the whole-star numbers, the models used, the timescales, the
+ * asymptotic seismic integrals and the non-radiative regions. Non-finite numbers are written as {@code null} (JSON has no NaN).
  */
 final class SummaryJson {
     /** The day (s). */
@@ -52,6 +53,12 @@ final class SummaryJson {
         number(root, "thermal_diffusion_time_yr", t.thermalDiffusion() / JULIAN_YEAR_S);
         number(root, "kelvin_helmholtz_time_yr", t.kelvinHelmholtz() / JULIAN_YEAR_S);
         number(root, "max_nabla_mismatch", diagnosis.maxNablaMismatch());
+        SeismicSummary seismic = diagnosis.seismic().orElse(null);
+        if (seismic != null) {
+            number(root, "acoustic_radius_s", seismic.acousticRadius());
+            number(root, "large_separation_uHz", seismic.largeSeparation() * 1e6);
+            number(root, "period_spacing_l1_s", seismic.periodSpacingL1());
+        }
         ArrayNode regions = root.putArray("regions");
         for (Region r : diagnosis.regions()) {
             ObjectNode o = regions.addObject();
@@ -65,6 +72,15 @@ final class SummaryJson {
                 optional(o, "turnover_time_global_days", r.turnoverGlobal(), DAY_S);
                 optional(o, "turnover_time_local_days", r.turnoverLocal(), DAY_S);
                 optional(o, "max_v_conv_cm_s", r.maxVelocity(), 1.0);
+                optional(o, "overshoot_bottom_cm", r.overshootBottom(), 1.0);
+                optional(o, "overshoot_top_cm", r.overshootTop(), 1.0);
+                optional(o, "margin_inside_bottom", r.marginInsideBottom(), 1.0);
+                optional(o, "margin_inside_top", r.marginInsideTop(), 1.0);
+                SeismicSummary.RegionDepths depths = seismic == null ? null : seismic.depthsOf(r);
+                if (depths != null) {
+                    number(o, "acoustic_depth_bottom_s", depths.acousticDepthBottom());
+                    number(o, "acoustic_depth_top_s", depths.acousticDepthTop());
+                }
             }
         }
         ArrayNode warnings = root.putArray("warnings");

@@ -186,9 +186,11 @@ final class TrackCommand implements Callable<Integer> {
         Double model = number(read, MODEL_NUMBER, true);
         List<TrackPoint.Layer> layers = new ArrayList<>();
         for (Region r : d.regions()) {
+            List<TrackPoint.Layer> over = overshoot(d, r);
+            over.stream().filter(l -> l.rTop() <= r.bottomRadius()).forEach(layers::add);
             layers.add(new TrackPoint.Layer(r.regime().label(), r.bottomMass(), r.topMass(), r.bottomRadius(),
                     r.topRadius()));
-            layers.addAll(overshoot(d, r));
+            over.stream().filter(l -> l.rBottom() >= r.topRadius()).forEach(layers::add);
         }
         return new TrackPoint(job.file().toString(), job.position(), model == null ? null : model.longValue(), age,
                 d.mass(), d.radius(), d.luminosity(), d.timescales(), layers);
@@ -196,11 +198,21 @@ final class TrackCommand implements Callable<Integer> {
 
     /**
      * The layers that overshoot mixes beyond a convective region's edges, when the diagnosis applies
-     * overshoot; each as its own {@link TrackPoint.Layer} of regime {@code overshoot}. Today's
-     * diagnosis reports none, so none are returned.
+     * overshoot ({@code --overshoot-f} or {@code --overshoot-step}): each as its own
+     * {@link TrackPoint.Layer} of regime {@code overshoot}, from the edge to where overshoot mixing ends,
+     * its masses interpolated in r between zones.
      */
     static List<TrackPoint.Layer> overshoot(ProfileDiagnosis d, Region r) {
-        return List.of();
+        List<TrackPoint.Layer> layers = new ArrayList<>();
+        if (r.overshootBottom().isPresent() && r.overshootBottom().getAsDouble() < r.bottomRadius()) {
+            double reach = r.overshootBottom().getAsDouble();
+            layers.add(new TrackPoint.Layer("overshoot", massAt(d, reach), r.bottomMass(), reach, r.bottomRadius()));
+        }
+        if (r.overshootTop().isPresent() && r.overshootTop().getAsDouble() > r.topRadius()) {
+            double reach = r.overshootTop().getAsDouble();
+            layers.add(new TrackPoint.Layer("overshoot", r.topMass(), massAt(d, reach), r.topRadius(), reach));
+        }
+        return layers;
     }
 
     /**

@@ -31,7 +31,7 @@ class DiagnosisChartsTest {
     @Test
     void writesThreePngsOf1200By800(@TempDir Path dir) throws Exception {
         DiagnosisCharts.writeAll(HandMadeDiagnosis.build(), dir);
-        for (String name : List.of("gradients.png", "velocity-mixing.png", "opacity.png")) {
+        for (String name : List.of("gradients.png", "velocity-mixing.png", "opacity.png", "propagation.png")) {
             BufferedImage image = ImageIO.read(dir.resolve(name).toFile());
             assertNotNull(image, name + " is not a readable PNG");
             assertEquals(1200, image.getWidth(), name);
@@ -44,13 +44,32 @@ class DiagnosisChartsTest {
         ProfileDiagnosis d = HandMadeDiagnosis.build();
         XYPlot plot = DiagnosisCharts.gradients(d).getXYPlot();
         long nonRadiative = d.regions().stream().filter(r -> r.regime() != Regime.RADIATIVE).count();
-        assertEquals(nonRadiative, plot.getDomainMarkers(org.jfree.chart.ui.Layer.BACKGROUND).size());
+        long overshootLayers = d.regions().stream().mapToLong(r -> (r.overshootBottom().isPresent() ? 1 : 0)
+                + (r.overshootTop().isPresent() ? 1 : 0)).sum();
+        assertEquals(2, overshootLayers, "the hand-made diagnosis overshoots above its core and below its envelope");
+        assertEquals(nonRadiative + overshootLayers, plot.getDomainMarkers(org.jfree.chart.ui.Layer.BACKGROUND).size());
         List<String> labels = labels(plot.getLegendItems());
         for (Region r : d.regions()) {
             assertTrue(labels.contains(r.regime().label() + " region"), labels.toString());
         }
+        assertTrue(labels.contains("overshoot mixing"), labels.toString());
         assertTrue(labels.stream().anyMatch(l -> l.contains("rad")), labels.toString());
         assertTrue(labels.stream().anyMatch(l -> l.contains("ad")), labels.toString());
+    }
+
+    @Test
+    void overshootLayersAreShadedBetweenTheEdgeAndWhereOvershootEnds() {
+        ProfileDiagnosis d = HandMadeDiagnosis.build();
+        XYPlot plot = DiagnosisCharts.velocityAndMixing(d, new DiagnosisCharts.Style(PlotAxis.RADIUS, "x")).getXYPlot();
+        List<double[]> intervals = new ArrayList<>();
+        for (Object o : plot.getDomainMarkers(org.jfree.chart.ui.Layer.BACKGROUND)) {
+            org.jfree.chart.plot.IntervalMarker m = (org.jfree.chart.plot.IntervalMarker) o;
+            intervals.add(new double[] {m.getStartValue(), m.getEndValue()});
+        }
+        assertTrue(intervals.stream().anyMatch(i -> i[0] == HandMadeDiagnosis.CORE_TOP
+                && i[1] == HandMadeDiagnosis.CORE_OVERSHOOT_TOP), "no layer above the core");
+        assertTrue(intervals.stream().anyMatch(i -> i[0] == HandMadeDiagnosis.ENVELOPE_OVERSHOOT_BOTTOM
+                && i[1] == HandMadeDiagnosis.ENVELOPE_BOTTOM), "no layer below the envelope");
     }
 
     @Test
@@ -215,25 +234,34 @@ class DiagnosisChartsTest {
     }
 
     @Test
-    void onEveryAxisTheRegionsAreShadedWithinTheAxisInTheirOrder() {
+    void onEveryAxisTheRegionsAreShadedWithinTheAxis() {
         ProfileDiagnosis d = HandMadeDiagnosis.build();
         for (PlotAxis axis : PlotAxis.values()) {
             XYPlot plot = DiagnosisCharts.gradients(d, new DiagnosisCharts.Style(axis, "x")).getXYPlot();
+            var x = plot.getDomainAxis();
             List<org.jfree.chart.plot.IntervalMarker> markers = new ArrayList<>();
             for (Object m : plot.getDomainMarkers(org.jfree.chart.ui.Layer.BACKGROUND)) {
                 markers.add((org.jfree.chart.plot.IntervalMarker) m);
             }
-            assertEquals(3, markers.size(), axis.label());
-            var x = plot.getDomainAxis();
-            double previous = Double.NEGATIVE_INFINITY;
+            assertEquals(5, markers.size(), axis.label() + ": three regions and two overshoot layers");
             for (var m : markers) {
                 assertTrue(m.getStartValue() < m.getEndValue(), axis.label());
                 assertTrue(m.getStartValue() >= x.getLowerBound() && m.getEndValue() <= x.getUpperBound(), axis.label());
-                // centre on the left: inverted axes are drawn right to left, so compare in drawing order
-                double start = x.isInverted() ? -m.getEndValue() : m.getStartValue();
-                assertTrue(start >= previous, axis.label());
-                previous = x.isInverted() ? -m.getStartValue() : m.getEndValue();
             }
         }
+        // on the mass axis a region sits at its own mass fractions; the centre is off the scale, at its left end
+        XYPlot plot = DiagnosisCharts.gradients(d, new DiagnosisCharts.Style(PlotAxis.MASS, "x")).getXYPlot();
+        double coreTop = PlotAxis.stretched(Math.pow(HandMadeDiagnosis.CORE_TOP, 1.5));
+        double semiBottom = PlotAxis.stretched(Math.pow(HandMadeDiagnosis.SEMI_BOTTOM, 1.5));
+        double semiTop = PlotAxis.stretched(Math.pow(HandMadeDiagnosis.SEMI_TOP, 1.5));
+        List<double[]> intervals = new ArrayList<>();
+        for (Object o : plot.getDomainMarkers(org.jfree.chart.ui.Layer.BACKGROUND)) {
+            var m = (org.jfree.chart.plot.IntervalMarker) o;
+            intervals.add(new double[] {m.getStartValue(), m.getEndValue()});
+        }
+        double lo = plot.getDomainAxis().getLowerBound();
+        assertTrue(intervals.stream().anyMatch(i -> i[0] == lo && Math.abs(i[1] - coreTop) < 1e-12), "core");
+        assertTrue(intervals.stream().anyMatch(i -> Math.abs(i[0] - semiBottom) < 1e-12
+                && Math.abs(i[1] - semiTop) < 1e-12), "semiconvective shell");
     }
 }

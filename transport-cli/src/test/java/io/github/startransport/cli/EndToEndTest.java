@@ -41,7 +41,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  */
 class EndToEndTest {
     private static final List<String> FILES = List.of("zones.csv", "summary.json", "gradients.png",
-            "velocity-mixing.png", "opacity.png");
+            "velocity-mixing.png", "opacity.png", "propagation.png");
 
     private final Transport transport = Transport.discover();
 
@@ -160,7 +160,7 @@ class EndToEndTest {
         // the year of the summary is the Julian year, 365.25 d of 86400 s (IAU)
         assertEquals(expected.timescales().kelvinHelmholtz() / (365.25 * 86400),
                 s.get("kelvin_helmholtz_time_yr").asDouble(), 1e-12 * s.get("kelvin_helmholtz_time_yr").asDouble());
-        for (String png : List.of("gradients.png", "velocity-mixing.png", "opacity.png")) {
+        for (String png : List.of("gradients.png", "velocity-mixing.png", "opacity.png", "propagation.png")) {
             BufferedImage image = ImageIO.read(out.resolve(png).toFile());
             assertNotNull(image, png);
             assertEquals(1200, image.getWidth());
@@ -192,6 +192,28 @@ class EndToEndTest {
         assertEquals("ledoux", s.get("criterion").asText());
         assertEquals(2.0, s.get("alpha").asDouble());
         assertZonesEqual(library(demo(), "ledoux", "2.0"), out);
+    }
+
+    @Test
+    void overshootOptionsReachTheDiagnosisAndItsOutputs(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("out");
+        Runs r = Runs.run("diagnose", "--demo", "--overshoot-f", "0.016", "--overshoot-f0", "0.004", "--out",
+                out.toString());
+        assertEquals(0, r.code(), r.toString());
+        DiagnosisSetup setup = new DiagnosisSetup(transport.convection(null, ModelOptions.defaults()),
+                transport.opacity(null, ModelOptions.defaults()), transport.thermodynamics(null, ModelOptions.defaults()));
+        ProfileDiagnosis expected = transport.diagnoser(null, ModelOptions.parse("overshoot-f=0.016,overshoot-f0=0.004"))
+                .diagnose(demo(), setup);
+        assertZonesEqual(expected, out);
+        JsonNode regions = summary(out).get("regions");
+        assertEquals(expected.regions().get(0).overshootTop().orElseThrow(),
+                regions.get(0).get("overshoot_top_cm").asDouble());
+        assertTrue(regions.get(0).get("overshoot_bottom_cm").isNull(), regions.toString());
+        assertTrue(zones(out).stream().anyMatch(z -> Double.parseDouble(z.get("D_overshoot_cm2_s")) > 0.0));
+        // without the option the column is all zeros
+        Path plain = dir.resolve("plain");
+        assertEquals(0, Runs.run("diagnose", "--demo", "--out", plain.toString()).code());
+        assertTrue(zones(plain).stream().allMatch(z -> Double.parseDouble(z.get("D_overshoot_cm2_s")) == 0.0));
     }
 
     @Test

@@ -80,7 +80,7 @@ class EnvelopeCommandTest {
     }
 
     @Test
-    void badInputExitsOneWithAMessageAndWritesNothing(@TempDir Path dir) {
+    void badOptionValuesAreUsageErrorsWithAMessageAndWriteNothing(@TempDir Path dir) {
         Path out = dir.resolve("never");
         String[][] bad = {
             {"--luminosity-lsun", "0"},
@@ -108,7 +108,7 @@ class EnvelopeCommandTest {
             all[all.length - 2] = "--out";
             all[all.length - 1] = out.toString();
             Runs r = Runs.run(all);
-            assertEquals(1, r.code(), r.toString());
+            assertEquals(2, r.code(), r.toString());
             assertTrue(r.err().contains(field[i]), r.err());
             assertFalse(Files.exists(out), "nothing written for " + String.join(" ", bad[i]));
         }

@@ -240,4 +240,29 @@ class TrackCommandTest {
                     s.map(p -> p.getFileName().toString()).sorted().toList());
         }
     }
+
+    @Test
+    void overshootLayersAreRowsOfTheirOwnBesideTheirRegionAndAreShaded(@TempDir Path dir) throws IOException {
+        List<Path> files = TrackSequence.write(dir, 2, true);
+        Path out = dir.resolve("out");
+        Runs r = Runs.run(args(files, "--out", out.toString(), "--overshoot-f", "0.016"));
+        assertEquals(0, r.code(), r.toString());
+        List<CSVRecord> rows = of(rows(out.resolve("track.csv")), 100);
+        assertEquals("convective", rows.get(0).get("regime"));
+        assertEquals("overshoot", rows.get(1).get("regime"));
+        // the layer above the core starts at the core's top and reaches further out
+        assertEquals(rows.get(0).get("m_top_g"), rows.get(1).get("m_bottom_g"));
+        assertTrue(Double.parseDouble(rows.get(1).get("m_top_g")) > Double.parseDouble(rows.get(1).get("m_bottom_g")));
+        assertTrue(Double.parseDouble(rows.get(1).get("r_top_cm")) > Double.parseDouble(rows.get(1).get("r_bottom_cm")));
+        TrackCommand.Track track = TrackCommand.Track.of(List.of(new TrackPoint("a.csv", 1, 1L, 0.0, 2e33, 7e10, 4e33,
+                new io.github.startransport.spi.Timescales(1, 2, 3), List.of(
+                        new TrackPoint.Layer("convective", 0, 4e32, 0, 1e10),
+                        new TrackPoint.Layer("overshoot", 4e32, 5e32, 1e10, 1.2e10)))));
+        org.jfree.chart.LegendItemCollection legend = TrackChart.chart(track).getXYPlot().getLegendItems();
+        List<String> labels = new ArrayList<>();
+        for (int i = 0; i < legend.getItemCount(); i++) {
+            labels.add(legend.get(i).getLabel());
+        }
+        assertTrue(labels.contains("overshoot") && labels.contains("convective"), labels.toString());
+    }
 }

@@ -21,6 +21,10 @@ class ZoneTableTest {
     private static final String ISSUE_HEADER = "r_cm,m_g,T_K,rho_g_cm3,P_dyn_cm2,L_erg_s,X,Z,kappa_cm2_g,cp_erg_g_K,delta,"
             + "nabla_ad,nabla_mu,g_cm_s2,H_P_cm,nabla_rad,nabla_ledoux,regime,nabla,nabla_model,nabla_mismatch,nabla_e,"
             + "v_conv_cm_s,flux_conv_frac,D_mix_cm2_s";
+    /** The columns issue 14 adds after them, verbatim. */
+    private static final String ISSUE_14_COLUMNS = ",Gamma1,phi,c_s_cm_s,N2_rad2_s2,S1_rad_s";
+    /** The column issue 15 adds at the end, verbatim. */
+    private static final String ISSUE_15_COLUMNS = ",D_overshoot_cm2_s";
 
     @Test
     void headerIsExactlyTheIssuesAndEveryCellReadsBackToTheSameDouble(@TempDir Path dir) throws Exception {
@@ -28,7 +32,7 @@ class ZoneTableTest {
         Path file = dir.resolve("zones.csv");
         ZoneTable.write(d, file);
         List<String> lines = Files.readAllLines(file);
-        assertEquals(ISSUE_HEADER, lines.get(0));
+        assertEquals(ISSUE_HEADER + ISSUE_14_COLUMNS + ISSUE_15_COLUMNS, lines.get(0));
         try (Reader in = Files.newBufferedReader(file);
              CSVParser csv = CSVParser.parse(in, CSVFormat.DEFAULT.builder().setHeader().get())) {
             List<CSVRecord> rows = csv.getRecords();

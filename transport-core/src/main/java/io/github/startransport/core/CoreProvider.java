@@ -1,5 +1,6 @@
 package io.github.startransport.core;
 
+import io.github.startransport.core.convection.EddySpectrumConvection;
 import io.github.startransport.core.convection.LocalMixingLength;
 import io.github.startransport.core.convection.TransparentEddyMixingLength;
 import io.github.startransport.core.envelope.GreyAtmosphereEnvelope;
@@ -7,6 +8,8 @@ import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.model.DemoStar;
 import io.github.startransport.core.profile.LocalDiagnosis;
+import io.github.startransport.core.seismic.LocalBuoyancy;
+import io.github.startransport.core.thermo.IonisingGas;
 import io.github.startransport.core.opacity.AnalyticOpacity;
 import io.github.startransport.core.opacity.CsvTableTool;
 import io.github.startransport.core.opacity.TabulatedOpacity;
@@ -35,15 +38,18 @@ public final class CoreProvider implements TransportProvider {
     /** In each family the first entry is the default. */
     private static final List<Entry> ENTRIES = List.of(
             new Entry(GradientStability.INFO, GradientStability::fromOptions),
+            new Entry(IonisingGas.INFO, IonisingGas::fromOptions),
             new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions),
             new Entry(LocalMixingLength.INFO, LocalMixingLength::fromOptions),
             new Entry(TransparentEddyMixingLength.INFO, TransparentEddyMixingLength::fromOptions),
+            new Entry(EddySpectrumConvection.INFO, EddySpectrumConvection::fromOptions),
             new Entry(AnalyticOpacity.INFO, AnalyticOpacity::fromOptions),
             new Entry(TabulatedOpacity.INFO, TabulatedOpacity::fromOptions),
             new Entry(CsvTableTool.INFO, CsvTableTool::fromOptions),
             new Entry(LocalDiagnosis.INFO, LocalDiagnosis::fromOptions),
             new Entry(GreyAtmosphereEnvelope.INFO, GreyAtmosphereEnvelope::fromOptions),
-            new Entry(DemoStar.INFO, DemoStar::fromOptions));
+            new Entry(DemoStar.INFO, DemoStar::fromOptions),
+            new Entry(LocalBuoyancy.INFO, LocalBuoyancy::fromOptions));
 
     /** Public no-argument constructor, as {@link java.util.ServiceLoader} requires. */
     public CoreProvider() {
@@ -56,8 +62,9 @@ public final class CoreProvider implements TransportProvider {
 
     @Override
     public String description() {
-        return "startransport's own physics: stability tests, ideal gas plus radiation, mixing-length convection, "
-                + "opacities (analytic and tabulated), profile diagnosis, envelope integration, demo star";
+        return "startransport's own physics: stability tests, partially ionised gas (Saha) and ideal gas plus radiation, "
+                + "mixing-length and full-spectrum convection, opacities (analytic and tabulated), profile diagnosis, envelope integration, "
+                + "demo star, buoyancy and acoustic frequencies";
     }
 
     @Override

@@ -32,11 +32,15 @@ public final class ModelFamily<T> {
     /** Envelopes integrated inward from a model atmosphere, and the alpha calibration they allow. */
     public static final ModelFamily<EnvelopeIntegrator> ENVELOPE =
             new ModelFamily<>("envelope", EnvelopeIntegrator.class);
+
+    /** Local oscillation frequencies of a zone: N^2 with its Jacobian, sound speed, Lamb frequency. */
+    public static final ModelFamily<BuoyancyModel> BUOYANCY = new ModelFamily<>("buoyancy", BuoyancyModel.class);
+
     /** Built-in stellar models that need no input file. */
     public static final ModelFamily<StarModel> STAR = new ModelFamily<>("star", StarModel.class);
 
     private static final List<ModelFamily<?>> ALL =
-            List.of(STABILITY, THERMODYNAMICS, CONVECTION, OPACITY, OPACITY_TABLES, DIAGNOSIS, ENVELOPE, STAR);
+            List.of(STABILITY, THERMODYNAMICS, CONVECTION, OPACITY, OPACITY_TABLES, DIAGNOSIS, ENVELOPE, STAR, BUOYANCY);
 
     private final String name;
     private final Class<T> type;

@@ -35,7 +35,9 @@ public enum ProfileColumn {
     /** Composition gradient nabla_mu = d ln mu / d ln P, finite. Optional. */
     NABLA_MU("nabla_mu", "1", false),
     /** phi = (d ln rho / d ln mu)_{P,T}, &gt; 0. Optional. */
-    PHI("phi", "1", false);
+    PHI("phi", "1", false),
+    /** First adiabatic exponent Gamma_1 = (d ln P / d ln rho)_s, &gt; 0. Optional. */
+    GAMMA1("Gamma1", "1", false);
 
     private final String header;
     private final String unit;

@@ -3,6 +3,7 @@ package io.github.startransport.spi;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * The diagnosis of one profile: per-zone columns (centre to surface), regimes, regions,
@@ -17,6 +18,7 @@ public final class ProfileDiagnosis {
     private final List<Region> regions;
     private final Timescales timescales;
     private final List<String> warnings;
+    private final SeismicSummary seismic;
 
     /**
      * @param source     where the profile came from
@@ -57,6 +59,51 @@ public final class ProfileDiagnosis {
         this.regions = List.copyOf(regions);
         this.timescales = timescales;
         this.warnings = List.copyOf(warnings);
+        this.seismic = null;
+    }
+
+    /**
+     * @param source     where the profile came from
+     * @param criterion  criterion the regimes were decided by
+     * @param alpha      mixing-length parameter used
+     * @param columns    every {@link DiagnosisColumn}, each as long as {@code regimes}
+     * @param regimes    regime per zone
+     * @param regions    non-radiative regions, centre to surface
+     * @param timescales whole-star timescales
+     * @param warnings   what the diagnosis had to assume or could not trust, one sentence each
+     * @param seismic    whole-model seismic integrals, or {@code null} when not computed
+     */
+    public ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
+                            Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings,
+                            SeismicSummary seismic) {
+        this(new ProfileDiagnosis(source, criterion, alpha, columns, regimes, regions, timescales, warnings, true),
+                seismic);
+    }
+
+    /** The same diagnosis (its arrays shared: they are never handed out) with the seismic integrals. */
+    private ProfileDiagnosis(ProfileDiagnosis d, SeismicSummary seismic) {
+        this.source = d.source;
+        this.criterion = d.criterion;
+        this.alpha = d.alpha;
+        this.columns = d.columns;
+        this.regimes = d.regimes;
+        this.regions = d.regions;
+        this.timescales = d.timescales;
+        this.warnings = d.warnings;
+        this.seismic = seismic;
+    }
+
+    /**
+     * @param seismic whole-model seismic integrals of this diagnosis
+     * @return this diagnosis with them (nothing copied: the columns are never handed out)
+     */
+    public ProfileDiagnosis withSeismic(SeismicSummary seismic) {
+        return new ProfileDiagnosis(this, seismic);
+    }
+
+    /** @return the whole-model seismic integrals, when the diagnoser computed them */
+    public Optional<SeismicSummary> seismic() {
+        return Optional.ofNullable(seismic);
     }
 
     /** @return where the profile came from */

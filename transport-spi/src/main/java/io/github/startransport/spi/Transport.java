@@ -320,6 +320,19 @@ public final class Transport {
     }
 
     /**
+     * Shortcut for {@code model(ModelFamily.BUOYANCY, name, options)}.
+     *
+     * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default
+     * @param options the model's options
+     * @return the model, immutable and thread-safe
+     * @throws DiscoveryException     when no provider offers the name, or several do
+     * @throws InvalidOptionException when an option is unknown to the model or its value is refused
+     */
+    public BuoyancyModel buoyancy(String name, ModelOptions options) {
+        return model(ModelFamily.BUOYANCY, name, options);
+    }
+
+    /**
      * Shortcut for {@code model(ModelFamily.OPACITY_TABLES, name, options)}.
      *
      * @param name    the model's name, or {@code provider/model}; {@code null} for the family's default

@@ -45,4 +45,16 @@ public final class Codata2018 {
      * CODATA does not list a; it is derived here from the two exact constants above.
      */
     public static final double RADIATION_CONSTANT = 4.0 * STEFAN_BOLTZMANN / SPEED_OF_LIGHT;
+
+    /**
+     * Electron volt 1 eV = 1.602176634e-12 erg (exact since the 2019 SI: e = 1.602176634e-19 C
+     * times 1 V, times 1e7 erg/J).
+     */
+    public static final double ELECTRON_VOLT = 1.602176634e-12;
+
+    /**
+     * Elementary charge in Gaussian units e = 4.803204712570263e-10 statC (exact: 1.602176634e-19 C
+     * times c / 10 in cgs, 1 C = c/10 statC with c in cm s^-1).
+     */
+    public static final double ELEMENTARY_CHARGE_ESU = 1.602176634e-20 * SPEED_OF_LIGHT;
 }

@@ -100,4 +100,86 @@ public final class GasRadiation {
     public static double gamma1(double beta) {
         return (32.0 - 24.0 * beta - 3.0 * beta * beta) / (24.0 - 21.0 * beta);
     }
+
+    /**
+     * @param beta P_gas / P, in (0, 1]
+     * @return chi_T = (d ln P / d ln T)_rho = 4 - 3 beta
+     */
+    public static double chiT(double beta) {
+        return 4.0 - 3.0 * beta;
+    }
+
+    /**
+     * @param beta P_gas / P, in (0, 1]
+     * @param mu   mean molecular weight
+     * @return c_V = (k / mu m_u) (3/2 + 12 (1 - beta) / beta) (erg g^-1 K^-1), from
+     *         u = 3 k T / (2 mu m_u) + a T^4 / rho
+     */
+    public static double cv(double beta, double mu) {
+        return Codata2018.BOLTZMANN / (mu * Codata2018.ATOMIC_MASS_UNIT) * (1.5 + 12.0 * (1.0 - beta) / beta);
+    }
+
+    /**
+     * @param beta P_gas / P, in (0, 1]
+     * @return d nabla_ad / d beta, from {@link #nablaAd(double)}
+     */
+    public static double dNablaAdDBeta(double beta) {
+        double d = 32.0 - 24.0 * beta - 3.0 * beta * beta;
+        return (-6.0 * d + 2.0 * (4.0 - 3.0 * beta) * (24.0 + 6.0 * beta)) / (d * d);
+    }
+
+    /**
+     * @param beta P_gas / P, in (0, 1]
+     * @param mu   mean molecular weight
+     * @return d c_P / d beta (erg g^-1 K^-1), from {@link #cp(double, double)}
+     */
+    public static double dCpDBeta(double beta, double mu) {
+        double n = 32.0 - 24.0 * beta - 3.0 * beta * beta;
+        return Codata2018.BOLTZMANN / (mu * Codata2018.ATOMIC_MASS_UNIT)
+                * ((-24.0 - 6.0 * beta) / (2.0 * beta * beta) - n / (beta * beta * beta));
+    }
+
+    /**
+     * @param beta P_gas / P, in (0, 1]
+     * @return d delta / d beta = -4 / beta^2
+     */
+    public static double dDeltaDBeta(double beta) {
+        return -4.0 / (beta * beta);
+    }
+
+    /**
+     * @param beta P_gas / P, in (0, 1]
+     * @return d Gamma_1 / d beta, from {@link #gamma1(double)}
+     */
+    public static double dGamma1DBeta(double beta) {
+        double d = 24.0 - 21.0 * beta;
+        return ((-24.0 - 6.0 * beta) * d + 21.0 * (32.0 - 24.0 * beta - 3.0 * beta * beta)) / (d * d);
+    }
+
+    /**
+     * Free electrons per m_u of a fully ionised mixture, X + Y/2 + Z/2 = (1 + X) / 2 (metals
+     * counted as A/2 electrons per nucleus, as in {@link #meanMolecularWeight}).
+     *
+     * @param hydrogen X
+     * @return electrons per atomic mass unit (dimensionless)
+     */
+    public static double electronsPerMassUnit(double hydrogen) {
+        return 0.5 * (1.0 + hydrogen);
+    }
+
+    /**
+     * Electron degeneracy indicator n_e lambda_e^3 / 2 with lambda_e = h / sqrt(2 pi m_e k T), the
+     * thermal de Broglie wavelength: exp(eta) for non-degenerate electrons (Landau &amp; Lifshitz,
+     * Statistical Physics, §56). Formed from logarithms; at least Double.MAX_VALUE / 1e4 is
+     * returned as that.
+     *
+     * @param temperature     T (K)
+     * @param electronDensity n_e (cm^-3)
+     * @return n_e lambda_e^3 / 2 (dimensionless)
+     */
+    public static double electronDegeneracy(double temperature, double electronDensity) {
+        double lnLambda3 = 1.5 * Math.log(Codata2018.PLANCK * Codata2018.PLANCK
+                / (2.0 * Math.PI * Codata2018.ELECTRON_MASS * Codata2018.BOLTZMANN * temperature));
+        return 0.5 * Math.exp(Math.min(700.0, Math.log(electronDensity) + lnLambda3));
+    }
 }

@@ -1,7 +1,11 @@
 package io.github.startransport.core.profile;
 
 import io.github.startransport.core.constants.Codata2018;
+import io.github.startransport.core.convection.OvershootMixing;
+import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.gradient.LedouxGradient;
+import io.github.startransport.core.seismic.AsymptoticIntegrals;
+import io.github.startransport.core.seismic.LocalFrequencies;
 import io.github.startransport.core.gradient.StabilityClassifier;
 import io.github.startransport.core.timescale.Timescale;
 import io.github.startransport.spi.ConvectionModel;
@@ -10,6 +14,8 @@ import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.DiagnosisColumn;
 import io.github.startransport.spi.DiagnosisSetup;
 import io.github.startransport.spi.InvalidInputException;
+import io.github.startransport.spi.InvalidOptionException;
+import io.github.startransport.spi.OptionInfo;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
@@ -20,6 +26,7 @@ import io.github.startransport.spi.ProfileDiagnoser;
 import io.github.startransport.spi.ProfileDiagnosis;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Region;
+import io.github.startransport.spi.SeismicSummary;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.Timescales;
 import io.github.startransport.spi.ZoneState;
@@ -35,10 +42,16 @@ import java.util.OptionalDouble;
  * Zone-by-zone diagnosis of a whole profile with local models: per-zone gradients and
  * convection, regions with interpolated boundaries, and timescales.
  *
- * <p>Missing optional columns are filled: kappa from the setup's opacity model; nabla_ad, c_P and
- * delta from its thermodynamics model (a warning says so, and counts zones cooler than
- * {@value #PARTIAL_IONISATION_T} K where a fully ionised fallback is wrong); nabla_mu from the
- * composition ({@link CompositionGradient}); phi = 1 (ideal gas).
+ * <p>Missing optional columns are filled: kappa from the setup's opacity model; nabla_ad, c_P,
+ * delta, Gamma_1 and phi from its thermodynamics model, called with the profile's rho and T (a warning
+ * says so, and counts the zones where that model leaves its validity: degenerate electrons, pressure
+ * ionisation, a pressure more than 1 % from the profile's; with the fully ionised fallback, zones
+ * cooler than {@value #PARTIAL_IONISATION_T} K); nabla_mu from the composition
+ * ({@link CompositionGradient}). Dimensional quantities use the profile's own P: H_P,
+ * c_s = sqrt(Gamma_1 P / rho), N^2 = (g^2 rho / P) delta (nabla_L - nabla) with the actual nabla, and
+ * S_1 = sqrt(2) c_s / r ({@link LocalFrequencies}); the whole-model integrals (acoustic radius, large
+ * separation, l = 1 period spacing, acoustic depths of convective edges) follow from them
+ * ({@link AsymptoticIntegrals}).
  *
  * <p>Region boundaries lie where the quantity that separates the two regimes changes sign, found
  * by {@link BoundaryFinder} between the two zones: the chosen criterion's convective margin
@@ -57,25 +70,86 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
     /** Below this temperature (K) a fully ionised equation of state is not to be trusted. */
     public static final double PARTIAL_IONISATION_T = 1e5;
 
-    /** Describes this model (it takes no options). */
+    /** Option: f of exponential overshoot applied in the diagnosis; 0 (the default) applies none. */
+    public static final String OVERSHOOT_F = "overshoot-f";
+    /** Option: f0, where D_0 of overshoot is taken, in units of H inside the edge. */
+    public static final String OVERSHOOT_F0 = "overshoot-f0";
+    /** Option: alpha_ov of step overshoot, in units of H; 0 (the default) applies none. */
+    public static final String OVERSHOOT_STEP = "overshoot-step";
+    /** Option: the coefficient below which overshoot mixing ends (cm^2 s^-1). */
+    public static final String OVERSHOOT_FLOOR = "overshoot-floor";
+
+    /** Describes this model and its options (overshoot, off by default). */
     public static final ModelInfo INFO = new ModelInfo(ModelFamily.DIAGNOSIS, NAME,
             "zone-by-zone diagnosis with local models: gradients, regime, convection, mixing; regions with "
-                    + "boundaries interpolated between zones; photon, thermal and Kelvin-Helmholtz timescales; "
-                    + "convective turnover times", List.of());
+                    + "boundaries interpolated between zones and their self-consistency (Gabriel et al. 2014); "
+                    + "overshoot mixing at the edges of convective regions (off by default); photon, thermal and "
+                    + "Kelvin-Helmholtz timescales; convective turnover times",
+            List.of(new OptionInfo(OVERSHOOT_F, "0", "1",
+                            "f of exponential diffusive overshoot, D = D_0 exp(-2|r - r_0|/(f H)) (Freytag, Ludwig & "
+                                    + "Steffen 1996; Herwig 2000); 0: none"),
+                    new OptionInfo(OVERSHOOT_F0, Double.toString(OvershootMixing.DEFAULT_F0), "1",
+                            "D_0 is taken f0 H inside each convective edge, where the exponential starts "
+                                    + "(Pedersen et al. 2018 use 0.005)"),
+                    new OptionInfo(OVERSHOOT_STEP, "0", "1",
+                            "alpha_ov of step overshoot: D = D_0 up to alpha_ov H beyond each edge, nabla left "
+                                    + "radiative; 0: none; not together with overshoot-f"),
+                    new OptionInfo(OVERSHOOT_FLOOR, Double.toString(OvershootMixing.DEFAULT_FLOOR), "cm^2 s^-1",
+                            "overshoot mixing ends where its coefficient falls below this")));
 
-    /** The one instance: the model has no parameters. */
-    public static final LocalDiagnosis INSTANCE = new LocalDiagnosis();
+    /** The diagnosis with every option at its default (no overshoot). */
+    public static final LocalDiagnosis INSTANCE = new LocalDiagnosis(0.0, OvershootMixing.DEFAULT_F0, 0.0,
+            OvershootMixing.DEFAULT_FLOOR);
 
-    private LocalDiagnosis() {
+    /** f of exponential overshoot (dimensionless). */
+    private final double overshootF;
+    /** f0 (dimensionless). */
+    private final double overshootF0;
+    /** alpha_ov of step overshoot (dimensionless). */
+    private final double overshootStep;
+    /** Floor of the overshoot coefficient (cm^2 s^-1). */
+    private final double overshootFloor;
+
+    private LocalDiagnosis(double overshootF, double overshootF0, double overshootStep, double overshootFloor) {
+        OvershootMixing.checkSettings(overshootF, overshootF0, overshootStep, overshootFloor);
+        this.overshootF = overshootF;
+        this.overshootF0 = overshootF0;
+        this.overshootStep = overshootStep;
+        this.overshootFloor = overshootFloor;
     }
 
     /**
-     * @param options must be empty
+     * @param options {@value #OVERSHOOT_F}, {@value #OVERSHOOT_F0}, {@value #OVERSHOOT_STEP},
+     *                {@value #OVERSHOOT_FLOOR} (see {@link #INFO})
      * @return the model
+     * @throws InvalidOptionException for an unknown option or a value out of range
      */
     public static LocalDiagnosis fromOptions(ModelOptions options) {
         options.requireKnown(NAME, INFO.optionNames());
-        return INSTANCE;
+        double f = options.getDouble(NAME, OVERSHOOT_F, 0.0);
+        double f0 = options.getDouble(NAME, OVERSHOOT_F0, OvershootMixing.DEFAULT_F0);
+        double step = options.getDouble(NAME, OVERSHOOT_STEP, 0.0);
+        double floor = options.getDouble(NAME, OVERSHOOT_FLOOR, OvershootMixing.DEFAULT_FLOOR);
+        try {
+            return new LocalDiagnosis(f, f0, step, floor);
+        } catch (InvalidInputException e) {
+            throw new InvalidOptionException(NAME, e.field(), Double.toString(e.value()), e.requirement());
+        }
+    }
+
+    /** @return whether this diagnosis applies overshoot (f &gt; 0 or alpha_ov &gt; 0) */
+    public boolean appliesOvershoot() {
+        return overshootF > 0.0 || overshootStep > 0.0;
+    }
+
+    /**
+     * Overshoot with this diagnosis's settings: see {@link OvershootMixing#profile}.
+     */
+    @Override
+    public void overshoot(double[] radius, double[] scaleHeight, double[] diffusion, double[] regionBottom,
+                          double[] regionTop, double[] overshoot, double[] reachBottom, double[] reachTop) {
+        OvershootMixing.profile(radius, scaleHeight, diffusion, regionBottom, regionTop, overshootF, overshootF0,
+                overshootStep, overshootFloor, overshoot, reachBottom, reachTop);
     }
 
     @Override
@@ -102,7 +176,11 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] nablaAd = columnOr(p, ProfileColumn.NABLA_AD, 0.0);
         double[] cp = columnOr(p, ProfileColumn.CP, 0.0);
         double[] delta = columnOr(p, ProfileColumn.DELTA, 0.0);
-        double[] phi = columnOr(p, ProfileColumn.PHI, 1.0); // ideal gas
+        boolean hasPhi = p.has(ProfileColumn.PHI);
+        double[] phi = columnOr(p, ProfileColumn.PHI, 1.0); // ideal gas, unless the thermodynamics model says
+        boolean hasGamma1 = p.has(ProfileColumn.GAMMA1);
+        double[] gamma1 = columnOr(p, ProfileColumn.GAMMA1, 0.0);
+        boolean useThermo = !hasThermo || !hasGamma1 || !hasPhi;
         double[] nablaMu;
         if (p.has(ProfileColumn.NABLA_MU)) {
             nablaMu = ColumnSharing.read(p, ProfileColumn.NABLA_MU);
@@ -133,6 +211,10 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] v = computed(out, DiagnosisColumn.VELOCITY, n);
         double[] fconv = computed(out, DiagnosisColumn.CONVECTIVE_FRACTION, n);
         double[] dmix = computed(out, DiagnosisColumn.DIFFUSION, n);
+        double[] soundSpeed = computed(out, DiagnosisColumn.SOUND_SPEED, n);
+        double[] n2 = computed(out, DiagnosisColumn.BUOYANCY_SQUARED, n);
+        double[] lamb1 = computed(out, DiagnosisColumn.LAMB_L1, n);
+        ThermoChecks thermoChecks = new ThermoChecks();
         double[] ell = new double[n];
         double[] marginS = new double[n];
         double[] marginL = new double[n];
@@ -144,62 +226,109 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         OpacityResult opacity = new OpacityResult();
         ConvectionResult conv = new ConvectionResult();
         int cool = 0;
-        for (int k = 0; k < n; k++) {
-            zone.zone = zoneAsGiven(p, k);
-            zone.radius = r[k];
-            zone.mass = m[k];
-            zone.temperature = t[k];
-            zone.density = rho[k];
-            zone.pressure = pres[k];
-            zone.luminosity = lum[k];
-            zone.hydrogen = x[k];
-            zone.metals = z[k];
-            if (!hasThermo) {
-                setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone.zone, thermo);
-                if (!p.has(ProfileColumn.NABLA_AD)) {
-                    nablaAd[k] = thermo.nablaAd;
+        // a convection model whose length scale is the distance to the nearest edge needs the edges first: a
+        // first pass fills every zone's inputs, EdgeDistances classifies them and locates the edges, and the
+        // second pass solves with the distances (one pass, filling and solving, for every other model)
+        final boolean deferred = convection.needsEdgeDistance();
+        double[] edgeDistance = null;
+        for (int pass = deferred ? 0 : 1; pass <= 1; pass++) {
+            for (int k = 0; k < n; k++) {
+                zone.zone = zoneAsGiven(p, k);
+                zone.radius = r[k];
+                zone.mass = m[k];
+                zone.temperature = t[k];
+                zone.density = rho[k];
+                zone.pressure = pres[k];
+                zone.luminosity = lum[k];
+                zone.hydrogen = x[k];
+                zone.metals = z[k];
+                if (pass == 0 || !deferred) {
+                    if (useThermo) {
+                        setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone.zone, thermo);
+                        if (!hasThermo) {
+                            if (!p.has(ProfileColumn.NABLA_AD)) {
+                                nablaAd[k] = thermo.nablaAd;
+                            }
+                            if (!p.has(ProfileColumn.CP)) {
+                                cp[k] = thermo.cp;
+                            }
+                            if (!p.has(ProfileColumn.DELTA)) {
+                                delta[k] = thermo.delta;
+                            }
+                            if (t[k] < PARTIAL_IONISATION_T) {
+                                cool++;
+                            }
+                        }
+                        if (!hasGamma1) {
+                            gamma1[k] = thermo.gamma1;
+                        }
+                        if (!hasPhi) {
+                            phi[k] = thermo.phi;
+                        }
+                        thermoChecks.add(thermo, pres[k]);
+                    }
+                    if (!hasKappa) {
+                        setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone.zone, opacity);
+                        kappa[k] = opacity.kappa;
+                    }
                 }
-                if (!p.has(ProfileColumn.CP)) {
-                    cp[k] = thermo.cp;
+                if (pass == 0) {
+                    continue;
                 }
-                if (!p.has(ProfileColumn.DELTA)) {
-                    delta[k] = thermo.delta;
+                if (edgeDistance != null) {
+                    zone.edgeDistance = edgeDistance[k];
                 }
-                if (t[k] < PARTIAL_IONISATION_T) {
-                    cool++;
-                }
+                zone.opacity = kappa[k];
+                zone.nablaAd = nablaAd[k];
+                zone.cp = cp[k];
+                zone.delta = delta[k];
+                zone.phi = phi[k];
+                zone.nablaMu = nablaMu[k];
+                convection.solve(zone, conv);
+                g[k] = Codata2018.GRAVITATIONAL_CONSTANT * m[k] / (r[k] * r[k]);
+                hp[k] = pres[k] / (rho[k] * g[k]);
+                nablaRad[k] = conv.nablaRad;
+                nablaL[k] = LedouxGradient.value(nablaAd[k], phi[k], delta[k], nablaMu[k]);
+                nabla[k] = conv.nabla;
+                nablaE[k] = conv.nablaElement;
+                v[k] = conv.velocity;
+                fconv[k] = conv.convectiveFraction;
+                dmix[k] = conv.diffusion;
+                ell[k] = conv.mixingLength;
+                regimes[k] = conv.regime;
+                soundSpeed[k] = LocalFrequencies.soundSpeed(gamma1[k], pres[k], rho[k]);
+                n2[k] = LocalFrequencies.buoyancySquared(r[k], m[k], rho[k], pres[k], delta[k], nablaAd[k], phi[k],
+                        nablaMu[k], nabla[k]);
+                lamb1[k] = LocalFrequencies.lamb(1, soundSpeed[k], r[k]);
+                marginS[k] = nablaRad[k] - nablaAd[k];
+                marginL[k] = nablaRad[k] - nablaL[k];
+                marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
             }
-            if (!hasKappa) {
-                setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone.zone, opacity);
-                kappa[k] = opacity.kappa;
+            if (pass == 0) {
+                edgeDistance = EdgeDistances.of(criterion, r, m, t, pres, lum, kappa, nablaAd, delta, phi, nablaMu);
             }
-            zone.opacity = kappa[k];
-            zone.nablaAd = nablaAd[k];
-            zone.cp = cp[k];
-            zone.delta = delta[k];
-            zone.phi = phi[k];
-            zone.nablaMu = nablaMu[k];
-            convection.solve(zone, conv);
-            g[k] = Codata2018.GRAVITATIONAL_CONSTANT * m[k] / (r[k] * r[k]);
-            hp[k] = pres[k] / (rho[k] * g[k]);
-            nablaRad[k] = conv.nablaRad;
-            nablaL[k] = LedouxGradient.value(nablaAd[k], phi[k], delta[k], nablaMu[k]);
-            nabla[k] = conv.nabla;
-            nablaE[k] = conv.nablaElement;
-            v[k] = conv.velocity;
-            fconv[k] = conv.convectiveFraction;
-            dmix[k] = conv.diffusion;
-            ell[k] = conv.mixingLength;
-            regimes[k] = conv.regime;
-            marginS[k] = nablaRad[k] - nablaAd[k];
-            marginL[k] = nablaRad[k] - nablaL[k];
-            marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
         }
         if (!hasThermo) {
+            boolean fullyIonised = IdealGasRadiation.NAME.equals(setup.thermodynamics().toString());
             warnings.add("nabla_ad, c_P and delta were computed by " + setup.thermodynamics()
-                    + " (fully ionised ideal gas plus radiation): a fallback, not the model's own equation of state"
-                    + (cool > 0 ? "; " + cool + " zones are cooler than 1e5 K, where partial ionisation makes it wrong"
-                    : ""));
+                    + (fullyIonised ? " (fully ionised ideal gas plus radiation)" : "")
+                    + ": a fallback, not the model's own equation of state"
+                    + (fullyIonised && cool > 0 ? "; " + cool + " zones are cooler than 1e5 K, where partial ionisation"
+                    + " makes it wrong" : ""));
+        }
+        if (useThermo) {
+            List<String> missing = new ArrayList<>();
+            if (!hasGamma1) {
+                missing.add("Gamma_1");
+            }
+            if (!hasPhi) {
+                missing.add("phi");
+            }
+            if (hasThermo && !missing.isEmpty()) {
+                warnings.add(String.join(" and ", missing) + " computed by " + setup.thermodynamics()
+                        + " at the profile's rho and T");
+            }
+            thermoChecks.warnings(setup.thermodynamics().toString(), warnings);
         }
         if (!hasKappa) {
             warnings.add("kappa was computed by the opacity model " + setup.opacity());
@@ -220,6 +349,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         out.put(DiagnosisColumn.DELTA, delta);
         out.put(DiagnosisColumn.NABLA_AD, nablaAd);
         out.put(DiagnosisColumn.NABLA_MU, nablaMu);
+        out.put(DiagnosisColumn.GAMMA1, gamma1);
+        out.put(DiagnosisColumn.PHI, phi);
 
         // does the profile's own gradient agree with the physics? (see ModelConsistency)
         double[] nablaModel = computed(out, DiagnosisColumn.NABLA_MODEL, n);
@@ -229,6 +360,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         warnings.addAll(ModelConsistency.warnings(mismatch, regimes, k -> zoneAsGiven(p, k)));
 
         List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, marginC, nablaMu);
+        double[] dov = computed(out, DiagnosisColumn.OVERSHOOT_DIFFUSION, n);
+        regions = edges(r, hp, nablaAd, marginC, dmix, dov, regions, criterion, warnings);
         if (!(lum[n - 1] > 0.0)) {
             warnings.add("the surface luminosity is L = " + lum[n - 1] + " erg/s, not > 0: the Kelvin-Helmholtz time"
                     + " G M^2 / (R L) is undefined there and is not reported");
@@ -238,7 +371,154 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
                 Timescale.kelvinHelmholtz(m[n - 1], r[n - 1], lum[n - 1]));
         // the diagnosis shares the profile's columns and takes the computed ones: no copy of millions of zones
-        return ColumnSharing.adopt(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings);
+        return ColumnSharing.adopt(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings)
+                .withSeismic(seismic(r, soundSpeed, n2, regions));
+    }
+
+    /** The asymptotic integrals of the whole model and the acoustic depths of each convective region's edges. */
+    private static SeismicSummary seismic(double[] r, double[] soundSpeed, double[] n2, List<Region> regions) {
+        double tau = AsymptoticIntegrals.acousticRadius(r, soundSpeed);
+        List<SeismicSummary.RegionDepths> depths = new ArrayList<>();
+        for (Region region : regions) {
+            if (region.regime() == Regime.CONVECTIVE) {
+                depths.add(new SeismicSummary.RegionDepths(region,
+                        AsymptoticIntegrals.acousticDepth(r, soundSpeed, region.bottomRadius()),
+                        AsymptoticIntegrals.acousticDepth(r, soundSpeed, region.topRadius())));
+            }
+        }
+        return new SeismicSummary(tau, AsymptoticIntegrals.largeSeparation(tau),
+                AsymptoticIntegrals.periodSpacing(1, AsymptoticIntegrals.buoyancyIntegral(r, n2)), depths);
+    }
+
+    /**
+     * Where the thermodynamics model leaves its validity or disagrees with the profile: zones with
+     * degenerate electrons (the first Fermi-Dirac correction to the electron pressure,
+     * n_e lambda^3 / 2^(7/2), above {@value #DEGENERACY_LIMIT}; Landau &amp; Lifshitz, Statistical Physics
+     * §56), zones where pressure ionisation decides the state of more than {@value #PRESSURE_IONISATION_LIMIT}
+     * of hydrogen, and the largest difference between the model's pressure at the profile's rho and T and
+     * the profile's own P.
+     */
+    private static final class ThermoChecks {
+        int degenerate;
+        int pressureIonised;
+        int mismatched;
+        double worstMismatch;
+
+        void add(ThermoResult thermo, double profilePressure) {
+            if (thermo.degeneracy / FERMI_CORRECTION > DEGENERACY_LIMIT) {
+                degenerate++;
+            }
+            if (thermo.pressureIonisation > PRESSURE_IONISATION_LIMIT) {
+                pressureIonised++;
+            }
+            double mismatch = Math.abs(thermo.pressure / profilePressure - 1.0);
+            if (mismatch > PRESSURE_MISMATCH_LIMIT) {
+                mismatched++;
+            }
+            worstMismatch = Math.max(worstMismatch, mismatch);
+        }
+
+        void warnings(String model, List<String> warnings) {
+            if (degenerate > 0) {
+                warnings.add(degenerate + " zones have degenerate electrons (the first Fermi-Dirac correction to the"
+                        + " electron pressure exceeds " + percent(DEGENERACY_LIMIT) + "), which " + model
+                        + " treats as an ideal gas");
+            }
+            if (pressureIonised > 0) {
+                warnings.add(pressureIonised + " zones are pressure-ionised (the state of more than "
+                        + percent(PRESSURE_IONISATION_LIMIT) + " of hydrogen is set by " + model
+                        + "'s approximate pressure ionisation, not by the Saha equation)");
+            }
+            if (mismatched > 0) {
+                warnings.add(model + " at the profile's rho and T gives a pressure up to "
+                        + String.format(java.util.Locale.ROOT, "%.3g", 100.0 * worstMismatch)
+                        + " % away from the profile's P (" + mismatched + " zones beyond "
+                        + percent(PRESSURE_MISMATCH_LIMIT) + "); its response functions are taken at (rho, T),"
+                        + " and H_P, c_s and N^2 use the profile's P");
+            }
+        }
+
+        private static String percent(double f) {
+            return String.format(java.util.Locale.ROOT, "%.3g %%", 100.0 * f);
+        }
+    }
+
+    /** 2^(5/2): the first Fermi-Dirac correction to P_e is n_e lambda^3 / 2 over this. */
+    private static final double FERMI_CORRECTION = Math.pow(2.0, 2.5);
+    /** Count zones whose first Fermi-Dirac correction to the electron pressure exceeds this. */
+    public static final double DEGENERACY_LIMIT = 0.01;
+    /** Count zones where pressure ionisation decides the state of more than this share of hydrogen. */
+    public static final double PRESSURE_IONISATION_LIMIT = 0.01;
+    /** Count zones where the thermodynamics model's P differs from the profile's by more than this. */
+    public static final double PRESSURE_MISMATCH_LIMIT = 0.01;
+    /**
+     * The edges of the convective regions: overshoot (when this diagnosis applies it) into {@code dov}, with
+     * D_mix raised to it where it is larger; each edge's margin on the convective side
+     * ({@link BoundaryMargins}), with a warning where it is not ~0. Returns the regions with both recorded.
+     */
+    private List<Region> edges(double[] r, double[] hp, double[] nablaAd, double[] marginC, double[] dmix,
+                               double[] dov, List<Region> regions, Criterion criterion, List<String> warnings) {
+        int n = r.length;
+        List<Region> convective = regions.stream().filter(g -> g.regime() == Regime.CONVECTIVE).toList();
+        int count = convective.size();
+        double[] bottoms = new double[count];
+        double[] tops = new double[count];
+        for (int i = 0; i < count; i++) {
+            bottoms[i] = convective.get(i).bottomRadius();
+            tops[i] = convective.get(i).topRadius();
+        }
+        double[] reachBottom = new double[count];
+        double[] reachTop = new double[count];
+        overshoot(r, hp, dmix, bottoms, tops, dov, reachBottom, reachTop);
+        for (int k = 0; k < n; k++) {
+            dmix[k] = Math.max(dmix[k], dov[k]);
+        }
+        double radius = r[n - 1];
+        List<Region> result = new ArrayList<>(regions.size());
+        int i = 0;
+        for (Region g : regions) {
+            if (g.regime() != Regime.CONVECTIVE) {
+                result.add(g);
+                continue;
+            }
+            int first = g.firstZone();
+            int last = g.lastZone();
+            OptionalDouble bottom = OptionalDouble.empty();
+            OptionalDouble top = OptionalDouble.empty();
+            if (first > 0) {
+                double at = BoundaryMargins.inside(r, marginC, nablaAd, first, first < last ? first + 1 : -1,
+                        g.bottomRadius());
+                bottom = OptionalDouble.of(at);
+                misplaced(warnings, g, "bottom", at, radius, criterion);
+            }
+            if (last < n - 1) {
+                double at = BoundaryMargins.inside(r, marginC, nablaAd, last, last > first ? last - 1 : -1,
+                        g.topRadius());
+                top = OptionalDouble.of(at);
+                misplaced(warnings, g, "top", at, radius, criterion);
+            }
+            result.add(g.withEdges(present(reachBottom[i]), present(reachTop[i]), bottom, top));
+            i++;
+        }
+        return result;
+    }
+
+    private static OptionalDouble present(double value) {
+        return Double.isNaN(value) ? OptionalDouble.empty() : OptionalDouble.of(value);
+    }
+
+    private static void misplaced(List<String> warnings, Region g, String side, double margin, double radius,
+                                  Criterion criterion) {
+        if (!(Math.abs(margin) > BoundaryMargins.MISPLACED)) {
+            return;
+        }
+        boolean grow = margin > 0.0;
+        warnings.add(String.format(java.util.Locale.ROOT, "the %s edge of the convective region at r/R %.4f - %.4f"
+                        + " is not self-consistent (Gabriel et al. 2014): the %s criterion's margin on its convective"
+                        + " side, (nabla_rad - nabla_crit)/nabla_ad extrapolated to the edge, is %+.3g, not ~0"
+                        + " (|margin| > %.2g); a host should move the edge %s until the margin vanishes there",
+                side, g.bottomRadius() / radius, g.topRadius() / radius, criterion.label(), margin,
+                BoundaryMargins.MISPLACED, grow == side.equals("top") ? "outwards" : "inwards"));
     }
 
     private static int zoneAsGiven(Profile p, int k) {
@@ -371,6 +651,10 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
 
     @Override
     public String toString() {
-        return NAME;
+        if (!appliesOvershoot()) {
+            return NAME;
+        }
+        return NAME + "(" + (overshootF > 0.0 ? OVERSHOOT_F + "=" + overshootF : OVERSHOOT_STEP + "=" + overshootStep)
+                + ", " + OVERSHOOT_F0 + "=" + overshootF0 + ", " + OVERSHOOT_FLOOR + "=" + overshootFloor + ")";
     }
 }
