@@ -113,13 +113,13 @@ final class DiagnosisOptions {
      */
     void checkUsage(CommandSpec spec) {
         if (matched(spec, "--alpha") && !(alpha > 0 && Double.isFinite(alpha))) {
-            throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not " + alpha);
+            throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not " + Text.number(alpha));
         }
         nonNegative(spec, "--overshoot-f", overshootF);
         nonNegative(spec, "--overshoot-step", overshootStep);
         if (overshootF0 != null && !(overshootF0 >= 0 && overshootF0 < 1)) {
             throw new ParameterException(spec.commandLine(), "--overshoot-f0 must be a number in [0, 1), not "
-                    + overshootF0);
+                    + Text.number(overshootF0));
         }
         if (overshootF != null && overshootF > 0 && overshootStep != null && overshootStep > 0) {
             throw new ParameterException(spec.commandLine(), "give either --overshoot-f or --overshoot-step, not both:"
@@ -135,7 +135,8 @@ final class DiagnosisOptions {
 
     private static void nonNegative(CommandSpec spec, String option, Double value) {
         if (value != null && !(value >= 0 && Double.isFinite(value))) {
-            throw new ParameterException(spec.commandLine(), option + " must be a finite number >= 0, not " + value);
+            throw new ParameterException(spec.commandLine(), option + " must be a finite number >= 0, not "
+                    + Text.number(value));
         }
     }
 

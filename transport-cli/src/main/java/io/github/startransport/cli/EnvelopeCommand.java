@@ -134,7 +134,7 @@ final class EnvelopeCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "give either --alpha or --calibrate-base, not both");
         }
         if (alpha != null && !(alpha > 0 && Double.isFinite(alpha))) {
-            throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not " + alpha);
+            throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not " + Text.number(alpha));
         }
         if (opacityTable != null && opacity != null) {
             throw new ParameterException(spec.commandLine(), "give either --opacity or --opacity-table, not both");
@@ -146,6 +146,13 @@ final class EnvelopeCommand implements Callable<Integer> {
         if (calibrateBase != null && !(calibrateBase > 0.0 && calibrateBase < 1.0)) {
             throw new ParameterException(spec.commandLine(), "--calibrate-base " + Text.number(calibrateBase) + ": the"
                     + " base of the convection zone is a fraction r/R of the radius, strictly between 0 and 1");
+        }
+        positive("--mass-msun", mass);
+        positive("--radius-rsun", radius);
+        positive("--luminosity-lsun", luminosity);
+        if (!(hydrogen >= 0 && hydrogen <= 1) || !(metals >= 0 && metals <= 1) || !(hydrogen + metals <= 1)) {
+            throw new ParameterException(spec.commandLine(), "--hydrogen " + Text.number(hydrogen) + " and --metals "
+                    + Text.number(metals) + ": mass fractions, each in [0, 1] and together at most 1");
         }
         EnvelopeStar star;
         try {
@@ -218,6 +225,13 @@ final class EnvelopeCommand implements Callable<Integer> {
         printSummary(envelope, calibration);
         warnings.forEach(w -> cli.err().println("warning: " + w));
         return 0;
+    }
+
+    private void positive(String option, double value) {
+        if (!(value > 0 && Double.isFinite(value))) {
+            throw new ParameterException(spec.commandLine(), option + " must be a finite number > 0, not "
+                    + Text.number(value));
+        }
     }
 
     private boolean matched(String option) {

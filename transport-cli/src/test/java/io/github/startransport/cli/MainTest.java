@@ -79,11 +79,29 @@ class MainTest {
                 new String[] {"diagnose", p.toString(), "--overshoot-f", "0.016", "--overshoot-step", "0.2", "--out", out},
                 new String[] {"diagnose", p.toString(), "--overshoot-f0", "0.01", "--out", out},
                 new String[] {"diagnose", p.toString(), "--overshoot-f", "0.016", "--overshoot-f0", "1.5", "--out", out},
-                new String[] {"diagnose", p.toString(), "--overshoot-step", "NaN", "--out", out});
+                new String[] {"diagnose", p.toString(), "--overshoot-step", "NaN", "--out", out},
+                new String[] {"diagnose", p.toString(), "--columns", "temperature", "--out", out},
+                new String[] {"diagnose", p.toString(), "--columns", "A=temperature,B=T_K", "--out", out},
+                new String[] {"diagnose", p.toString(), "--delimiter", "pipe", "--out", out},
+                new String[] {"diagnose", p.toString(), "--x-axis", "time", "--out", out},
+                new String[] {"diagnose", p.toString(), "--convection", "no-such-model", "--out", out},
+                new String[] {"track", p.toString(), "--ages", "1e9,2e9", "--out", out},
+                new String[] {"track", p.toString(), "--ages", "young", "--out", out},
+                new String[] {"track", p.toString(), "--criterion", "sideways", "--out", out},
+                new String[] {"envelope", "--mass-msun", "-1", "--radius-rsun", "1", "--luminosity-lsun", "1",
+                    "--hydrogen", "0.7", "--metals", "0.02", "--out", out},
+                new String[] {"envelope", "--mass-msun", "1", "--radius-rsun", "1", "--luminosity-lsun", "1",
+                    "--hydrogen", "0.7", "--metals", "0.02", "--opacity", "no-such-model", "--out", out},
+                new String[] {"table", "build", "--out", out, "--log-t", "8.5:3.5:4"},
+                new String[] {"table", "build", "--out", out, "--log-t", "3.5:8.5:4.5"},
+                new String[] {"table", "build", "--out", out, "--hydrogen", "0.7", "--metals", "0.5"},
+                new String[] {"table", "build", "--out", out, "--opacity", "no-such-model"});
         for (String[] args : cases) {
             Runs r = Runs.run(args);
             assertEquals(2, r.code(), String.join(" ", args) + "\n" + r);
             assertFalse(r.err().isBlank(), String.join(" ", args));
+            assertFalse(r.err().contains("Exception") || r.err().contains("\tat "), r.toString());
+            assertFalse(r.err().matches("(?s).*[ =(]\\d+\\.0[ ,;:)].*"), "a whole number printed as x.0: " + r.err());
         }
         assertEquals(List.of(), leftovers(dir, p));
     }

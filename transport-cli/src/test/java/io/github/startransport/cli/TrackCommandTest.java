@@ -28,7 +28,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * {@code track} on an invented sequence ({@link TrackSequence}: the demo star with its core
- * hydrogen falling with age).
+ * hydrogen falling with age). {@code -Ddocs.dir=docs} (with {@code -Dtest=TrackCommandTest}) writes
+ * the README's picture, an eight-profile Ledoux track, as {@code docs/demo-track.png}.
  */
 class TrackCommandTest {
     private static final List<String> COLUMNS = List.of("model_number", "age_yr", "profile", "regime", "m_bottom_g",
@@ -264,5 +265,20 @@ class TrackCommandTest {
             labels.add(legend.get(i).getLabel());
         }
         assertTrue(labels.contains("overshoot") && labels.contains("convective"), labels.toString());
+    }
+
+    @Test
+    void theReadmesTrackIsDrawn(@TempDir Path dir) throws IOException {
+        List<Path> files = TrackSequence.write(dir, 8, true);
+        Path out = dir.resolve("out");
+        Runs r = Runs.run(args(files, "--out", out.toString(), "--criterion", "ledoux"));
+        assertEquals(0, r.code(), r.toString());
+        String docs = System.getProperty("docs.dir");
+        if (docs != null) {
+            Path target = Path.of(docs).isAbsolute() ? Path.of(docs) : Path.of("..").resolve(docs);
+            Files.createDirectories(target);
+            Files.copy(out.resolve("track.png"), target.resolve("demo-track.png"),
+                    java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        }
     }
 }
