@@ -32,7 +32,8 @@ import java.util.concurrent.Callable;
 @Command(name = "track", sortOptions = false, mixinStandardHelpOptions = true,
         description = {
             "Diagnoses a sequence of profiles of one star (an evolution run) and follows its regions with age:"
-                + " which layers are convective, semiconvective or thermohaline in each profile.",
+                + " which layers are convective, semiconvective or thermohaline in each profile, and, with"
+                + " --overshoot-f or --overshoot-step, which are mixed by overshoot.",
             "",
             "Writes into DIR: track.csv (one row per profile and region: model number, age, regime, the region's"
                 + " edges in mass and radius, and the profile's timescales) and track.png (every profile's regions"

@@ -45,7 +45,11 @@ class InputFuzzTest {
     Arbitrary<String> header() {
         return Arbitraries.oneOf(Arbitraries.just(HEADER), Arbitraries.just(HEADER + ",kappa_cm2_g"),
                 Arbitraries.just("r_cm,m_g,T_K"), Arbitraries.strings().ofMaxLength(40),
-                Arbitraries.just(HEADER.replace("T_K", "Temp")));
+                Arbitraries.just(HEADER.replace("T_K", "Temp")),
+                Arbitraries.just("radius,mass,temperature,density,pressure,luminosity,hydrogen,metals"),
+                Arbitraries.just("r,radius,m_g,T_K,rho_g_cm3,P_dyn_cm2,L_erg_s,X,Z"),
+                Arbitraries.just("rad,Mass,logT,Dens,Press,Lum,X,Z"),
+                Arbitraries.just(HEADER.replace(",", ";")));
     }
 
     @Property(tries = 400, seed = "601")
