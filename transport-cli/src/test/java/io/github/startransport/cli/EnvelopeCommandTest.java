@@ -51,6 +51,9 @@ class EnvelopeCommandTest {
         }
         double rb = s.get("cz_base_r_over_R").asDouble();
         assertTrue(rb > 0.5 && rb < 1.0, "r_b/R " + rb);
+        // without --thermodynamics the envelope uses the provider's default equation of state, the partially
+        // ionised gas that the Sun's deep convection zone needs
+        assertEquals("saha-ionising-gas", s.get("thermodynamics_model").asText(), s.toString());
         assertTrue(r.out().contains("base of the surface convection zone: r/R = "), r.out());
         // the profile reads back through the diagnose reader, photosphere on top at R and T_eff
         Profile p = ProfileCsvReader.read(out.resolve(EnvelopeCommand.CSV), ColumnMap.parse(null)).profile();
