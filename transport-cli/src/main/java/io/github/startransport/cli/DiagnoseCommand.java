@@ -110,6 +110,22 @@ final class DiagnoseCommand implements Callable<Integer> {
                     + " density, pressure, luminosity, hydrogen, metals, kappa, cp, ...), any case.")
     private String columns;
 
+    @Option(names = "--overshoot-f", paramLabel = "F",
+            description = "Apply exponential diffusive overshoot at both edges of every convective region,"
+                    + " D = D_0 exp(-2|r - r_0|/(F H)) (Freytag, Ludwig & Steffen 1996; Herwig 2000); e.g. 0.016."
+                    + " Default: none.")
+    private Double overshootF;
+
+    @Option(names = "--overshoot-f0", paramLabel = "F0",
+            description = "With --overshoot-f or --overshoot-step: take D_0 at F0 H inside each edge, where the"
+                    + " overshoot profile starts. Default: the diagnosis's own (0.005).")
+    private Double overshootF0;
+
+    @Option(names = "--overshoot-step", paramLabel = "A",
+            description = "Apply step overshoot instead: D = D_0 up to A H beyond each edge (the temperature"
+                    + " gradient stays radiative there); e.g. 0.2. Default: none.")
+    private Double overshootStep;
+
     /** @param cli where to print and how to find the physics */
     DiagnoseCommand(Cli cli) {
         this.cli = cli;
@@ -177,9 +193,43 @@ final class DiagnoseCommand implements Callable<Integer> {
         if (matched("--alpha") && !(alpha > 0 && Double.isFinite(alpha))) {
             throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not " + alpha);
         }
+        nonNegative("--overshoot-f", overshootF);
+        nonNegative("--overshoot-step", overshootStep);
+        if (overshootF0 != null && !(overshootF0 >= 0 && overshootF0 < 1)) {
+            throw new ParameterException(spec.commandLine(), "--overshoot-f0 must be a number in [0, 1), not "
+                    + overshootF0);
+        }
+        if (overshootF != null && overshootF > 0 && overshootStep != null && overshootStep > 0) {
+            throw new ParameterException(spec.commandLine(), "give either --overshoot-f or --overshoot-step, not both:"
+                    + " exponential and step overshoot are alternatives");
+        }
+        if (overshootF0 != null && overshootF == null && overshootStep == null) {
+            throw new ParameterException(spec.commandLine(), "--overshoot-f0 needs --overshoot-f or --overshoot-step");
+        }
         if (opacityTable != null && matched("--opacity")) {
             throw new ParameterException(spec.commandLine(), "give either --opacity or --opacity-table, not both");
         }
+    }
+
+    private void nonNegative(String option, Double value) {
+        if (value != null && !(value >= 0 && Double.isFinite(value))) {
+            throw new ParameterException(spec.commandLine(), option + " must be a finite number >= 0, not " + value);
+        }
+    }
+
+    /** @return the diagnosis's options: the overshoot settings given on the command line */
+    private ModelOptions diagnosisOptions() {
+        ModelOptions options = ModelOptions.defaults();
+        if (overshootF != null) {
+            options = options.with(ModelNames.DIAGNOSIS_OVERSHOOT_F, Double.toString(overshootF));
+        }
+        if (overshootF0 != null) {
+            options = options.with(ModelNames.DIAGNOSIS_OVERSHOOT_F0, Double.toString(overshootF0));
+        }
+        if (overshootStep != null) {
+            options = options.with(ModelNames.DIAGNOSIS_OVERSHOOT_STEP, Double.toString(overshootStep));
+        }
+        return options;
     }
 
     private boolean matched(String option) {
@@ -231,7 +281,7 @@ final class DiagnoseCommand implements Callable<Integer> {
             opacityModel = transport.opacity(opacityName, ModelOptions.defaults());
         }
         ThermodynamicsModel thermo = transport.thermodynamics(null, ModelOptions.defaults());
-        ProfileDiagnoser diagnoser = transport.diagnoser(null, ModelOptions.defaults());
+        ProfileDiagnoser diagnoser = transport.diagnoser(null, diagnosisOptions());
         ModelsUsed used = new ModelsUsed(convectionName == null ? "(default)" : Catalog.bare(convectionName),
                 opacityName == null ? "(default)" : Catalog.bare(opacityName),
                 opacityTable == null ? null : opacityTable.toString());

@@ -62,6 +62,9 @@ final class DiagnosisCharts {
             Regime.THERMOHALINE, new Color(90, 140, 230, 70),
             Regime.RADIATIVE, new Color(0, 0, 0, 0)));
 
+    /** Shade of the layers that overshoot mixes beyond the edges of convective regions. */
+    private static final Color OVERSHOOT_SHADE = new Color(200, 60, 200, 60);
+
     private static final String R_OVER_R = "r / R";
 
     private DiagnosisCharts() {
@@ -439,6 +442,7 @@ final class DiagnosisCharts {
     /** Shades each non-radiative region and adds one legend entry per regime shown. */
     private static void shadeRegions(ProfileDiagnosis d, XYPlot plot) {
         Set<Regime> shown = EnumSet.noneOf(Regime.class);
+        boolean overshot = false;
         for (Region region : d.regions()) {
             if (region.regime() == Regime.RADIATIVE) {
                 continue;
@@ -448,6 +452,9 @@ final class DiagnosisCharts {
             m.setOutlinePaint(null);
             plot.addDomainMarker(m, Layer.BACKGROUND);
             shown.add(region.regime());
+            double radius = d.radius();
+            overshot |= shadeOvershoot(plot, region.overshootBottom(), region.bottomRadiusFraction(), radius);
+            overshot |= shadeOvershoot(plot, region.overshootTop(), region.topRadiusFraction(), radius);
         }
         LegendItemCollection items = new LegendItemCollection();
         LegendItemCollection series = plot.getLegendItems();
@@ -460,7 +467,32 @@ final class DiagnosisCharts {
                     new Rectangle(-8, -8, 16, 16), new Color(c.getRed(), c.getGreen(), c.getBlue(), 140));
             items.add(item);
         }
+        if (overshot) {
+            items.add(new LegendItem("overshoot mixing", null, null, null, new Rectangle(-8, -8, 16, 16),
+                    new Color(OVERSHOOT_SHADE.getRed(), OVERSHOOT_SHADE.getGreen(), OVERSHOOT_SHADE.getBlue(), 140)));
+        }
         plot.setFixedLegendItems(items);
+    }
+
+    /**
+     * Shades the layer between an edge and the point where overshoot mixing beyond it ends.
+     *
+     * @return whether anything was shaded (an edge with overshoot of non-zero extent)
+     */
+    private static boolean shadeOvershoot(XYPlot plot, java.util.OptionalDouble reach, double edgeFraction,
+                                          double radius) {
+        if (reach.isEmpty()) {
+            return false;
+        }
+        double end = reach.getAsDouble() / radius;
+        if (end == edgeFraction) {
+            return false;
+        }
+        IntervalMarker m = new IntervalMarker(Math.min(end, edgeFraction), Math.max(end, edgeFraction));
+        m.setPaint(OVERSHOOT_SHADE);
+        m.setOutlinePaint(null);
+        plot.addDomainMarker(m, Layer.BACKGROUND);
+        return true;
     }
 
     private static void note(JFreeChart chart, int hidden, String what) {

@@ -53,6 +53,10 @@ final class HumanSummary {
                             .append(days(r.turnoverLocal())).append(" (local), max v_conv ")
                             .append(r.maxVelocity().isPresent()
                                     ? String.format(Locale.ROOT, "%.3g cm/s", r.maxVelocity().getAsDouble()) : "n/a");
+                    if (r.overshootBottom().isPresent() || r.overshootTop().isPresent()) {
+                        b.append("   overshoot to r/R ").append(fraction(r.overshootBottom(), d.radius()))
+                                .append(" below, ").append(fraction(r.overshootTop(), d.radius())).append(" above");
+                    }
                 }
                 b.append('\n');
             }
@@ -70,6 +74,10 @@ final class HumanSummary {
         }
         b.append("  written to ").append(where).append('\n');
         return b.toString();
+    }
+
+    private static String fraction(OptionalDouble r, double radius) {
+        return r.isPresent() ? String.format(Locale.ROOT, "%.4f", r.getAsDouble() / radius) : "-";
     }
 
     private static String days(OptionalDouble seconds) {

@@ -44,13 +44,32 @@ class DiagnosisChartsTest {
         ProfileDiagnosis d = HandMadeDiagnosis.build();
         XYPlot plot = DiagnosisCharts.gradients(d).getXYPlot();
         long nonRadiative = d.regions().stream().filter(r -> r.regime() != Regime.RADIATIVE).count();
-        assertEquals(nonRadiative, plot.getDomainMarkers(org.jfree.chart.ui.Layer.BACKGROUND).size());
+        long overshootLayers = d.regions().stream().mapToLong(r -> (r.overshootBottom().isPresent() ? 1 : 0)
+                + (r.overshootTop().isPresent() ? 1 : 0)).sum();
+        assertEquals(2, overshootLayers, "the hand-made diagnosis overshoots above its core and below its envelope");
+        assertEquals(nonRadiative + overshootLayers, plot.getDomainMarkers(org.jfree.chart.ui.Layer.BACKGROUND).size());
         List<String> labels = labels(plot.getLegendItems());
         for (Region r : d.regions()) {
             assertTrue(labels.contains(r.regime().label() + " region"), labels.toString());
         }
+        assertTrue(labels.contains("overshoot mixing"), labels.toString());
         assertTrue(labels.stream().anyMatch(l -> l.contains("rad")), labels.toString());
         assertTrue(labels.stream().anyMatch(l -> l.contains("ad")), labels.toString());
+    }
+
+    @Test
+    void overshootLayersAreShadedBetweenTheEdgeAndWhereOvershootEnds() {
+        ProfileDiagnosis d = HandMadeDiagnosis.build();
+        XYPlot plot = DiagnosisCharts.velocityAndMixing(d).getXYPlot();
+        List<double[]> intervals = new ArrayList<>();
+        for (Object o : plot.getDomainMarkers(org.jfree.chart.ui.Layer.BACKGROUND)) {
+            org.jfree.chart.plot.IntervalMarker m = (org.jfree.chart.plot.IntervalMarker) o;
+            intervals.add(new double[] {m.getStartValue(), m.getEndValue()});
+        }
+        assertTrue(intervals.stream().anyMatch(i -> i[0] == HandMadeDiagnosis.CORE_TOP
+                && i[1] == HandMadeDiagnosis.CORE_OVERSHOOT_TOP), "no layer above the core");
+        assertTrue(intervals.stream().anyMatch(i -> i[0] == HandMadeDiagnosis.ENVELOPE_OVERSHOOT_BOTTOM
+                && i[1] == HandMadeDiagnosis.ENVELOPE_BOTTOM), "no layer below the envelope");
     }
 
     @Test

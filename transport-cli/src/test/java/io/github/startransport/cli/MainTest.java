@@ -54,7 +54,7 @@ class MainTest {
         assertEquals(0, r.code(), r.toString());
         String help = r.out().replaceAll("\\s+", " ");
         for (String s : List.of("--out", "--alpha", "--criterion", "--convection", "--opacity", "--opacity-table",
-                "--columns", "--demo", "Default: diagnosis", "Default: schwarzschild", "r_cm", "kappa_cm2_g",
+                "--columns", "--demo", "--overshoot-f", "--overshoot-f0", "--overshoot-step", "Default: diagnosis", "Default: schwarzschild", "r_cm", "kappa_cm2_g",
                 "Exit codes")) {
             assertTrue(help.contains(s), "help lacks " + s + ":\n" + r.out());
         }
@@ -74,7 +74,12 @@ class MainTest {
                 new String[] {"diagnose", p.toString(), "--alpha", "many", "--out", out},
                 new String[] {"diagnose", p.toString(), "--opacity", "x", "--opacity-table", p.toString(), "--out", out},
                 new String[] {"diagnose", p.toString(), "--no-such-option", "--out", out},
-                new String[] {"diagnose", "--demo", "--columns", "T=temperature", "--out", out});
+                new String[] {"diagnose", "--demo", "--columns", "T=temperature", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-f", "-0.01", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-f", "0.016", "--overshoot-step", "0.2", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-f0", "0.01", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-f", "0.016", "--overshoot-f0", "1.5", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-step", "NaN", "--out", out});
         for (String[] args : cases) {
             Runs r = Runs.run(args);
             assertEquals(2, r.code(), String.join(" ", args) + "\n" + r);
