@@ -88,6 +88,16 @@ final class EnvelopeCommand implements Callable<Integer> {
                     + " replaces --alpha. The Sun's is 0.713 (Christensen-Dalsgaard, Gough & Thompson 1991).")
     private Double calibrateBase;
 
+    @Option(names = "--alpha-low", paramLabel = "A",
+            description = "With --calibrate-base: the lower end of the alpha interval searched (> 0)."
+                    + " Default: the envelope model's own, 0.5.")
+    private Double alphaLow;
+
+    @Option(names = "--alpha-high", paramLabel = "A",
+            description = "With --calibrate-base: the upper end of the alpha interval searched (> --alpha-low)."
+                    + " Default: the envelope model's own, 4.")
+    private Double alphaHigh;
+
     @Option(names = "--convection", paramLabel = "NAME",
             description = "Convection model, by name (see the models command). Default: the provider's recommended"
                     + " model.")
@@ -128,6 +138,10 @@ final class EnvelopeCommand implements Callable<Integer> {
         if (!matched("--opacity")) {
             opacity = null;
         }
+        if ((alphaLow != null || alphaHigh != null) && calibrateBase == null) {
+            throw new ParameterException(spec.commandLine(), "--alpha-low and --alpha-high bound the alpha a calibration"
+                    + " searches: give them with --calibrate-base");
+        }
         if (alpha != null && calibrateBase != null) {
             throw new ParameterException(spec.commandLine(), "give either --alpha or --calibrate-base, not both");
         }
@@ -167,7 +181,14 @@ final class EnvelopeCommand implements Callable<Integer> {
         String thermoName = thermodynamics != null ? thermodynamics
                 : Catalog.defaultModel(transport, ModelFamily.THERMODYNAMICS);
         ThermodynamicsModel thermo = transport.thermodynamics(thermoName, ModelOptions.defaults());
-        EnvelopeIntegrator integrator = transport.envelope(null, ModelOptions.defaults());
+        ModelOptions envelopeOptions = ModelOptions.defaults();
+        if (alphaLow != null) {
+            envelopeOptions = envelopeOptions.with(ModelNames.ENVELOPE_ALPHA_LOW, Double.toString(alphaLow));
+        }
+        if (alphaHigh != null) {
+            envelopeOptions = envelopeOptions.with(ModelNames.ENVELOPE_ALPHA_HIGH, Double.toString(alphaHigh));
+        }
+        EnvelopeIntegrator integrator = transport.envelope(null, envelopeOptions);
         EnvelopeSetup setup = new EnvelopeSetup(convectionModel, opacityModel, thermo);
         Used used = new Used(Catalog.bare(convectionName), Catalog.bare(opacityName),
                 opacityTable == null ? null : opacityTable.toString(), Catalog.bare(thermoName));

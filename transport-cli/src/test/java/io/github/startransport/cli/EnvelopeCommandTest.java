@@ -117,5 +117,16 @@ class EnvelopeCommandTest {
         }
         assertEquals(2, envelope(out, "--alpha", "1.5", "--calibrate-base", "0.9").code());
         assertFalse(Files.exists(out));
+        // the alpha interval of a calibration is the user's to choose, and only with --calibrate-base
+        assertEquals(2, envelope(out, "--alpha-low", "0.1").code());
+        assertFalse(Files.exists(out));
+        Runs narrow = envelope(out, "--calibrate-base", "0.9", "--alpha-low", "0.6", "--alpha-high", "0.7");
+        assertEquals(1, narrow.code(), narrow.toString());
+        assertTrue(narrow.err().contains("alpha from 0.6 to 0.7"), narrow.err());
+        assertFalse(Files.exists(out));
+        Runs reversed = envelope(out, "--calibrate-base", "0.9", "--alpha-low", "2", "--alpha-high", "1");
+        assertEquals(1, reversed.code(), reversed.toString());
+        assertTrue(reversed.err().contains("alpha-high"), reversed.err());
+        assertFalse(Files.exists(out));
     }
 }
