@@ -90,6 +90,16 @@ final class EnvelopeCommand implements Callable<Integer> {
                     + " replaces --alpha. The Sun's is 0.713 (Christensen-Dalsgaard, Gough & Thompson 1991).")
     private Double calibrateBase;
 
+    @Option(names = "--alpha-low", paramLabel = "A",
+            description = "With --calibrate-base: the lower end of the alpha interval searched (> 0)."
+                    + " Default: the envelope model's own, 0.5.")
+    private Double alphaLow;
+
+    @Option(names = "--alpha-high", paramLabel = "A",
+            description = "With --calibrate-base: the upper end of the alpha interval searched (> --alpha-low)."
+                    + " Default: the envelope model's own, 4.")
+    private Double alphaHigh;
+
     @Option(names = "--convection", paramLabel = "NAME",
             description = "Convection model, by name (see the models command). Default: the provider's recommended"
                     + " model.")
@@ -130,11 +140,16 @@ final class EnvelopeCommand implements Callable<Integer> {
         if (!matched("--opacity")) {
             opacity = null;
         }
+        if ((alphaLow != null || alphaHigh != null) && calibrateBase == null) {
+            throw new ParameterException(spec.commandLine(), "--alpha-low and --alpha-high bound the alpha a calibration"
+                    + " searches: give them with --calibrate-base");
+        }
         if (alpha != null && calibrateBase != null) {
             throw new ParameterException(spec.commandLine(), "give either --alpha or --calibrate-base, not both");
         }
         if (alpha != null && !(alpha > 0 && Double.isFinite(alpha))) {
-            throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not " + Text.number(alpha));
+            throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not "
+                    + Text.number(alpha));
         }
         if (opacityTable != null && opacity != null) {
             throw new ParameterException(spec.commandLine(), "give either --opacity or --opacity-table, not both");
@@ -186,7 +201,16 @@ final class EnvelopeCommand implements Callable<Integer> {
                 : Catalog.defaultModel(transport, ModelFamily.THERMODYNAMICS);
         ThermodynamicsModel thermo = DiagnosisOptions.asOption("--thermodynamics", thermoName,
                 () -> transport.thermodynamics(thermoName, ModelOptions.defaults()));
-        EnvelopeIntegrator integrator = transport.envelope(null, ModelOptions.defaults());
+        ModelOptions envelopeOptions = ModelOptions.defaults();
+        if (alphaLow != null) {
+            envelopeOptions = envelopeOptions.with(ModelNames.ENVELOPE_ALPHA_LOW, Double.toString(alphaLow));
+        }
+        if (alphaHigh != null) {
+            envelopeOptions = envelopeOptions.with(ModelNames.ENVELOPE_ALPHA_HIGH, Double.toString(alphaHigh));
+        }
+        ModelOptions finalEnvelopeOptions = envelopeOptions;
+        EnvelopeIntegrator integrator = DiagnosisOptions.asOption("--alpha-low/--alpha-high", "",
+                () -> transport.envelope(null, finalEnvelopeOptions));
         EnvelopeSetup setup = new EnvelopeSetup(convectionModel, opacityModel, thermo);
         Used used = new Used(Catalog.bare(convectionName), Catalog.bare(opacityName),
                 opacityTable == null ? null : opacityTable.toString(), Catalog.bare(thermoName));

@@ -29,6 +29,12 @@ final class ModelNames {
     /** Option of the diagnosis: alpha_ov of step overshoot (dimensionless). */
     static final String DIAGNOSIS_OVERSHOOT_STEP = "overshoot-step";
 
+    /** Option of the envelope model: lower end of the alpha interval a calibration searches (dimensionless). */
+    static final String ENVELOPE_ALPHA_LOW = "alpha-low";
+
+    /** Option of the envelope model: upper end of the alpha interval a calibration searches (dimensionless). */
+    static final String ENVELOPE_ALPHA_HIGH = "alpha-high";
+
     private ModelNames() {
     }
 }

@@ -51,6 +51,9 @@ class EnvelopeCommandTest {
         }
         double rb = s.get("cz_base_r_over_R").asDouble();
         assertTrue(rb > 0.5 && rb < 1.0, "r_b/R " + rb);
+        // without --thermodynamics the envelope uses the provider's default equation of state, the partially
+        // ionised gas that the Sun's deep convection zone needs
+        assertEquals("saha-ionising-gas", s.get("thermodynamics_model").asText(), s.toString());
         assertTrue(r.out().contains("base of the surface convection zone: r/R = "), r.out());
         // the profile reads back through the diagnose reader, photosphere on top at R and T_eff
         Profile p = ProfileCsvReader.read(out.resolve(EnvelopeCommand.CSV), ColumnMap.parse(null)).profile();
@@ -113,6 +116,18 @@ class EnvelopeCommandTest {
             assertFalse(Files.exists(out), "nothing written for " + String.join(" ", bad[i]));
         }
         assertEquals(2, envelope(out, "--alpha", "1.5", "--calibrate-base", "0.9").code());
+        assertFalse(Files.exists(out));
+        // the alpha interval of a calibration is the user's to choose, and only with --calibrate-base
+        assertEquals(2, envelope(out, "--alpha-low", "0.1").code());
+        assertFalse(Files.exists(out));
+        // option values that cannot work together are usage errors too (exit 2)
+        Runs narrow = envelope(out, "--calibrate-base", "0.9", "--alpha-low", "0.6", "--alpha-high", "0.7");
+        assertEquals(2, narrow.code(), narrow.toString());
+        assertTrue(narrow.err().contains("alpha from 0.6 to 0.7"), narrow.err());
+        assertFalse(Files.exists(out));
+        Runs reversed = envelope(out, "--calibrate-base", "0.9", "--alpha-low", "2", "--alpha-high", "1");
+        assertEquals(2, reversed.code(), reversed.toString());
+        assertTrue(reversed.err().contains("alpha-high"), reversed.err());
         assertFalse(Files.exists(out));
     }
 }
