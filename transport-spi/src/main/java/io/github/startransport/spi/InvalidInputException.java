@@ -41,7 +41,7 @@ public final class InvalidInputException extends TransportException {
     }
 
     private static String format(String field, double value, String unit, int zone, String requirement) {
-        StringBuilder b = new StringBuilder("invalid input ").append(field).append(" = ").append(Checks.text(value));
+        StringBuilder b = new StringBuilder("invalid input ").append(field).append(" = ").append(value);
         if (unit != null && !unit.isEmpty() && !"1".equals(unit)) {
             b.append(' ').append(unit);
         }
