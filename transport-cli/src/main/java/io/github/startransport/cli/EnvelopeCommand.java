@@ -158,22 +158,25 @@ final class EnvelopeCommand implements Callable<Integer> {
             throw new BadInputException("--opacity-table " + opacityTable + ": cannot be read"
                     + (Files.exists(opacityTable) ? " (permission denied)" : " (no such file)"));
         }
+        // The star and the target are the input data of this command: a star that cannot exist or a target
+        // it cannot reach is bad input (exit 1), like a bad profile for diagnose; usage errors (exit 2) are
+        // options that do not fit together or cannot be read as numbers.
         if (calibrateBase != null && !(calibrateBase > 0.0 && calibrateBase < 1.0)) {
-            throw new ParameterException(spec.commandLine(), "--calibrate-base " + Text.number(calibrateBase) + ": the"
+            throw new BadInputException("--calibrate-base " + Text.number(calibrateBase) + ": the"
                     + " base of the convection zone is a fraction r/R of the radius, strictly between 0 and 1");
         }
         positive("--mass-msun", mass);
         positive("--radius-rsun", radius);
         positive("--luminosity-lsun", luminosity);
         if (!(hydrogen >= 0 && hydrogen <= 1) || !(metals >= 0 && metals <= 1) || !(hydrogen + metals <= 1)) {
-            throw new ParameterException(spec.commandLine(), "--hydrogen " + Text.number(hydrogen) + " and --metals "
+            throw new BadInputException("--hydrogen " + Text.number(hydrogen) + " and --metals "
                     + Text.number(metals) + ": mass fractions, each in [0, 1] and together at most 1");
         }
         EnvelopeStar star;
         try {
             star = EnvelopeStar.inSolarUnits(mass, radius, luminosity, hydrogen, metals);
         } catch (InvalidInputException e) {
-            throw new ParameterException(spec.commandLine(), "the star given by --mass-msun, --radius-rsun,"
+            throw new BadInputException("the star given by --mass-msun, --radius-rsun,"
                     + " --luminosity-lsun, --hydrogen and --metals is refused: " + e.getMessage());
         }
         Transport transport = cli.transport();
@@ -233,8 +236,8 @@ final class EnvelopeCommand implements Callable<Integer> {
                 if (e.zone() != InvalidInputException.NO_ZONE) {
                     throw e;
                 }
-                // not about a zone: about the star or a target given on the command line
-                throw new ParameterException(spec.commandLine(), e.getMessage());
+                // not about a zone: about the star or a target given on the command line (bad input, exit 1)
+                throw new BadInputException(e.getMessage(), e);
             }
             Path dir = folder.staging();
             try {
@@ -251,9 +254,9 @@ final class EnvelopeCommand implements Callable<Integer> {
         return 0;
     }
 
-    private void positive(String option, double value) {
+    private static void positive(String option, double value) {
         if (!(value > 0 && Double.isFinite(value))) {
-            throw new ParameterException(spec.commandLine(), option + " must be a finite number > 0, not "
+            throw new BadInputException(option + " must be a finite number > 0, not "
                     + Text.number(value));
         }
     }

@@ -83,7 +83,7 @@ class EnvelopeCommandTest {
     }
 
     @Test
-    void badOptionValuesAreUsageErrorsWithAMessageAndWriteNothing(@TempDir Path dir) {
+    void aBadStarOrAnUnreachableTargetIsBadInputAndWritesNothing(@TempDir Path dir) {
         Path out = dir.resolve("never");
         String[][] bad = {
             {"--luminosity-lsun", "0"},
@@ -111,7 +111,8 @@ class EnvelopeCommandTest {
             all[all.length - 2] = "--out";
             all[all.length - 1] = out.toString();
             Runs r = Runs.run(all);
-            assertEquals(2, r.code(), r.toString());
+            // the rule for this command: a star that cannot exist or an unreachable target exits 1
+            assertEquals(1, r.code(), r.toString());
             assertTrue(r.err().contains(field[i]), r.err());
             assertFalse(Files.exists(out), "nothing written for " + String.join(" ", bad[i]));
         }
@@ -120,11 +121,12 @@ class EnvelopeCommandTest {
         // the alpha interval of a calibration is the user's to choose, and only with --calibrate-base
         assertEquals(2, envelope(out, "--alpha-low", "0.1").code());
         assertFalse(Files.exists(out));
-        // option values that cannot work together are usage errors too (exit 2)
+        // a target the chosen alpha interval cannot reach is bad input (exit 1), the range stated
         Runs narrow = envelope(out, "--calibrate-base", "0.9", "--alpha-low", "0.6", "--alpha-high", "0.7");
-        assertEquals(2, narrow.code(), narrow.toString());
+        assertEquals(1, narrow.code(), narrow.toString());
         assertTrue(narrow.err().contains("alpha from 0.6 to 0.7"), narrow.err());
         assertFalse(Files.exists(out));
+        // options that do not fit together are usage errors (exit 2)
         Runs reversed = envelope(out, "--calibrate-base", "0.9", "--alpha-low", "2", "--alpha-high", "1");
         assertEquals(2, reversed.code(), reversed.toString());
         assertTrue(reversed.err().contains("alpha-high"), reversed.err());
