@@ -87,6 +87,17 @@ public interface ConvectionModel {
     }
 
     /**
+     * Whether this model's length scale is the distance to the nearest edge of the convective region, read
+     * from {@link ZoneState#edgeDistance} (and {@link ZoneColumns#edgeDistance}); a caller must then fill it
+     * (the diagnosis does, from the edges it locates).
+     *
+     * @return true when {@link ZoneState#edgeDistance} is read; the default is false
+     */
+    default boolean needsEdgeDistance() {
+        return false;
+    }
+
+    /**
      * Solves zones [from, to) like {@link #solveColumns}, with the Jacobian in the zone-major layout
      * of {@link ZoneMajorJacobian}: zone k's values go to {@code out} (its derivative columns are
      * left untouched) and its 52 partial derivatives to
