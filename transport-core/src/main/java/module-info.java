@@ -6,7 +6,6 @@
 module io.github.startransport.core {
     requires transitive io.github.startransport.spi;
     requires commons.math3;
-    requires jdk.unsupported;
 
     exports io.github.startransport.core;
     exports io.github.startransport.core.constants;

@@ -83,7 +83,7 @@ public abstract sealed class MixingLengthModel implements ConvectionModel
         MixingLengthZone.solveZoneMajor(settings, eddyShape, in, from, to, out, jacobian);
     }
 
-    /** The batch kernel of {@link #solveZoneMajor} with the Jacobian stored through the buffer's absolute puts. */
+    /** The batch kernel of {@link #solveZoneMajor}, each chunk's Jacobian put into the buffer in one bulk put. */
     @Override
     public void solveZoneMajorInto(ZoneColumns in, int from, int to, ConvectionColumns out, DoubleBuffer jacobian) {
         MixingLengthZone.solveZoneMajor(settings, eddyShape, in, from, to, out, jacobian);

@@ -16,7 +16,6 @@ import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
 
-import java.lang.ref.Reference;
 import java.nio.DoubleBuffer;
 import java.util.Arrays;
 
@@ -180,7 +179,7 @@ public final class MixingLengthZone {
     static void solveColumns(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
                              ConvectionColumns out, boolean jacobian) {
         in.checkRange(from, to, out.capacity);
-        solveBatch(settings, eddyShape, in, from, to, out, jacobian, null, null, 0L, 0);
+        solveBatch(settings, eddyShape, in, from, to, out, jacobian, null, null, 0);
     }
 
     /**
@@ -198,15 +197,14 @@ public final class MixingLengthZone {
                                ConvectionColumns out, double[] block) {
         in.checkRange(from, to, out.capacity);
         ZoneMajorJacobian.checkCapacity(block, to);
-        solveBatch(settings, eddyShape, in, from, to, out, block != null, block, null, 0L, 0);
+        solveBatch(settings, eddyShape, in, from, to, out, block != null, block, null, 0);
     }
 
     /**
      * The batch call of both convection models with the Jacobian zone-major in a buffer (for example
-     * over a native host's memory), zone k's block from index {@code position() + k * PER_ZONE}: the same
-     * stores as into a block, checked against the buffer's limit once before the first, and made
-     * straight into the buffer's memory where {@link DirectStores} allows it (through its puts
-     * otherwise).
+     * over a native host's memory), zone k's block from index {@code position() + k * PER_ZONE}: each
+     * chunk's blocks are staged in the columns' work array (the same stores as into a block) and go
+     * into the buffer with one bulk put per chunk.
      *
      * @param settings  the model's options
      * @param eddyShape y of the transparency correction, or 0 for none
@@ -221,29 +219,23 @@ public final class MixingLengthZone {
                                ConvectionColumns out, DoubleBuffer jacobian) {
         in.checkRange(from, to, out.capacity);
         ZoneMajorJacobian.checkCapacity(jacobian, to);
-        try {
-            solveBatch(settings, eddyShape, in, from, to, out, true, null, jacobian, DirectStores.address(jacobian),
-                    jacobian.position());
-        } finally {
-            // the buffer (and so its memory) stays reachable until the last store through its address
-            Reference.reachabilityFence(jacobian);
-        }
+        solveBatch(settings, eddyShape, in, from, to, out, true, null, jacobian, jacobian.position());
     }
 
     /**
      * The batch calls. Chunks of {@link #CHUNK} zones go through the per-zone stages one stage at a
      * time: {@link #front} for every zone of the chunk, then the cubic, then {@link #back}, which writes
      * the values straight into the columns and the Jacobian straight into the zone-major block (or into
-     * a zone-major staging area that is copied into the columns once per chunk). A zone's dependent
-     * chain of divisions, roots and Halley steps then overlaps with its neighbours' instead of running
-     * alone, and no zone goes through the per-zone result. The stages are those of the per-zone call,
+     * a zone-major staging area that is copied into the columns, or into the buffer, once per chunk).
+     * A zone's dependent chain of divisions, roots and Halley steps then overlaps with its neighbours'
+     * instead of running alone, and no zone goes through the per-zone result. The stages are those of the per-zone call,
      * so every value is bit for bit the same; zones that are not convective go through the per-zone
      * finish. Zones are finished, and refused, in order: a refused zone leaves every zone before it
      * written.
      */
     private static void solveBatch(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
                                    ConvectionColumns out, boolean jacobian, double[] block, DoubleBuffer buffer,
-                                   long address, int origin) {
+                                   int origin) {
         final double alpha = settings.alpha();
         final MixingLengthGeometry geometry = settings.geometry();
         final CentreLimit limit = settings.centreLimit();
@@ -252,7 +244,7 @@ public final class MixingLengthZone {
         final double[] starts = geometry.cubicStarts();
         final double[] work = out.work;
         // zone j of a chunk: scratch at j * SCRATCH, its staged Jacobian (column layout) at STAGE + j * PER_ZONE
-        final boolean staged = jacobian && block == null && buffer == null;
+        final boolean staged = jacobian && block == null;
         final double[] jac = staged ? work : block;
         final double[] t = in.temperature;
         final double[] rho = in.density;
@@ -292,8 +284,7 @@ public final class MixingLengthZone {
                         : origin + k * ZoneMajorJacobian.PER_ZONE;
                 try {
                     if (code >= CUBIC) {
-                        final double probe = back(code, work[c + GAMMA], jacobian, work, o, null, out, k, jac, buffer,
-                                address, base);
+                        final double probe = back(code, work[c + GAMMA], jacobian, work, o, null, out, k, jac, base);
                         if (probe != 0.0) {
                             ZoneChecks.finiteOutputs("nabla", out.nabla[k], probe, in.load(k, out.workZone));
                         }
@@ -302,25 +293,20 @@ public final class MixingLengthZone {
                         finish(code, in.load(k, out.workZone), settings.semiconvection(), settings.thermohaline(),
                                 work, o, res);
                         out.store(k, res, false);
-                        if (buffer != null) {
-                            buffer.put(base, res.dNabla);
-                            buffer.put(base + ZoneInput.COUNT, res.dVelocity);
-                            buffer.put(base + 2 * ZoneInput.COUNT, res.dConvectiveFraction);
-                            buffer.put(base + 3 * ZoneInput.COUNT, res.dDiffusion);
-                        } else if (jacobian) {
+                        if (jacobian) {
                             stage(res, jac, base);
                         }
                     }
                 } catch (RuntimeException e) {
                     // the zones before the refused one keep their whole result
                     if (staged) {
-                        unstage(work, k - c0, out, c0);
+                        unstage(work, k - c0, out, c0, buffer, origin);
                     }
                     throw e;
                 }
             }
             if (staged) {
-                unstage(work, c1 - c0, out, c0);
+                unstage(work, c1 - c0, out, c0, buffer, origin);
             }
         }
     }
@@ -342,8 +328,16 @@ public final class MixingLengthZone {
         System.arraycopy(r.dDiffusion, 0, jac, base + 3 * ZoneInput.COUNT, ZoneInput.COUNT);
     }
 
-    /** Copies a chunk's staged Jacobians into the derivative columns, one column at a time. */
-    private static void unstage(double[] work, int zones, ConvectionColumns out, int first) {
+    /**
+     * Copies a chunk's staged Jacobians into the buffer (one bulk put, when there is a buffer) or into
+     * the derivative columns, one column at a time.
+     */
+    private static void unstage(double[] work, int zones, ConvectionColumns out, int first, DoubleBuffer buffer,
+                                int origin) {
+        if (buffer != null) {
+            buffer.put(origin + first * ZoneMajorJacobian.PER_ZONE, work, STAGE, zones * ZoneMajorJacobian.PER_ZONE);
+            return;
+        }
         for (int i = 0; i < ZoneInput.COUNT; i++) {
             unstage(work, STAGE + i, zones, out.dNabla[i], first);
             unstage(work, STAGE + ZoneInput.COUNT + i, zones, out.dVelocity[i], first);
@@ -439,7 +433,7 @@ public final class MixingLengthZone {
         if (code >= CUBIC) {
             final double[] b = out.dConvectiveFraction;
             final double gamma = efficiency(code, b[A0], b[RHS], b[BETA], eddyShape > 0.0, geometry.cubicStarts());
-            final double probe = back(code, gamma, jacobian, null, 0, out, null, 0, null, null, 0L, 0);
+            final double probe = back(code, gamma, jacobian, null, 0, out, null, 0, null, 0);
             ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
         } else {
             finish(code, z, semiconvection, thermohaline, null, 0, out);
@@ -697,8 +691,7 @@ public final class MixingLengthZone {
      * @return 0, or NaN when a value or a derivative is not finite (the caller refuses the zone)
      */
     private static double back(int code, double gamma, boolean jacobian, double[] scratch, int o,
-                               ConvectionResult out, ConvectionColumns columns, int k, double[] jac,
-                               DoubleBuffer buffer, long address, int base) {
+                               ConvectionResult out, ConvectionColumns columns, int k, double[] jac, int base) {
         // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
         final double[] a = scratch != null ? scratch : out.dVelocity;
         final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
@@ -873,7 +866,7 @@ public final class MixingLengthZone {
             final double velAlpha = velocity * lnV;
             final double fracAlpha = cMu * mu + cNu * nu;
             final double diffAlpha = diffusion * (lnV + lambda);
-            put(out, jac, buffer, address, base, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
+            put(out, jac, base, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
             sum = (nablaAlpha + velAlpha) + (fracAlpha + diffAlpha);
         }
         // T: nabla_rad ~ T^-4, U ~ T^3
@@ -885,7 +878,7 @@ public final class MixingLengthZone {
             final double velT = velocity * lnV;
             final double fracT = cR * dR + cMu * mu;
             final double diffT = diffusion * lnV;
-            put(out, jac, buffer, address, base, ZoneInput.T, nablaT, velT, fracT, diffT);
+            put(out, jac, base, ZoneInput.T, nablaT, velT, fracT, diffT);
             sum += (nablaT + velT) + (fracT + diffT);
         }
         // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
@@ -899,7 +892,7 @@ public final class MixingLengthZone {
             final double velRho = velocity * lnV;
             final double fracRho = cMu * mu + cNu * nu;
             final double diffRho = diffusion * (lnV + lambda);
-            put(out, jac, buffer, address, base, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
+            put(out, jac, base, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
             sum += (nablaRho + velRho) + (fracRho + diffRho);
         }
         // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
@@ -914,7 +907,7 @@ public final class MixingLengthZone {
             final double velP = velocity * lnV;
             final double fracP = cR * dR + cMu * mu + cNu * nu;
             final double diffP = diffusion * (lnV + lambda);
-            put(out, jac, buffer, address, base, ZoneInput.P, nablaP, velP, fracP, diffP);
+            put(out, jac, base, ZoneInput.P, nablaP, velP, fracP, diffP);
             sum += (nablaP + velP) + (fracP + diffP);
         }
         // L: nabla_rad only
@@ -925,7 +918,7 @@ public final class MixingLengthZone {
             final double velL = velocity * lnV;
             final double fracL = cR * dR;
             final double diffL = diffusion * lnV;
-            put(out, jac, buffer, address, base, ZoneInput.L, nablaL, velL, fracL, diffL);
+            put(out, jac, base, ZoneInput.L, nablaL, velL, fracL, diffL);
             sum += (nablaL + velL) + (fracL + diffL);
         }
         // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
@@ -940,7 +933,7 @@ public final class MixingLengthZone {
             final double velM = velocity * lnV;
             final double fracM = cR * dR + cMu * mu + cNu * nu;
             final double diffM = diffusion * (lnV + lambda);
-            put(out, jac, buffer, address, base, ZoneInput.M, nablaM, velM, fracM, diffM);
+            put(out, jac, base, ZoneInput.M, nablaM, velM, fracM, diffM);
             sum += (nablaM + velM) + (fracM + diffM);
         }
         // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
@@ -954,7 +947,7 @@ public final class MixingLengthZone {
             final double velRadius = velocity * lnV;
             final double fracRadius = cMu * mu + cNu * nu;
             final double diffRadius = diffusion * (lnV + lambda);
-            put(out, jac, buffer, address, base, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
+            put(out, jac, base, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
             sum += (nablaRadius + velRadius) + (fracRadius + diffRadius);
         }
         // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
@@ -967,7 +960,7 @@ public final class MixingLengthZone {
             final double velKappa = velocity * lnV;
             final double fracKappa = cR * dR + cMu * mu + cNu * nu;
             final double diffKappa = diffusion * lnV;
-            put(out, jac, buffer, address, base, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
+            put(out, jac, base, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
             sum += (nablaKappa + velKappa) + (fracKappa + diffKappa);
         }
         // c_P: U ~ 1/c_P
@@ -978,7 +971,7 @@ public final class MixingLengthZone {
             final double velCp = velocity * lnV;
             final double fracCp = cMu * mu;
             final double diffCp = diffusion * lnV;
-            put(out, jac, buffer, address, base, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
+            put(out, jac, base, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
             sum += (nablaCp + velCp) + (fracCp + diffCp);
         }
         // nabla_ad: dA = 1
@@ -988,7 +981,7 @@ public final class MixingLengthZone {
             final double velNablaAd = velocity * lnV;
             final double fracNablaAd = cA;
             final double diffNablaAd = diffusion * lnV;
-            put(out, jac, buffer, address, base, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
+            put(out, jac, base, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
             sum += (nablaNablaAd + velNablaAd) + (fracNablaAd + diffNablaAd);
         }
         // delta: U ~ delta^-1/2, sigma = +1/2
@@ -999,17 +992,17 @@ public final class MixingLengthZone {
             final double velDelta = velocity * lnV;
             final double fracDelta = cMu * mu;
             final double diffDelta = diffusion * lnV;
-            put(out, jac, buffer, address, base, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
+            put(out, jac, base, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
             sum += (nablaDelta + velDelta) + (fracDelta + diffDelta);
         }
         // nabla_mu and phi enter only through the composition term, added below
-        put(out, jac, buffer, address, base, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
-        put(out, jac, buffer, address, base, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
+        put(out, jac, base, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
+        put(out, jac, base, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
         double probe = values;
         if (!(Math.abs(sum) <= Double.MAX_VALUE)) {
             for (int output = 0; output < ZoneMajorJacobian.OUTPUTS; output++) {
                 for (int i = 0; i < ZoneInput.COUNT; i++) {
-                    probe += entry(out, jac, buffer, base, output, i) * 0.0;
+                    probe += entry(out, jac, base, output, i) * 0.0;
                 }
             }
         }
@@ -1019,38 +1012,27 @@ public final class MixingLengthZone {
             final double bMu = -(phi * invDelta);
             final double bPhi = -nablaMu * invDelta;
             final double bDelta = -buoyancy * invDelta;
-            probe += composition(out, jac, buffer, base, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
-                    + composition(out, jac, buffer, base, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
-                    + composition(out, jac, buffer, base, ZoneMajorJacobian.CONVECTIVE_FRACTION,
+            probe += composition(out, jac, base, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
+                    + composition(out, jac, base, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
+                    + composition(out, jac, base, ZoneMajorJacobian.CONVECTIVE_FRACTION,
                             w * shareSlopeB * invNablaRad, bMu, bPhi, bDelta)
-                    + composition(out, jac, buffer, base, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
+                    + composition(out, jac, base, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
                             bDelta);
         }
         return probe;
     }
 
     /**
-     * Stores the four entries of one input i: into the zone-major block from base (the highest offset
-     * first), into a buffer (straight into its memory when {@code address} is not 0, see
-     * {@link DirectStores}), or into the result's arrays when neither is given.
+     * Stores the four entries of one input i: into the zone-major block (or staging) from base, the
+     * highest offset first, or into the result's arrays when there is none.
      */
-    private static void put(ConvectionResult out, double[] jac, DoubleBuffer buffer, long address, int base, int i,
+    private static void put(ConvectionResult out, double[] jac, int base, int i,
                             double nabla, double velocity, double fraction, double diffusion) {
         if (jac != null) {
             jac[base + 3 * ZoneInput.COUNT + i] = diffusion;
             jac[base + 2 * ZoneInput.COUNT + i] = fraction;
             jac[base + ZoneInput.COUNT + i] = velocity;
             jac[base + i] = nabla;
-        } else if (address != 0L) {
-            DirectStores.put(address, base + 3 * ZoneInput.COUNT + i, diffusion);
-            DirectStores.put(address, base + 2 * ZoneInput.COUNT + i, fraction);
-            DirectStores.put(address, base + ZoneInput.COUNT + i, velocity);
-            DirectStores.put(address, base + i, nabla);
-        } else if (buffer != null) {
-            buffer.put(base + 3 * ZoneInput.COUNT + i, diffusion);
-            buffer.put(base + 2 * ZoneInput.COUNT + i, fraction);
-            buffer.put(base + ZoneInput.COUNT + i, velocity);
-            buffer.put(base + i, nabla);
         } else {
             out.dDiffusion[i] = diffusion;
             out.dConvectiveFraction[i] = fraction;
@@ -1060,19 +1042,14 @@ public final class MixingLengthZone {
     }
 
     /** Entry (o, i) of a Jacobian written by {@link #put}. */
-    private static double entry(ConvectionResult out, double[] jac, DoubleBuffer buffer, int base, int o, int i) {
-        final int at = base + o * ZoneInput.COUNT + i;
-        return jac != null ? jac[at] : buffer != null ? buffer.get(at) : row(out, o)[i];
+    private static double entry(ConvectionResult out, double[] jac, int base, int o, int i) {
+        return jac != null ? jac[base + o * ZoneInput.COUNT + i] : row(out, o)[i];
     }
 
     /** Sets entry (o, i) of a Jacobian written by {@link #put}. */
-    private static void setEntry(ConvectionResult out, double[] jac, DoubleBuffer buffer, int base, int o, int i,
-                                 double value) {
-        final int at = base + o * ZoneInput.COUNT + i;
+    private static void setEntry(ConvectionResult out, double[] jac, int base, int o, int i, double value) {
         if (jac != null) {
-            jac[at] = value;
-        } else if (buffer != null) {
-            buffer.put(at, value);
+            jac[base + o * ZoneInput.COUNT + i] = value;
         } else {
             row(out, o)[i] = value;
         }
@@ -1088,14 +1065,14 @@ public final class MixingLengthZone {
      *
      * @return the sum of (entry * 0) over the three: NaN exactly when one is not finite
      */
-    private static double composition(ConvectionResult out, double[] jac, DoubleBuffer buffer, int base, int o,
+    private static double composition(ConvectionResult out, double[] jac, int base, int o,
                                       double perB, double bMu, double bPhi, double bDelta) {
         final double mu = perB * bMu;
         final double phi = perB * bPhi;
-        final double delta = entry(out, jac, buffer, base, o, ZoneInput.DELTA) + perB * bDelta;
-        setEntry(out, jac, buffer, base, o, ZoneInput.NABLA_MU, mu);
-        setEntry(out, jac, buffer, base, o, ZoneInput.PHI, phi);
-        setEntry(out, jac, buffer, base, o, ZoneInput.DELTA, delta);
+        final double delta = entry(out, jac, base, o, ZoneInput.DELTA) + perB * bDelta;
+        setEntry(out, jac, base, o, ZoneInput.NABLA_MU, mu);
+        setEntry(out, jac, base, o, ZoneInput.PHI, phi);
+        setEntry(out, jac, base, o, ZoneInput.DELTA, delta);
         return (mu * 0.0 + phi * 0.0) + delta * 0.0;
     }
 
