@@ -243,9 +243,13 @@ public final class MixingLengthZone {
         final boolean transparent = eddyShape > 0.0;
         final double[] starts = geometry.cubicStarts();
         final double[] work = out.work;
-        // zone j of a chunk: scratch at j * SCRATCH, its staged Jacobian (column layout) at STAGE + j * PER_ZONE
+        // zone j of a chunk: scratch at j * SCRATCH; its staged Jacobian from STAGE, entry (o, i) at
+        // STAGE + (o * COUNT + i) * CHUNK + j for the column layout (each column's run of the chunk's zones
+        // contiguous) and at STAGE + j * PER_ZONE + o * COUNT + i for a buffer (zone-major)
         final boolean staged = jacobian && block == null;
+        final boolean columnLayout = staged && buffer == null;
         final double[] jac = staged ? work : block;
+        final int stride = columnLayout ? CHUNK : 1;
         final double[] t = in.temperature;
         final double[] rho = in.density;
         final double[] p = in.pressure;
@@ -280,11 +284,13 @@ public final class MixingLengthZone {
                 final int c = o + 2 * ZoneInput.COUNT;
                 final int code = (int) work[c + CODE];
                 // zone-major: output o of zone k at base + o * COUNT, in the block or in the chunk's staging
-                final int base = staged ? STAGE + (k - c0) * ZoneMajorJacobian.PER_ZONE
+                final int base = columnLayout ? STAGE + (k - c0)
+                        : staged ? STAGE + (k - c0) * ZoneMajorJacobian.PER_ZONE
                         : origin + k * ZoneMajorJacobian.PER_ZONE;
                 try {
                     if (code >= CUBIC) {
-                        final double probe = back(code, work[c + GAMMA], jacobian, work, o, null, out, k, jac, base);
+                        final double probe = back(code, work[c + GAMMA], jacobian, work, o, null, out, k, jac, base,
+                                stride);
                         if (probe != 0.0) {
                             ZoneChecks.finiteOutputs("nabla", out.nabla[k], probe, in.load(k, out.workZone));
                         }
@@ -294,7 +300,7 @@ public final class MixingLengthZone {
                                 work, o, res);
                         out.store(k, res, false);
                         if (jacobian) {
-                            stage(res, jac, base);
+                            stage(res, jac, base, stride);
                         }
                     }
                 } catch (RuntimeException e) {
@@ -320,17 +326,19 @@ public final class MixingLengthZone {
         }
     }
 
-    /** Copies one zone's Jacobian from a result into its zone-major block (or staging) at {@code base}. */
-    private static void stage(ConvectionResult r, double[] jac, int base) {
-        System.arraycopy(r.dNabla, 0, jac, base, ZoneInput.COUNT);
-        System.arraycopy(r.dVelocity, 0, jac, base + ZoneInput.COUNT, ZoneInput.COUNT);
-        System.arraycopy(r.dConvectiveFraction, 0, jac, base + 2 * ZoneInput.COUNT, ZoneInput.COUNT);
-        System.arraycopy(r.dDiffusion, 0, jac, base + 3 * ZoneInput.COUNT, ZoneInput.COUNT);
+    /** Copies one zone's Jacobian from a result into its block or staging, entry (o, i) at base + (o * COUNT + i) * stride. */
+    private static void stage(ConvectionResult r, double[] jac, int base, int stride) {
+        for (int i = 0; i < ZoneInput.COUNT; i++) {
+            jac[base + i * stride] = r.dNabla[i];
+            jac[base + (ZoneInput.COUNT + i) * stride] = r.dVelocity[i];
+            jac[base + (2 * ZoneInput.COUNT + i) * stride] = r.dConvectiveFraction[i];
+            jac[base + (3 * ZoneInput.COUNT + i) * stride] = r.dDiffusion[i];
+        }
     }
 
     /**
-     * Copies a chunk's staged Jacobians into the buffer (one bulk put, when there is a buffer) or into
-     * the derivative columns, one column at a time.
+     * Copies a chunk's staged Jacobians into the buffer (one bulk put) or, for the column layout, each
+     * derivative column's run of the chunk's zones with one array copy.
      */
     private static void unstage(double[] work, int zones, ConvectionColumns out, int first, DoubleBuffer buffer,
                                 int origin) {
@@ -339,16 +347,11 @@ public final class MixingLengthZone {
             return;
         }
         for (int i = 0; i < ZoneInput.COUNT; i++) {
-            unstage(work, STAGE + i, zones, out.dNabla[i], first);
-            unstage(work, STAGE + ZoneInput.COUNT + i, zones, out.dVelocity[i], first);
-            unstage(work, STAGE + 2 * ZoneInput.COUNT + i, zones, out.dConvectiveFraction[i], first);
-            unstage(work, STAGE + 3 * ZoneInput.COUNT + i, zones, out.dDiffusion[i], first);
-        }
-    }
-
-    private static void unstage(double[] work, int start, int zones, double[] column, int first) {
-        for (int j = 0; j < zones; j++) {
-            column[first + j] = work[start + j * ZoneMajorJacobian.PER_ZONE];
+            System.arraycopy(work, STAGE + i * CHUNK, out.dNabla[i], first, zones);
+            System.arraycopy(work, STAGE + (ZoneInput.COUNT + i) * CHUNK, out.dVelocity[i], first, zones);
+            System.arraycopy(work, STAGE + (2 * ZoneInput.COUNT + i) * CHUNK, out.dConvectiveFraction[i], first,
+                    zones);
+            System.arraycopy(work, STAGE + (3 * ZoneInput.COUNT + i) * CHUNK, out.dDiffusion[i], first, zones);
         }
     }
 
@@ -433,7 +436,7 @@ public final class MixingLengthZone {
         if (code >= CUBIC) {
             final double[] b = out.dConvectiveFraction;
             final double gamma = efficiency(code, b[A0], b[RHS], b[BETA], eddyShape > 0.0, geometry.cubicStarts());
-            final double probe = back(code, gamma, jacobian, null, 0, out, null, 0, null, 0);
+            final double probe = back(code, gamma, jacobian, null, 0, out, null, 0, null, 0, 1);
             ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
         } else {
             finish(code, z, semiconvection, thermohaline, null, 0, out);
@@ -691,7 +694,8 @@ public final class MixingLengthZone {
      * @return 0, or NaN when a value or a derivative is not finite (the caller refuses the zone)
      */
     private static double back(int code, double gamma, boolean jacobian, double[] scratch, int o,
-                               ConvectionResult out, ConvectionColumns columns, int k, double[] jac, int base) {
+                               ConvectionResult out, ConvectionColumns columns, int k, double[] jac, int base,
+                               int stride) {
         // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
         final double[] a = scratch != null ? scratch : out.dVelocity;
         final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
@@ -866,7 +870,7 @@ public final class MixingLengthZone {
             final double velAlpha = velocity * lnV;
             final double fracAlpha = cMu * mu + cNu * nu;
             final double diffAlpha = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
+            put(out, jac, base, stride, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
             sum = (nablaAlpha + velAlpha) + (fracAlpha + diffAlpha);
         }
         // T: nabla_rad ~ T^-4, U ~ T^3
@@ -878,7 +882,7 @@ public final class MixingLengthZone {
             final double velT = velocity * lnV;
             final double fracT = cR * dR + cMu * mu;
             final double diffT = diffusion * lnV;
-            put(out, jac, base, ZoneInput.T, nablaT, velT, fracT, diffT);
+            put(out, jac, base, stride, ZoneInput.T, nablaT, velT, fracT, diffT);
             sum += (nablaT + velT) + (fracT + diffT);
         }
         // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
@@ -892,7 +896,7 @@ public final class MixingLengthZone {
             final double velRho = velocity * lnV;
             final double fracRho = cMu * mu + cNu * nu;
             final double diffRho = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
+            put(out, jac, base, stride, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
             sum += (nablaRho + velRho) + (fracRho + diffRho);
         }
         // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
@@ -907,7 +911,7 @@ public final class MixingLengthZone {
             final double velP = velocity * lnV;
             final double fracP = cR * dR + cMu * mu + cNu * nu;
             final double diffP = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.P, nablaP, velP, fracP, diffP);
+            put(out, jac, base, stride, ZoneInput.P, nablaP, velP, fracP, diffP);
             sum += (nablaP + velP) + (fracP + diffP);
         }
         // L: nabla_rad only
@@ -918,7 +922,7 @@ public final class MixingLengthZone {
             final double velL = velocity * lnV;
             final double fracL = cR * dR;
             final double diffL = diffusion * lnV;
-            put(out, jac, base, ZoneInput.L, nablaL, velL, fracL, diffL);
+            put(out, jac, base, stride, ZoneInput.L, nablaL, velL, fracL, diffL);
             sum += (nablaL + velL) + (fracL + diffL);
         }
         // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
@@ -933,7 +937,7 @@ public final class MixingLengthZone {
             final double velM = velocity * lnV;
             final double fracM = cR * dR + cMu * mu + cNu * nu;
             final double diffM = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.M, nablaM, velM, fracM, diffM);
+            put(out, jac, base, stride, ZoneInput.M, nablaM, velM, fracM, diffM);
             sum += (nablaM + velM) + (fracM + diffM);
         }
         // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
@@ -947,7 +951,7 @@ public final class MixingLengthZone {
             final double velRadius = velocity * lnV;
             final double fracRadius = cMu * mu + cNu * nu;
             final double diffRadius = diffusion * (lnV + lambda);
-            put(out, jac, base, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
+            put(out, jac, base, stride, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
             sum += (nablaRadius + velRadius) + (fracRadius + diffRadius);
         }
         // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
@@ -960,7 +964,7 @@ public final class MixingLengthZone {
             final double velKappa = velocity * lnV;
             final double fracKappa = cR * dR + cMu * mu + cNu * nu;
             final double diffKappa = diffusion * lnV;
-            put(out, jac, base, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
+            put(out, jac, base, stride, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
             sum += (nablaKappa + velKappa) + (fracKappa + diffKappa);
         }
         // c_P: U ~ 1/c_P
@@ -971,7 +975,7 @@ public final class MixingLengthZone {
             final double velCp = velocity * lnV;
             final double fracCp = cMu * mu;
             final double diffCp = diffusion * lnV;
-            put(out, jac, base, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
+            put(out, jac, base, stride, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
             sum += (nablaCp + velCp) + (fracCp + diffCp);
         }
         // nabla_ad: dA = 1
@@ -981,7 +985,7 @@ public final class MixingLengthZone {
             final double velNablaAd = velocity * lnV;
             final double fracNablaAd = cA;
             final double diffNablaAd = diffusion * lnV;
-            put(out, jac, base, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
+            put(out, jac, base, stride, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
             sum += (nablaNablaAd + velNablaAd) + (fracNablaAd + diffNablaAd);
         }
         // delta: U ~ delta^-1/2, sigma = +1/2
@@ -992,17 +996,17 @@ public final class MixingLengthZone {
             final double velDelta = velocity * lnV;
             final double fracDelta = cMu * mu;
             final double diffDelta = diffusion * lnV;
-            put(out, jac, base, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
+            put(out, jac, base, stride, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
             sum += (nablaDelta + velDelta) + (fracDelta + diffDelta);
         }
         // nabla_mu and phi enter only through the composition term, added below
-        put(out, jac, base, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
-        put(out, jac, base, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
+        put(out, jac, base, stride, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
+        put(out, jac, base, stride, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
         double probe = values;
         if (!(Math.abs(sum) <= Double.MAX_VALUE)) {
             for (int output = 0; output < ZoneMajorJacobian.OUTPUTS; output++) {
                 for (int i = 0; i < ZoneInput.COUNT; i++) {
-                    probe += entry(out, jac, base, output, i) * 0.0;
+                    probe += entry(out, jac, base, stride, output, i) * 0.0;
                 }
             }
         }
@@ -1012,27 +1016,36 @@ public final class MixingLengthZone {
             final double bMu = -(phi * invDelta);
             final double bPhi = -nablaMu * invDelta;
             final double bDelta = -buoyancy * invDelta;
-            probe += composition(out, jac, base, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
-                    + composition(out, jac, base, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
-                    + composition(out, jac, base, ZoneMajorJacobian.CONVECTIVE_FRACTION,
+            probe += composition(out, jac, base, stride, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
+                    + composition(out, jac, base, stride, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
+                    + composition(out, jac, base, stride, ZoneMajorJacobian.CONVECTIVE_FRACTION,
                             w * shareSlopeB * invNablaRad, bMu, bPhi, bDelta)
-                    + composition(out, jac, base, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
+                    + composition(out, jac, base, stride, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
                             bDelta);
         }
         return probe;
     }
 
     /**
-     * Stores the four entries of one input i: into the zone-major block (or staging) from base, the
-     * highest offset first, or into the result's arrays when there is none.
+     * Stores the four entries of one input i into the zone-major block or the chunk's staging, entry
+     * (o, i) at {@code base + (o * COUNT + i) * stride} (the highest offset first), or into the result's
+     * arrays when there is neither. The stride is 1 or {@link #CHUNK}, each written out so that every
+     * offset is a constant.
      */
-    private static void put(ConvectionResult out, double[] jac, int base, int i,
+    private static void put(ConvectionResult out, double[] jac, int base, int stride, int i,
                             double nabla, double velocity, double fraction, double diffusion) {
         if (jac != null) {
-            jac[base + 3 * ZoneInput.COUNT + i] = diffusion;
-            jac[base + 2 * ZoneInput.COUNT + i] = fraction;
-            jac[base + ZoneInput.COUNT + i] = velocity;
-            jac[base + i] = nabla;
+            if (stride == 1) {
+                jac[base + 3 * ZoneInput.COUNT + i] = diffusion;
+                jac[base + 2 * ZoneInput.COUNT + i] = fraction;
+                jac[base + ZoneInput.COUNT + i] = velocity;
+                jac[base + i] = nabla;
+            } else {
+                jac[base + (3 * ZoneInput.COUNT + i) * CHUNK] = diffusion;
+                jac[base + (2 * ZoneInput.COUNT + i) * CHUNK] = fraction;
+                jac[base + (ZoneInput.COUNT + i) * CHUNK] = velocity;
+                jac[base + i * CHUNK] = nabla;
+            }
         } else {
             out.dDiffusion[i] = diffusion;
             out.dConvectiveFraction[i] = fraction;
@@ -1042,14 +1055,15 @@ public final class MixingLengthZone {
     }
 
     /** Entry (o, i) of a Jacobian written by {@link #put}. */
-    private static double entry(ConvectionResult out, double[] jac, int base, int o, int i) {
-        return jac != null ? jac[base + o * ZoneInput.COUNT + i] : row(out, o)[i];
+    private static double entry(ConvectionResult out, double[] jac, int base, int stride, int o, int i) {
+        return jac != null ? jac[base + (o * ZoneInput.COUNT + i) * stride] : row(out, o)[i];
     }
 
     /** Sets entry (o, i) of a Jacobian written by {@link #put}. */
-    private static void setEntry(ConvectionResult out, double[] jac, int base, int o, int i, double value) {
+    private static void setEntry(ConvectionResult out, double[] jac, int base, int stride, int o, int i,
+                                 double value) {
         if (jac != null) {
-            jac[base + o * ZoneInput.COUNT + i] = value;
+            jac[base + (o * ZoneInput.COUNT + i) * stride] = value;
         } else {
             row(out, o)[i] = value;
         }
@@ -1065,14 +1079,14 @@ public final class MixingLengthZone {
      *
      * @return the sum of (entry * 0) over the three: NaN exactly when one is not finite
      */
-    private static double composition(ConvectionResult out, double[] jac, int base, int o,
+    private static double composition(ConvectionResult out, double[] jac, int base, int stride, int o,
                                       double perB, double bMu, double bPhi, double bDelta) {
         final double mu = perB * bMu;
         final double phi = perB * bPhi;
-        final double delta = entry(out, jac, base, o, ZoneInput.DELTA) + perB * bDelta;
-        setEntry(out, jac, base, o, ZoneInput.NABLA_MU, mu);
-        setEntry(out, jac, base, o, ZoneInput.PHI, phi);
-        setEntry(out, jac, base, o, ZoneInput.DELTA, delta);
+        final double delta = entry(out, jac, base, stride, o, ZoneInput.DELTA) + perB * bDelta;
+        setEntry(out, jac, base, stride, o, ZoneInput.NABLA_MU, mu);
+        setEntry(out, jac, base, stride, o, ZoneInput.PHI, phi);
+        setEntry(out, jac, base, stride, o, ZoneInput.DELTA, delta);
         return (mu * 0.0 + phi * 0.0) + delta * 0.0;
     }
 
