@@ -117,7 +117,7 @@ public final class MixingLengthZone {
      */
     static final int SCRATCH = 3 * ZoneInput.COUNT;
     /** Zones per chunk of a batch call: the stages run over a chunk at a time (see {@link #solveBatch}). */
-    static final int CHUNK = 32;
+    static final int CHUNK = 16;
 
     // section A
     private static final int INV_T = 0;
