@@ -88,6 +88,8 @@ public final class SahaIonisation {
     /** Donor electrons per metal nucleus, A/2 - 1, so that fully ionised metals count Z/2 particles per m_u. */
     public static final double DONOR_ELECTRONS = METAL_MASS_NUMBER / 2.0 - 1.0;
 
+    /** The solve takes Halley steps where the charge balance's relative residual rhs / x - 1 is below this. */
+    static final double HALLEY_REGION = 0.25;
     /** Bounds of the solve: iterations at most. */
     static final int MAX_ITERATIONS = 200;
     /** Lower limit of ln q (see the class comment). */
@@ -179,6 +181,7 @@ public final class SahaIonisation {
         double t = temperature;
         double rho = density;
         double invT = 1.0 / t;
+        double invRho = 1.0 / rho;
         double helium = Math.max(0.0, 1.0 - hydrogen - metals);
         double metalNuclei = metals / METAL_MASS_NUMBER;
         double nuN = hydrogen + 0.25 * helium + metalNuclei;   // nuclei per m_u
@@ -197,7 +200,7 @@ public final class SahaIonisation {
         double lD0 = V_D0 * excluded;
         // the Saha ratios q = exp(base - theta / T + dL), base = ln(C T^(3/2) / n_N): from
         // C T^(3/2) / n_N itself where that is a normal double, else through logarithms
-        double ratio = t * Math.sqrt(t) / rhoNu;
+        double ratio = t * Math.sqrt(t) * (invRho * invNu);
         boolean normal = ratio > 1e-250 && ratio < 1e250;
         double argH = -THETA_H * invT + lH0;
         double arg1 = -THETA_HE1 * invT + (lHe0 - lHe1);
@@ -223,38 +226,56 @@ public final class SahaIonisation {
             qD = Math.exp(limit(base + argD));
             nLambda3 = Math.exp(Math.min(-base, 700.0));
         }
-        // a ratio at either limit is constant there: no derivatives through it (see the class comment)
+        // d ln q / d tau (h), d2 / d tau2 (hp), d / d ln rho (k), d2 / d ln rho2 (kp), and the -ln w of each
+        // stage's bound state (b..)
+        double hpH = -THETA_H * invT;
+        double hp1 = -THETA_HE1 * invT;
+        double hp2 = -THETA_HE2 * invT;
+        double hpD = -THETA_D * invT;
+        double hH = 1.5 - hpH;
+        double h1 = 1.5 - hp1;
+        double h2 = 1.5 - hp2;
+        double hD = 1.5 - hpD;
+        double kpH = lH0;
+        double kp1 = lHe0 - lHe1;
+        double kp2 = lHe1;
+        double kpD = lD0;
+        double kH = kpH - 1.0;
+        double k1 = kp1 - 1.0;
+        double k2 = kp2 - 1.0;
+        double kD = kpD - 1.0;
+        double bH0 = lH0;
+        double bHe0 = lHe0;
+        double bHe1 = lHe1;
+        double bD0 = lD0;
         boolean inH = qH > Q_MIN && qH < Q_MAX;
         boolean in1 = q1 > Q_MIN && q1 < Q_MAX;
         boolean in2 = q2 > Q_MIN && q2 < Q_MAX;
         boolean inD = qD > Q_MIN && qD < Q_MAX;
-        qH = Math.max(Q_MIN, Math.min(Q_MAX, qH));
-        q1 = Math.max(Q_MIN, Math.min(Q_MAX, q1));
-        q2 = Math.max(Q_MIN, Math.min(Q_MAX, q2));
-        qD = Math.max(Q_MIN, Math.min(Q_MAX, qD));
-
-        // d ln q / d tau (h), d2 / d tau2 (hp), d / d ln rho (k), d2 / d ln rho2 (kp); 0 where limited
-        double hH = inH ? 1.5 + THETA_H * invT : 0.0;
-        double h1 = in1 ? 1.5 + THETA_HE1 * invT : 0.0;
-        double h2 = in2 ? 1.5 + THETA_HE2 * invT : 0.0;
-        double hD = inD ? 1.5 + THETA_D * invT : 0.0;
-        double hpH = inH ? -THETA_H * invT : 0.0;
-        double hp1 = in1 ? -THETA_HE1 * invT : 0.0;
-        double hp2 = in2 ? -THETA_HE2 * invT : 0.0;
-        double hpD = inD ? -THETA_D * invT : 0.0;
-        double kpH = inH ? lH0 : 0.0;
-        double kp1 = in1 ? lHe0 - lHe1 : 0.0;
-        double kp2 = in2 ? lHe1 : 0.0;
-        double kpD = inD ? lD0 : 0.0;
-        double kH = inH ? kpH - 1.0 : 0.0;
-        double k1 = in1 ? kp1 - 1.0 : 0.0;
-        double k2 = in2 ? kp2 - 1.0 : 0.0;
-        double kD = inD ? kpD - 1.0 : 0.0;
-        // a bound state below a stage limited from above is empty to double precision: no -ln w weight
-        double bH0 = qH >= Q_MAX ? 0.0 : lH0;
-        double bHe0 = q1 >= Q_MAX ? 0.0 : lHe0;
-        double bHe1 = q2 >= Q_MAX ? 0.0 : lHe1;
-        double bD0 = qD >= Q_MAX ? 0.0 : lD0;
+        if (!(inH && in1 && in2 && inD)) {
+            // a ratio at either limit is constant there: no derivatives through it (see the class comment);
+            // a bound state below a stage limited from above is empty to double precision: no -ln w weight
+            if (!inH) {
+                bH0 = qH >= Q_MAX ? 0.0 : lH0;
+                qH = Math.max(Q_MIN, Math.min(Q_MAX, qH));
+                hH = hpH = kH = kpH = 0.0;
+            }
+            if (!in1) {
+                bHe0 = q1 >= Q_MAX ? 0.0 : lHe0;
+                q1 = Math.max(Q_MIN, Math.min(Q_MAX, q1));
+                h1 = hp1 = k1 = kp1 = 0.0;
+            }
+            if (!in2) {
+                bHe1 = q2 >= Q_MAX ? 0.0 : lHe1;
+                q2 = Math.max(Q_MIN, Math.min(Q_MAX, q2));
+                h2 = hp2 = k2 = kp2 = 0.0;
+            }
+            if (!inD) {
+                bD0 = qD >= Q_MAX ? 0.0 : lD0;
+                qD = Math.max(Q_MIN, Math.min(Q_MAX, qD));
+                hD = hpD = kD = kpD = 0.0;
+            }
+        }
 
         double x;
         if (aH * qH + aHe * q1 + aD * qD < NEUTRAL_X2 && aHe * q1 * q2 < NEUTRAL_X2 * 1e-60) {
@@ -292,6 +313,11 @@ public final class SahaIonisation {
             y2 = q1 * q2 * dHe;
         }
 
+        // Every per-nucleus sum below (x, the ionisation energy E, the excluded-volume term b) is linear in
+        // the four populations yH, p1 = P(He ionised at least once), p2 = P(He twice), yD. Their
+        // derivatives follow from the ionisation-stage distribution, an exponential family in the stage
+        // logs l = ln q - u (u = ln x): first derivatives through its covariances, second ones through
+        // its third cumulants, each computed once and shared by x, E and b.
         // moments: single-stage variance c and third cumulant kappa; helium covariances C and cumulants K
         double cH = yH * nH;
         double kapH = cH * (nH - yH);
@@ -307,42 +333,15 @@ public final class SahaIonisation {
         double k112 = c12 * (y0 - p1);
         double k122 = c12 * (q2c - p2);
         double k222 = c22 * (q2c - p2);
-        // charge: f = (1, 1) on (I1, I2)
+        // covariances of the charge I1 + I2 with I1 and with I2
         double ce1 = c11 + c12;
         double ce2 = c12 + c22;
-        double ke11 = k111 + k112;
-        double ke12 = k112 + k122;
-        double ke22 = k122 + k222;
 
-        // derivatives of u = ln x
+        // first derivatives of u = ln x (the charge balance differentiated), then of the stage logs
         double w = x + aH * cH + aHe * (ce1 + ce2) + aD * cD;
-        double uT = 0.0;
-        double uR = 0.0;
-        double uTT = 0.0;
-        double uTR = 0.0;
-        double uRR = 0.0;
-        if (x > 0.0) {
-            double invW = 1.0 / w;
-            uT = (aH * cH * hH + aHe * (ce1 * h1 + ce2 * h2) + aD * cD * hD) * invW;
-            uR = (aH * cH * kH + aHe * (ce1 * k1 + ce2 * k2) + aD * cD * kD) * invW;
-            double hTH = hH - uT;
-            double hT1 = h1 - uT;
-            double hT2 = h2 - uT;
-            double hTD = hD - uT;
-            double hRH = kH - uR;
-            double hR1 = k1 - uR;
-            double hR2 = k2 - uR;
-            double hRD = kD - uR;
-            uTT = (aH * kapH * hTH * hTH + aHe * (ke11 * hT1 * hT1 + 2.0 * ke12 * hT1 * hT2 + ke22 * hT2 * hT2)
-                    + aD * kapD * hTD * hTD
-                    + aH * cH * hpH + aHe * (ce1 * hp1 + ce2 * hp2) + aD * cD * hpD - x * uT * uT) * invW;
-            uTR = (aH * kapH * hTH * hRH + aHe * (ke11 * hT1 * hR1 + ke12 * (hT1 * hR2 + hT2 * hR1) + ke22 * hT2 * hR2)
-                    + aD * kapD * hTD * hRD - x * uT * uR) * invW;
-            uRR = (aH * kapH * hRH * hRH + aHe * (ke11 * hR1 * hR1 + 2.0 * ke12 * hR1 * hR2 + ke22 * hR2 * hR2)
-                    + aD * kapD * hRD * hRD
-                    + aH * cH * kpH + aHe * (ce1 * kp1 + ce2 * kp2) + aD * cD * kpD - x * uR * uR) * invW;
-        }
-        // derivatives of the stage logs l = ln q - u
+        double invW = x > 0.0 ? 1.0 / w : 0.0;
+        double uT = (aH * cH * hH + aHe * (ce1 * h1 + ce2 * h2) + aD * cD * hD) * invW;
+        double uR = (aH * cH * kH + aHe * (ce1 * k1 + ce2 * k2) + aD * cD * kD) * invW;
         double lTH = hH - uT;
         double lT1 = h1 - uT;
         double lT2 = h2 - uT;
@@ -351,58 +350,89 @@ public final class SahaIonisation {
         double lR1 = k1 - uR;
         double lR2 = k2 - uR;
         double lRD = kD - uR;
+        // second-order parts of the population derivatives that the third cumulants give (quadratic in
+        // the first derivatives of l): for yH and yD, and for p1 and p2 (sum_bc K_abc l_b l_c, a = 1, 2)
+        double qTTH = kapH * lTH * lTH;
+        double qTRH = kapH * lTH * lRH;
+        double qRRH = kapH * lRH * lRH;
+        double qTTD = kapD * lTD * lTD;
+        double qTRD = kapD * lTD * lRD;
+        double qRRD = kapD * lRD * lRD;
+        double tt11 = lT1 * lT1;
+        double tt12 = 2.0 * lT1 * lT2;
+        double tt22 = lT2 * lT2;
+        double tr11 = lT1 * lR1;
+        double tr12 = lT1 * lR2 + lT2 * lR1;
+        double tr22 = lT2 * lR2;
+        double rr11 = lR1 * lR1;
+        double rr12 = 2.0 * lR1 * lR2;
+        double rr22 = lR2 * lR2;
+        double qTT1 = k111 * tt11 + k112 * tt12 + k122 * tt22;
+        double qTT2 = k112 * tt11 + k122 * tt12 + k222 * tt22;
+        double qTR1 = k111 * tr11 + k112 * tr12 + k122 * tr22;
+        double qTR2 = k112 * tr11 + k122 * tr12 + k222 * tr22;
+        double qRR1 = k111 * rr11 + k112 * rr12 + k122 * rr22;
+        double qRR2 = k112 * rr11 + k122 * rr12 + k222 * rr22;
+        // second derivatives of u
+        double uTT = (aH * (qTTH + cH * hpH) + aHe * (qTT1 + qTT2 + ce1 * hp1 + ce2 * hp2) + aD * (qTTD + cD * hpD)
+                - x * uT * uT) * invW;
+        double uTR = (aH * qTRH + aHe * (qTR1 + qTR2) + aD * qTRD - x * uT * uR) * invW;
+        double uRR = (aH * (qRRH + cH * kpH) + aHe * (qRR1 + qRR2 + ce1 * kp1 + ce2 * kp2) + aD * (qRRD + cD * kpD)
+                - x * uR * uR) * invW;
+        // second derivatives of the stage logs: l_TT = hp - u_TT, l_TR = -u_TR, l_RR = kp - u_RR
         double lTTH = hpH - uTT;
         double lTT1 = hp1 - uTT;
         double lTT2 = hp2 - uTT;
         double lTTD = hpD - uTT;
-        double lTR = -uTR;
         double lRRH = kpH - uRR;
         double lRR1 = kp1 - uRR;
         double lRR2 = kp2 - uRR;
         double lRRD = kpD - uRR;
+        // population derivatives: first order (P_T, P_R) and second order (P_TT, P_TR, P_RR)
+        double pTH = cH * lTH;
+        double pRH = cH * lRH;
+        double pTD = cD * lTD;
+        double pRD = cD * lRD;
+        double pT1 = c11 * lT1 + c12 * lT2;
+        double pT2 = c12 * lT1 + c22 * lT2;
+        double pR1 = c11 * lR1 + c12 * lR2;
+        double pR2 = c12 * lR1 + c22 * lR2;
+        double pTTH = qTTH + cH * lTTH;
+        double pTRH = qTRH - cH * uTR;
+        double pRRH = qRRH + cH * lRRH;
+        double pTTD = qTTD + cD * lTTD;
+        double pTRD = qTRD - cD * uTR;
+        double pRRD = qRRD + cD * lRRD;
+        double pTT1 = qTT1 + c11 * lTT1 + c12 * lTT2;
+        double pTT2 = qTT2 + c12 * lTT1 + c22 * lTT2;
+        double pTR1 = qTR1 - ce1 * uTR;
+        double pTR2 = qTR2 - ce2 * uTR;
+        double pRR1 = qRR1 + c11 * lRR1 + c12 * lRR2;
+        double pRR2 = qRR2 + c12 * lRR1 + c22 * lRR2;
 
-        // ionisation energy per nucleus over k (K): f_H = theta_H, He f = (theta_1, theta_2), f_D = theta_D
-        double qe = aH * THETA_H * yH + aHe * (THETA_HE1 * p1 + THETA_HE2 * p2) + aD * THETA_D * yD;
-        double gH = aH * THETA_H * cH;
-        double gD = aD * THETA_D * cD;
-        double g1 = aHe * (THETA_HE1 * c11 + THETA_HE2 * c12);
-        double g2 = aHe * (THETA_HE1 * c12 + THETA_HE2 * c22);
-        double sH = aH * THETA_H * kapH;
-        double sD = aD * THETA_D * kapD;
-        double s11 = aHe * (THETA_HE1 * k111 + THETA_HE2 * k112);
-        double s12 = aHe * (THETA_HE1 * k112 + THETA_HE2 * k122);
-        double s22 = aHe * (THETA_HE1 * k122 + THETA_HE2 * k222);
-        double qeT = gH * lTH + g1 * lT1 + g2 * lT2 + gD * lTD;
-        double qeTT = sH * lTH * lTH + s11 * lT1 * lT1 + 2.0 * s12 * lT1 * lT2 + s22 * lT2 * lT2 + sD * lTD * lTD
-                + gH * lTTH + g1 * lTT1 + g2 * lTT2 + gD * lTTD;
-        double qeTR = sH * lTH * lRH + s11 * lT1 * lR1 + s12 * (lT1 * lR2 + lT2 * lR1) + s22 * lT2 * lR2
-                + sD * lTD * lRD + (gH + g1 + g2 + gD) * lTR;
+        // ionisation energy per nucleus over k (K): weights theta on (yH, p1, p2, yD)
+        double eH = aH * THETA_H;
+        double e1 = aHe * THETA_HE1;
+        double e2 = aHe * THETA_HE2;
+        double eD = aD * THETA_D;
+        double qe = eH * yH + e1 * p1 + e2 * p2 + eD * yD;
+        double qeT = eH * pTH + e1 * pT1 + e2 * pT2 + eD * pTD;
+        double qeTT = eH * pTTH + e1 * pTT1 + e2 * pTT2 + eD * pTTD;
+        double qeTR = eH * pTRH + e1 * pTR1 + e2 * pTR2 + eD * pTRD;
 
-        // excluded-volume term b per nucleus: f_H = -a_H l_H0, He f = a_He (l_He1 - l_He0, -l_He1), f_D = -a_D l_D0
+        // excluded-volume term b per nucleus = sum over bound states of population times -ln w (which is
+        // proportional to rho): weights on (yH, p1, p2, yD) -a_H l_H0, a_He (l_He1 - l_He0), -a_He l_He1, -a_D l_D0
         double b = aH * bH0 * nH + aHe * (bHe0 * y0 + bHe1 * y1) + aD * bD0 * nD;
         double fH = -aH * bH0;
-        double fD = -aD * bD0;
         double f1 = aHe * (bHe1 - bHe0);
         double f2 = -aHe * bHe1;
-        double bgH = fH * cH;
-        double bgD = fD * cD;
-        double bg1 = f1 * c11 + f2 * c12;
-        double bg2 = f1 * c12 + f2 * c22;
-        double bsH = fH * kapH;
-        double bsD = fD * kapD;
-        double bs11 = f1 * k111 + f2 * k112;
-        double bs12 = f1 * k112 + f2 * k122;
-        double bs22 = f1 * k122 + f2 * k222;
-        double bgT = bgH * lTH + bg1 * lT1 + bg2 * lT2 + bgD * lTD;
-        double bgR = bgH * lRH + bg1 * lR1 + bg2 * lR2 + bgD * lRD;
-        double bT = bgT;
+        double fD = -aD * bD0;
+        double bT = fH * pTH + f1 * pT1 + f2 * pT2 + fD * pTD;
+        double bgR = fH * pRH + f1 * pR1 + f2 * pR2 + fD * pRD;
         double bR = b + bgR;
-        double bTT = bsH * lTH * lTH + bs11 * lT1 * lT1 + 2.0 * bs12 * lT1 * lT2 + bs22 * lT2 * lT2 + bsD * lTD * lTD
-                + bgH * lTTH + bg1 * lTT1 + bg2 * lTT2 + bgD * lTTD;
-        double bTR = bgT + bsH * lTH * lRH + bs11 * lT1 * lR1 + bs12 * (lT1 * lR2 + lT2 * lR1) + bs22 * lT2 * lR2
-                + bsD * lTD * lRD + (bgH + bg1 + bg2 + bgD) * lTR;
-        double bRR = b + 2.0 * bgR + bsH * lRH * lRH + bs11 * lR1 * lR1 + 2.0 * bs12 * lR1 * lR2 + bs22 * lR2 * lR2
-                + bsD * lRD * lRD + bgH * lRRH + bg1 * lRR1 + bg2 * lRR2 + bgD * lRRD;
+        double bTT = fH * pTTH + f1 * pTT1 + f2 * pTT2 + fD * pTTD;
+        double bTR = bT + fH * pTRH + f1 * pTR1 + f2 * pTR2 + fD * pTRD;
+        double bRR = b + 2.0 * bgR + fH * pRRH + f1 * pRR1 + f2 * pRR2 + fD * pRRD;
 
         // gas pressure: ln P_g = const + ln rho + ln T + ln Pi, Pi = 1 + x + b
         double pi = 1.0 + x + b;
@@ -422,7 +452,7 @@ public final class SahaIonisation {
         double pg = kOverMu * rho * t * pi;
         double t2 = t * t;
         double aRad = radiation * A_RAD;
-        double pr = aRad * t2 * t2 / 3.0;
+        double pr = aRad * t2 * t2 * (1.0 / 3.0);
         double p = pg + pr;
         double invP = 1.0 / p;
         double beta = pg * invP;
@@ -437,7 +467,7 @@ public final class SahaIonisation {
         double chiRR = betaR * gR + beta * gRR;
 
         // c_V = (k nu_N / m_u) A + 4 a T^3 / rho
-        double radCv = 12.0 * pr * invT / rho;               // 4 a T^3 / rho
+        double radCv = 12.0 * pr * invT * invRho;            // 4 a T^3 / rho
         double aCv = 1.5 * (1.0 + x) + 1.5 * x * uT + qeT * invT;
         double aCvT = 1.5 * x * uT + 1.5 * x * (uT * uT + uTT) + (qeTT - qeT) * invT;
         double aCvR = 1.5 * x * uR + 1.5 * x * (uT * uR + uTR) + qeTR * invT;
@@ -445,7 +475,6 @@ public final class SahaIonisation {
         double cvT = kOverMu * aCvT + 3.0 * radCv;
         double cvR = kOverMu * aCvR - radCv;
 
-        double invRho = 1.0 / rho;
         double invCv = 1.0 / cv;
         double invChiTR = 1.0 / (chiT * chiR);
         double invChiT = chiR * invChiTR;
@@ -518,9 +547,14 @@ public final class SahaIonisation {
             return neutral * l;
         }
         // the Saha ratio without the occupation probability, q e^(-l), where q is not at a limit
-        double qIdeal = inH ? qH * Math.exp(-l) : 0.0;
+        double w = Math.exp(-l);
+        double qIdeal = inH ? qH * w : 0.0;
         double ideal = x == 0.0 ? 1.0 : x / (qIdeal + x);
-        return Math.max(ideal - neutral, neutral * -Math.expm1(-l));
+        // 1 - w = -expm1(-l) to a few ulps without StrictMath.expm1 (a native call on Java 17): directly where
+        // l >= 1/2, else by (1 - w) l / ln(1 / w), whose rounding errors cancel (Higham 2002, Accuracy and
+        // Stability of Numerical Algorithms, 2nd ed., section 1.14.1, after Kahan)
+        double oneMinusW = l >= 0.5 ? 1.0 - w : (1.0 - w) * l / -Math.log(w);
+        return Math.max(ideal - neutral, neutral * oneMinusW);
     }
 
     private static double negligible(double abundance) {
@@ -587,8 +621,9 @@ public final class SahaIonisation {
     }
 
     /**
-     * Free electrons per nucleus x from the charge balance x = sum alpha_i e_i(x), by Newton steps in
-     * ln x inside a bracket, with bisection whenever a step would leave it.
+     * Free electrons per nucleus x from the charge balance x = sum alpha_i e_i(x): Halley steps where
+     * the balance is within {@value #HALLEY_REGION} of closing, Newton steps in ln x farther out, both
+     * inside a bracket, with bisection in ln x whenever a step would leave it.
      *
      * @return x, in (0, xMax]
      */
@@ -599,33 +634,36 @@ public final class SahaIonisation {
         double hi = xMax;
         double x = lo;
         for (int i = 0; i < MAX_ITERATIONS; i++) {
+            // four independent divisions, so that they overlap
+            double invX = 1.0 / x;
             double dH = 1.0 / (qH + x);
-            double yH = qH * dH;
             double dD = 1.0 / (qD + x);
-            double yD = qD * dD;
             double dHe = 1.0 / (x * x + x * q1 + q1 * q2);
+            double yH = qH * dH;
+            double nH = x * dH;
+            double yD = qD * dD;
+            double nD = x * dD;
             double y0 = x * x * dHe;
             double y1 = x * q1 * dHe;
             double y2 = q1 * q2 * dHe;
             double rhs = aH * yH + aHe * (y1 + 2.0 * y2) + aD * yD;
-            double var = aH * yH * x * dH + aHe * (y0 * y1 + y1 * y2 + 4.0 * y0 * y2) + aD * yD * x * dD;
-            double z = rhs / x - 1.0;
+            double var = aH * yH * nH + aHe * (y0 * y1 + y1 * y2 + 4.0 * y0 * y2) + aD * yD * nD;
+            double z = rhs * invX - 1.0;
             if (z > 0.0) {
                 lo = x;
             } else {
                 hi = x;
             }
             double next;
-            if (Math.abs(z) < 0.0625) {
+            if (Math.abs(z) < HALLEY_REGION) {
                 // near the root: Halley on F = x - rhs(x), F' = 1 + var / x, F'' = -(var + k3) / x^2, with
                 // k3 = sum alpha E[(K - e)^3] (d var / d ln x = -k3); the error after a step s is O(s^3)
                 double eHe = y1 + 2.0 * y2;
                 double d0 = -eHe;
                 double d1 = 1.0 - eHe;
                 double d2 = 2.0 - eHe;
-                double k3 = aH * yH * x * dH * (x * dH - yH) + aD * yD * x * dD * (x * dD - yD)
+                double k3 = aH * yH * nH * (nH - yH) + aD * yD * nD * (nD - yD)
                         + aHe * (y0 * d0 * d0 * d0 + y1 * d1 * d1 * d1 + y2 * d2 * d2 * d2);
-                double invX = 1.0 / x;
                 double f1 = 1.0 + var * invX;
                 double step = 2.0 * z * f1 / (2.0 * f1 * f1 - z * (var + k3) * invX);
                 next = x * (1.0 + step);
@@ -634,8 +672,8 @@ public final class SahaIonisation {
                 }
             } else {
                 // far from it: Newton in ln x on G = ln(rhs / x), G' = -1 - var / rhs, exact in the
-                // low-ionisation limit where rhs ~ 1 / x
-                next = x * Math.exp(Math.log1p(z) * rhs / (rhs + var));
+                // low-ionisation limit where rhs ~ 1 / x (z is not small here: no log1p needed)
+                next = x * Math.exp(Math.log(1.0 + z) * rhs / (rhs + var));
             }
             if (!(next > lo && next < hi)) {
                 next = Math.sqrt(lo * hi);             // bisection in ln x
