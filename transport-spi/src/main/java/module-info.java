@@ -5,6 +5,8 @@
  * {@link io.github.startransport.spi.Transport}; providers implement
  * {@link io.github.startransport.spi.TransportProvider}.
  */
+// "module": the qualified export names the core module, which is not on the spi's own module path
+@SuppressWarnings("module")
 module io.github.startransport.spi {
     exports io.github.startransport.spi;
     exports io.github.startransport.spi.sharing to io.github.startransport.core;

@@ -21,6 +21,7 @@ import io.github.startransport.spi.ProfileColumn;
 import io.github.startransport.spi.StabilityColumns;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ZoneColumns;
+import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
 import org.apache.commons.math3.analysis.BivariateFunction;
 import org.apache.commons.math3.analysis.interpolation.BicubicInterpolator;
@@ -65,6 +66,7 @@ public class BatchBenchmark {
     /** Repetitions so that every invocation handles 2000 zones ({@link OperationsPerInvocation}). */
     private int reps;
     private ConvectionColumns conv;
+    private double[] block;
     private StabilityColumns stab;
     private OpacityColumns opac;
     private final LocalMixingLength convection = new LocalMixingLength();
@@ -109,6 +111,7 @@ public class BatchBenchmark {
             logR[k] = Math.log10(in.density[k]) - 3.0 * logT[k] + 18.0;
         }
         conv = new ConvectionColumns(zones);
+        block = new double[zones * ZoneMajorJacobian.PER_ZONE];
         stab = new StabilityColumns(zones);
         opac = new OpacityColumns(zones);
         blended = new TabulatedOpacity(DemoTable.set(), OutOfRangePolicy.CLAMP);
@@ -177,6 +180,18 @@ public class BatchBenchmark {
         for (int rep = 0; rep < reps; rep++) {
             convection.solveColumns(in, 0, zones, conv, true);
             sink += conv.nabla[zones / 2] + conv.dNabla[0][zones / 2];
+        }
+        return sink;
+    }
+
+    /** Convection, batch call with the full Jacobian in the zone-major layout (one block per zone). */
+    @Benchmark
+    @OperationsPerInvocation(2000)
+    public double oursConvectionBatchZoneMajor() {
+        double sink = 0;
+        for (int rep = 0; rep < reps; rep++) {
+            convection.solveZoneMajor(in, 0, zones, conv, block);
+            sink += conv.nabla[zones / 2] + block[zones / 2];
         }
         return sink;
     }

@@ -1,10 +1,13 @@
 package io.github.startransport.bench;
 
 import io.github.startransport.core.constants.Codata2018;
+import io.github.startransport.core.convection.EddySpectrumConvection;
+import io.github.startransport.core.convection.LengthScale;
 import io.github.startransport.core.convection.LocalMixingLength;
 import io.github.startransport.core.convection.MixingLengthCubic;
 import io.github.startransport.core.gradient.GasRadiation;
 import io.github.startransport.spi.ConvectionResult;
+import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.ZoneState;
 import org.apache.commons.math3.analysis.polynomials.PolynomialFunction;
 import org.apache.commons.math3.analysis.solvers.LaguerreSolver;
@@ -23,9 +26,11 @@ import java.util.SplittableRandom;
 import java.util.concurrent.TimeUnit;
 
 /**
- * One convective zone: our mixing-length solve with the full Jacobian (13 inputs, four outputs)
- * against the same textbook cubic x^3 + (8U/9) x^2 + (16U^2/9) x - (8U/9) W = 0 solved, value only,
- * by Commons Math's LaguerreSolver on the bracket [0, sqrt(W)].
+ * One convective zone: our mixing-length solve with the full Jacobian (13 inputs, four outputs), the
+ * full-spectrum model's (Canuto &amp; Mazzitelli 1991) on the same zones with the same length (alpha H_P,
+ * alpha = 1.8), and the mixing-length cubic against the same textbook cubic
+ * x^3 + (8U/9) x^2 + (16U^2/9) x - (8U/9) W = 0 solved, value only, by Commons Math's LaguerreSolver on
+ * the bracket [0, sqrt(W)].
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.AverageTime)
@@ -42,6 +47,8 @@ public class ConvectionBenchmark {
     private final double[] nablaAd = new double[ZONES];
     private final ConvectionResult result = new ConvectionResult();
     private final LocalMixingLength model = new LocalMixingLength();
+    private final EddySpectrumConvection spectrum = new EddySpectrumConvection(1.8, Criterion.SCHWARZSCHILD,
+            LengthScale.SCALE_HEIGHT);
     private final LaguerreSolver laguerre = new LaguerreSolver(1e-15, 1e-300, 1e-300);
     private int next;
 
@@ -81,6 +88,22 @@ public class ConvectionBenchmark {
         int i = next++ & (ZONES - 1);
         model.solve(zones[i], result);
         return result.nabla + result.dNabla[0] + result.dVelocity[5];
+    }
+
+    /** The full-spectrum model on the same zones: validation, nabla_rad, the flux equation's root, 52 partials. */
+    @Benchmark
+    public double oursEddySpectrumZoneWithJacobian() {
+        int i = next++ & (ZONES - 1);
+        spectrum.solve(zones[i], result);
+        return result.nabla + result.dNabla[0] + result.dVelocity[5];
+    }
+
+    /** The full-spectrum model, values only. */
+    @Benchmark
+    public double oursEddySpectrumZoneValues() {
+        int i = next++ & (ZONES - 1);
+        spectrum.solveValues(zones[i], result);
+        return result.nabla + result.velocity;
     }
 
     /** Our cubic alone, value only: the like-for-like counterpart of the peer below. */

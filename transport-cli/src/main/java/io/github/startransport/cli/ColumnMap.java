@@ -16,8 +16,12 @@ import java.util.StringJoiner;
  * <p>THEIRS is the other file's header name, matched exactly (after trimming). OURS is one of our
  * header names ({@link ProfileColumn#header()}, e.g. {@code T_K}) or a readable alias
  * ({@code temperature}); both are matched without regard to case. Example:
- * {@code --columns temperature=T_K,density=rho_g_cm3} reads our T_K from the file's column
- * {@code temperature} and our rho_g_cm3 from its column {@code density}.
+ * {@code --columns Temp=T_K,Dens=rho_g_cm3} reads our T_K from the file's column
+ * {@code Temp} and our rho_g_cm3 from its column {@code Dens}.
+ *
+ * <p>A file's header that already uses our names in another case or our aliases
+ * ({@code radius,mass,temperature,...}) needs no map: the reader recognises them by
+ * {@link #ourColumn(String)}.
  */
 final class ColumnMap {
     /** Alias (lower case) to column; our header names are added in lower case too. */
@@ -84,8 +88,8 @@ final class ColumnMap {
     /**
      * @param text {@code THEIRS=OURS[,THEIRS=OURS...]}; {@code null} or blank gives {@link #none()}
      * @return the map
-     * @throws BadInputException when an item is malformed, names none of our columns, or maps a
-     *                           column twice
+     * @throws UsageException when an item is malformed, names none of our columns, or maps a
+     *                        column twice
      */
     static ColumnMap parse(String text) {
         if (text == null || text.isBlank()) {
@@ -97,25 +101,51 @@ final class ColumnMap {
             String their = eq < 0 ? "" : item.substring(0, eq).trim();
             String ours = eq < 0 ? "" : item.substring(eq + 1).trim();
             if (ours.isEmpty() || their.isEmpty()) {
-                throw new BadInputException("--columns: '" + item.trim() + "' is not of the form THEIRS=OURS"
-                        + " (for example Temp=T_K)");
+                throw new UsageException("--columns: '" + Text.shorten(item.trim()) + "' is not of the form"
+                        + " THEIRS=OURS: the file's header name, '=', then our column name");
             }
             ProfileColumn c = ourColumn(ours);
             if (c == null) {
-                throw new BadInputException("--columns: '" + ours + "' (right of '=') is not one of our profile"
-                        + " columns; the left side names the file's header, the right side ours. Our columns: "
-                        + acceptedNames());
+                ProfileColumn reversed = ourColumn(their);
+                throw new UsageException("--columns: '" + Text.shorten(ours) + "' (right of '=') is not one of our"
+                        + " profile columns; the left side names the file's header, the right side ours"
+                        + (reversed != null ? " (write " + Text.shorten(ours) + "=" + their + ", not " + their + "="
+                        + Text.shorten(ours) + ")" : "") + ". Our columns: " + acceptedNames());
             }
             if (theirs.containsKey(c)) {
-                throw new BadInputException("--columns: " + c.header() + " is mapped twice ('"
-                        + theirs.get(c) + "' and '" + their + "')");
+                throw new UsageException("--columns: " + c.header() + " is mapped twice ('"
+                        + Text.shorten(theirs.get(c)) + "' and '" + Text.shorten(their) + "')");
             }
             if (theirs.containsValue(their)) {
-                throw new BadInputException("--columns: the file column '" + their + "' is mapped onto two of ours");
+                throw new UsageException("--columns: the file column '" + Text.shorten(their)
+                        + "' is mapped onto two of ours");
             }
             theirs.put(c, their);
         }
         return new ColumnMap(theirs);
+    }
+
+    /**
+     * @return the map as it is written on the command line, with our header names on the right, in
+     *         our column order; empty for {@link #none()}
+     */
+    String text() {
+        StringJoiner j = new StringJoiner(",");
+        theirs.forEach((c, their) -> j.add(their + "=" + c.header()));
+        return j.toString();
+    }
+
+    /**
+     * @param extra more items, file header name to our column
+     * @return this map's {@link #text()} with the extra items added (a value for {@code --columns})
+     */
+    String textWith(Map<String, ProfileColumn> extra) {
+        StringJoiner j = new StringJoiner(",");
+        if (!theirs.isEmpty()) {
+            j.add(text());
+        }
+        extra.forEach((their, c) -> j.add(their + "=" + c.header()));
+        return j.toString();
     }
 
     /**

@@ -1,26 +1,20 @@
 package io.github.startransport.cli;
 
-import io.github.startransport.spi.ConvectionModel;
-import io.github.startransport.spi.Criterion;
-import io.github.startransport.spi.DiagnosisSetup;
 import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
-import io.github.startransport.spi.OpacityModel;
 import io.github.startransport.spi.Profile;
-import io.github.startransport.spi.ProfileDiagnoser;
+import io.github.startransport.spi.ProfileColumn;
 import io.github.startransport.spi.ProfileDiagnosis;
-import io.github.startransport.spi.ThermodynamicsModel;
 import io.github.startransport.spi.Transport;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.ITypeConverter;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import picocli.CommandLine.TypeConversionException;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
@@ -31,10 +25,6 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
 
 /** {@code diagnose}: profile files (or the built-in demo star) in, zone table, summary and plots out. */
 @Command(name = "diagnose", sortOptions = false, mixinStandardHelpOptions = true,
@@ -44,20 +34,26 @@ import java.util.concurrent.Future;
                 + " thermal and Kelvin-Helmholtz timescales.",
             "",
             "Writes into DIR: zones.csv (one row per zone), summary.json, gradients.png, velocity-mixing.png,"
-                + " opacity.png, propagation.png, and prints a short summary. With several profiles each goes to DIR/<file name"
-                + " without extension>/, and they are diagnosed in parallel. Nothing is left half-written: the"
-                + " files appear in DIR only when everything succeeded.",
+                + " opacity.png, propagation.png, and prints a short summary. With several profiles each goes to"
+                + " DIR/<file name without extension>/, and they are diagnosed in parallel: every file is attempted, each refused"
+                + " one is reported with its line and column, a closing line counts them, and the exit code is 1"
+                + " if any was refused. Nothing is left half-written: the files appear in DIR only when they are"
+                + " complete, and DIR is left as it was when every profile was refused.",
             ""},
         footer = {
             "",
             "Profile files: CSV, one header row of column names, then one zone per row (centre to surface or"
                 + " surface to centre), cgs units. Lines starting with # and blank lines are skipped.",
-            "  required: r_cm, m_g, T_K, rho_g_cm3, P_dyn_cm2, L_erg_s, X, Z",
+            "  required: r_cm, m_g, T_K, rho_g_cm3, P_dyn_cm2, L_erg_s, X, Z (at least 3 zones)",
             "  optional: kappa_cm2_g, cp_erg_g_K, delta, nabla_ad, nabla_mu, phi, Gamma1 (computed when absent)",
-            "  other columns are ignored (with a note on standard error).",
+            "  our names in any case and the aliases radius, mass, temperature, density, pressure, luminosity,"
+                + " hydrogen, metals, kappa, cp, ... are read as ours; other columns are ignored (with a note on"
+                + " standard error). Numbers: 1.5e7, 1.5E+07 or Fortran's 1.5D+07.",
             "",
-            "Exit codes: 0 success; 1 bad input (the message names file, line, column and what is wrong);"
-                + " 2 usage error; 3 out of memory (the message says which -Xmx to try)."})
+            "Exit codes: 0 success; 1 bad input: a file that cannot be read or holds bad data (the message names"
+                + " file, line, column and what is wrong), or, with several profiles, any of them refused;"
+                + " 2 usage error (unknown option or model name, malformed --columns, a bad option value);"
+                + " 3 out of memory (the message says which -Xmx to try)."})
 final class DiagnoseCommand implements Callable<Integer> {
     private final Cli cli;
 
@@ -78,54 +74,19 @@ final class DiagnoseCommand implements Callable<Integer> {
                     + " it holds nothing else; a link someone else made is followed.")
     private Path out;
 
-    @Option(names = "--alpha", paramLabel = "A",
-            description = "Mixing-length parameter alpha = l / H_P (> 0). Default: the convection model's own"
-                    + " default (${DEFAULT-VALUE} for the default model).")
-    private Double alpha;
+    @Mixin
+    private DiagnosisOptions options;
 
-    @Option(names = "--criterion", paramLabel = "schwarzschild|ledoux", defaultValue = "schwarzschild",
-            converter = CriterionConverter.class,
-            description = "Convective stability criterion. Default: ${DEFAULT-VALUE}.")
-    private Criterion criterion;
-
-    @Option(names = "--convection", paramLabel = "NAME",
-            description = "Convection model, by name (see the models command). Default: ${DEFAULT-VALUE}"
-                    + " (the provider's recommended model).")
-    private String convection;
-
-    @Option(names = "--opacity", paramLabel = "NAME",
-            description = "Opacity model for profiles without a kappa_cm2_g column. Default: ${DEFAULT-VALUE}"
-                    + " (the provider's recommended model).")
-    private String opacity;
-
-    @Option(names = "--opacity-table", paramLabel = "FILE",
-            description = "Use an opacity table file (the library's X,Z,log_T,log_R,log_kappa CSV format) instead of"
-                    + " --opacity.")
-    private Path opacityTable;
-
-    @Option(names = "--columns", paramLabel = "MAP",
-            description = "Read a profile written by another program: THEIRS=OURS[,THEIRS=OURS...] maps the file's"
-                    + " header names onto our columns, e.g. --columns temperature=T_K,density=rho_g_cm3."
-                    + " THEIRS is matched exactly; OURS is our header name or an alias (radius, mass, temperature,"
-                    + " density, pressure, luminosity, hydrogen, metals, kappa, cp, ...), any case.")
-    private String columns;
+    @Option(names = "--x-axis", paramLabel = "mass|radius|depth|pressure", defaultValue = "mass",
+            converter = PlotAxis.Converter.class,
+            description = "What the plots put along the star: mass (m/M on a scale stretched at both ends,"
+                    + " log10(m / (M - m)), so that a core and a thin surface zone both read clearly), radius (r/R),"
+                    + " depth (log10(1 - m/M), for envelopes) or pressure (log10 P). Default: ${DEFAULT-VALUE}.")
+    private PlotAxis xAxis;
 
     /** @param cli where to print and how to find the physics */
     DiagnoseCommand(Cli cli) {
         this.cli = cli;
-    }
-
-    /** Converts {@code schwarzschild} / {@code ledoux}, any case. */
-    static final class CriterionConverter implements ITypeConverter<Criterion> {
-        @Override
-        public Criterion convert(String value) {
-            try {
-                return Criterion.fromLabel(value);
-            } catch (IllegalArgumentException e) {
-                throw new TypeConversionException("'" + value + "' is not a criterion; expected schwarzschild or"
-                        + " ledoux");
-            }
-        }
     }
 
     /** One profile to diagnose: a file (then {@code file} is set) or the built-in star. */
@@ -135,30 +96,54 @@ final class DiagnoseCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         checkUsage();
-        ColumnMap map = ColumnMap.parse(columns);
+        ColumnMap map = options.columnMap();
         Map<String, Path> stems = stems();
-        if (opacityTable != null && !Files.isReadable(opacityTable)) {
-            throw new BadInputException("--opacity-table " + opacityTable + ": cannot be read"
-                    + (Files.exists(opacityTable) ? " (permission denied)" : " (no such file)"));
-        }
+        options.checkFiles();
         List<Job> jobs = new ArrayList<>();
         stems.forEach((stem, file) -> jobs.add(new Job(stem, file)));
         if (demo) {
             jobs.add(new Job(null, null));
         }
-        List<String> summaries;
+        List<ProfileJobs.Outcome<Job, String>> outcomes;
         List<String> notes = new ArrayList<>();
-        List<String> warnings;
+        List<String> warnings = List.of();
         try (OutputFolder folder = OutputFolder.open(out, cli.args(), notes)) {
             notes.forEach(n -> cli.err().println("note: " + n));
             Transport transport = cli.transport();
-            Setup setup = setup(transport);
-            summaries = diagnoseAndWrite(jobs, map, setup, folder.staging());
-            warnings = folder.commit();
+            DiagnosisOptions.Setup setup = options.setup(transport, spec);
+            Path staging = folder.staging();
+            ProgressBar bar = new ProgressBar(cli.err(), jobs.size(), cli.console() && jobs.size() > 1);
+            outcomes = ProfileJobs.run(jobs, j -> j.file() == null ? "demo star" : j.file().toString(),
+                    (job, jobNotes) -> diagnoseAndWrite(job, map, setup,
+                            job.stem() == null || !multiple() ? staging : staging.resolve(job.stem()), jobNotes),
+                    bar);
+            if (!multiple() && !outcomes.get(0).ok()) {
+                outcomes.get(0).notes().forEach(n -> cli.err().println("note: " + n));
+                throw outcomes.get(0).failure();
+            }
+            if (outcomes.stream().anyMatch(ProfileJobs.Outcome::ok)) {
+                warnings = folder.commit();
+            }
         }
-        summaries.forEach(cli.out()::print);
+        int failed = 0;
+        for (ProfileJobs.Outcome<Job, String> o : outcomes) {
+            o.notes().forEach(n -> cli.err().println(n.startsWith("warning: ") ? n : "note: " + n));
+            if (o.ok()) {
+                cli.out().print(o.result());
+            } else {
+                failed++;
+                cli.err().println("startransport: " + Main.describe(o.failure()));
+            }
+        }
+        cli.out().flush();
+        if (multiple()) {
+            String closing = outcomes.size() + " profiles: " + (outcomes.size() - failed) + " diagnosed"
+                    + (outcomes.size() - failed > 0 ? " into " + out + "/<file name>/" : "") + ", " + failed
+                    + " refused" + (failed == outcomes.size() ? "; " + out + " is left as it was" : "");
+            (failed > 0 ? cli.err() : cli.out()).println(closing);
+        }
         warnings.forEach(w -> cli.err().println("warning: " + w));
-        return 0;
+        return failed > 0 ? Main.BAD_INPUT : Main.OK;
     }
 
     private boolean multiple() {
@@ -171,19 +156,10 @@ final class DiagnoseCommand implements Callable<Integer> {
                     ? "give either profile files or --demo, not both"
                     : "nothing to diagnose: give one or more profile files, or --demo");
         }
-        if (demo && columns != null) {
+        if (demo && options.columns != null) {
             throw new ParameterException(spec.commandLine(), "--columns applies to profile files, not to --demo");
         }
-        if (matched("--alpha") && !(alpha > 0 && Double.isFinite(alpha))) {
-            throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not " + alpha);
-        }
-        if (opacityTable != null && matched("--opacity")) {
-            throw new ParameterException(spec.commandLine(), "give either --opacity or --opacity-table, not both");
-        }
-    }
-
-    private boolean matched(String option) {
-        return spec.commandLine().getParseResult().hasMatchedOption(option);
+        options.checkUsage(spec);
     }
 
     /** File stem of each profile, in the order given. */
@@ -191,9 +167,7 @@ final class DiagnoseCommand implements Callable<Integer> {
         Map<String, Path> stems = new java.util.LinkedHashMap<>();
         Map<String, Path> seen = new HashMap<>();
         for (Path p : profiles) {
-            String name = p.getFileName() == null ? p.toString() : p.getFileName().toString();
-            int dot = name.lastIndexOf('.');
-            String stem = dot > 0 ? name.substring(0, dot) : name;
+            String stem = stem(p);
             Path earlier = seen.putIfAbsent(stem, p);
             if (earlier != null) {
                 throw new BadInputException("the profiles " + earlier + " and " + p + " would both be written to "
@@ -204,109 +178,27 @@ final class DiagnoseCommand implements Callable<Integer> {
         return stems;
     }
 
-    private record Setup(DiagnosisSetup models, ProfileDiagnoser diagnoser, ModelsUsed used) {
-    }
-
-    private Setup setup(Transport transport) {
-        String convectionName = convection != null ? convection : Catalog.defaultModel(transport,
-                ModelFamily.CONVECTION);
-        ModelOptions convectionOptions = ModelOptions.defaults()
-                .with(ModelNames.CONVECTION_CRITERION, criterion.label());
-        String alphaText = matched("--alpha") ? Double.toString(alpha)
-                : Catalog.optionDefault(Catalog.info(transport, ModelFamily.CONVECTION, convectionName),
-                ModelNames.CONVECTION_ALPHA);
-        if (alphaText != null) {
-            convectionOptions = convectionOptions.with(ModelNames.CONVECTION_ALPHA, alphaText);
-        }
-        ConvectionModel convectionModel = transport.convection(convectionName, convectionOptions);
-
-        OpacityModel opacityModel;
-        String opacityName;
-        if (opacityTable != null) {
-            opacityName = ModelNames.OPACITY_TABLE_MODEL;
-            opacityModel = transport.opacity(opacityName, ModelOptions.defaults()
-                    .with(ModelNames.OPACITY_TABLE_FILE, opacityTable.toAbsolutePath().toString()));
-        } else {
-            opacityName = opacity != null ? opacity : Catalog.defaultModel(transport, ModelFamily.OPACITY);
-            opacityModel = transport.opacity(opacityName, ModelOptions.defaults());
-        }
-        ThermodynamicsModel thermo = transport.thermodynamics(null, ModelOptions.defaults());
-        ProfileDiagnoser diagnoser = transport.diagnoser(null, ModelOptions.defaults());
-        ModelsUsed used = new ModelsUsed(convectionName == null ? "(default)" : Catalog.bare(convectionName),
-                opacityName == null ? "(default)" : Catalog.bare(opacityName),
-                opacityTable == null ? null : opacityTable.toString());
-        return new Setup(new DiagnosisSetup(convectionModel, opacityModel, thermo), diagnoser, used);
+    /** @return the file name without its extension */
+    static String stem(Path p) {
+        String name = p.getFileName() == null ? p.toString() : p.getFileName().toString();
+        int dot = name.lastIndexOf('.');
+        return dot > 0 ? name.substring(0, dot) : name;
     }
 
     /**
-     * Reads, diagnoses and writes each job, several at once when there are several; each job
-     * keeps its profile and diagnosis only while it runs.
+     * Reads, diagnoses and writes one job; the job keeps its profile and diagnosis only while it
+     * runs, so several profiles never sit in memory at once.
      *
-     * @return the printed summary of each job, in order
+     * @return the printed summary of the job
      */
-    private List<String> diagnoseAndWrite(List<Job> jobs, ColumnMap map, Setup setup, Path staging)
-            throws IOException {
-        ProgressBar bar = new ProgressBar(cli.err(), jobs.size(), cli.console() && jobs.size() > 1);
-        bar.start();
-        List<String> results = new ArrayList<>();
-        if (jobs.size() == 1) {
-            results.add(diagnoseAndWrite(jobs.get(0), map, setup, staging, bar));
-            return results;
-        }
-        int threads = Math.min(jobs.size(), Runtime.getRuntime().availableProcessors());
-        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
-            Thread t = new Thread(r, "startransport-diagnose");
-            t.setDaemon(true);
-            return t;
-        });
-        try {
-            List<Future<String>> futures = new ArrayList<>();
-            for (Job job : jobs) {
-                Path dir = job.stem() == null ? staging : staging.resolve(job.stem());
-                futures.add(pool.submit(() -> diagnoseAndWrite(job, map, setup, dir, bar)));
-            }
-            for (Future<String> f : futures) {
-                results.add(f.get());
-            }
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException re) {
-                throw re;
-            }
-            if (cause instanceof IOException io) {
-                throw io;
-            }
-            if (cause instanceof Error error) {
-                throw error;
-            }
-            throw new IllegalStateException(cause);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted", e);
-        } finally {
-            pool.shutdownNow();
-            awaitQuietly(pool);
-            bar.finish();
-        }
-        return results;
-    }
-
-    /** Waits for cancelled tasks to stop writing, so the staging folder can be deleted whole. */
-    private static void awaitQuietly(ExecutorService pool) {
-        try {
-            pool.awaitTermination(2, java.util.concurrent.TimeUnit.MINUTES);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-        }
-    }
-
-    private String diagnoseAndWrite(Job job, ColumnMap map, Setup setup, Path dir, ProgressBar bar)
-            throws IOException {
+    private String diagnoseAndWrite(Job job, ColumnMap map, DiagnosisOptions.Setup setup, Path dir,
+                                    List<String> notes) throws IOException {
         ProfileCsvReader.Read read = null;
         Profile profile;
         if (job.file() != null) {
-            read = ProfileCsvReader.read(job.file(), map);
-            read.notes().forEach(n -> cli.err().println("note: " + n));
+            read = ProfileCsvReader.read(job.file(), map, options.delimiter);
+            notes.addAll(read.notes());
+            read.warnings().forEach(w -> notes.add("warning: " + w));
             profile = read.profile();
         } else {
             profile = cli.transport().star(null, ModelOptions.defaults()).profile();
@@ -324,14 +216,24 @@ final class DiagnoseCommand implements Callable<Integer> {
             Files.createDirectories(dir);
             ZoneTable.write(d, dir.resolve("zones.csv"));
             SummaryJson.write(d, setup.used(), dir.resolve("summary.json"));
-            DiagnosisCharts.writeAll(d, dir);
+            DiagnosisCharts.writeAll(d, new DiagnosisCharts.Style(xAxis, opacitySource(profile, setup.used())), dir);
         } catch (IOException | UncheckedIOException e) {
             throw new BadInputException("cannot write the output for " + profile.source() + " into " + out
                     + ": " + e.getMessage(), e);
         }
-        bar.step(profile.source());
         Path where = job.stem() == null || !multiple() ? out : out.resolve(job.stem());
         return HumanSummary.text(d, setup.used(), where.toString());
+    }
+
+    /** @return where the diagnosis's kappa came from, in words, for the opacity plot */
+    static String opacitySource(Profile profile, ModelsUsed used) {
+        if (profile.has(ProfileColumn.OPACITY)) {
+            return "the profile's own " + ProfileColumn.OPACITY.header() + " column";
+        }
+        if (used.opacityTable() != null) {
+            return "interpolated in the table " + Path.of(used.opacityTable()).getFileName();
+        }
+        return "the opacity model " + used.opacity();
     }
 
     /** @return the model this command uses when no name is given, or {@code null} */

@@ -39,7 +39,9 @@ import java.util.Set;
  * The four plots of a diagnosis, drawn with JFreeChart and written as PNG at 1200 x 800.
  *
  * <p>On logarithmic axes a value that is zero or negative cannot be drawn; it leaves a gap in
- * its line, and the plot's subtitle says so.
+ * its line, and the plot's subtitle says so. Along the star the plots use the {@link PlotAxis}
+ * of their {@link Style} (by default the stretched mass scale). Each curve is drawn as one path,
+ * so that a dashed line keeps one dash pattern however its points are spaced.
  */
 final class DiagnosisCharts {
     /** Width of every PNG (pixels). */
@@ -62,23 +64,53 @@ final class DiagnosisCharts {
             Regime.THERMOHALINE, new Color(90, 140, 230, 70),
             Regime.RADIATIVE, new Color(0, 0, 0, 0)));
 
-    private static final String R_OVER_R = "r / R";
+    /** Shade of the layers that overshoot mixes beyond the edges of convective regions. */
+    private static final Color OVERSHOOT_SHADE = new Color(200, 60, 200, 60);
+
+    /**
+     * nabla_L is drawn only where it differs from nabla_ad by more than this fraction of nabla_ad
+     * (elsewhere the two lines coincide, and nabla_L would hide under nabla_ad).
+     */
+    static final double LEDOUX_DIFFERS = 1e-3;
+
+    /**
+     * How the plots are drawn.
+     *
+     * @param axis          what is put along the star
+     * @param opacitySource where kappa came from, in words ("the opacity model analytic-composite", ...)
+     */
+    record Style(PlotAxis axis, String opacitySource) {
+        /** The default: the stretched mass axis, kappa from an unnamed opacity model. */
+        static final Style DEFAULT = new Style(PlotAxis.MASS, "the opacity model");
+    }
 
     private DiagnosisCharts() {
     }
 
     /**
-     * Writes all four plots into a folder.
+     * Writes all four plots into a folder, in the {@link Style#DEFAULT} style.
      *
      * @param diagnosis the diagnosis
      * @param dir       an existing folder
      * @throws IOException when a file cannot be written
      */
     static void writeAll(ProfileDiagnosis diagnosis, Path dir) throws IOException {
-        write(gradients(diagnosis), dir.resolve(GRADIENTS_PNG));
-        write(velocityAndMixing(diagnosis), dir.resolve(MIXING_PNG));
-        write(opacity(diagnosis), dir.resolve(OPACITY_PNG));
-        write(propagation(diagnosis), dir.resolve(PROPAGATION_PNG));
+        writeAll(diagnosis, Style.DEFAULT, dir);
+    }
+
+    /**
+     * Writes all four plots into a folder.
+     *
+     * @param diagnosis the diagnosis
+     * @param style     how to draw them
+     * @param dir       an existing folder
+     * @throws IOException when a file cannot be written
+     */
+    static void writeAll(ProfileDiagnosis diagnosis, Style style, Path dir) throws IOException {
+        write(gradients(diagnosis, style), dir.resolve(GRADIENTS_PNG));
+        write(velocityAndMixing(diagnosis, style), dir.resolve(MIXING_PNG));
+        write(opacity(diagnosis, style), dir.resolve(OPACITY_PNG));
+        write(propagation(diagnosis, style), dir.resolve(PROPAGATION_PNG));
     }
 
     /**
@@ -92,46 +124,81 @@ final class DiagnosisCharts {
 
     /**
      * @param d a diagnosis
-     * @return nabla_rad, nabla_ad, nabla_L, the actual nabla and the profile's own d ln T / d ln P against r/R,
-     *         regions shaded
+     * @return the gradient plot in the default style
      */
     static JFreeChart gradients(ProfileDiagnosis d) {
-        Values x = radiusFraction(d);
+        return gradients(d, Style.DEFAULT);
+    }
+
+    /**
+     * @param d     a diagnosis
+     * @param style how to draw it
+     * @return nabla_rad, nabla_ad, nabla_L (where it differs from nabla_ad), the actual nabla and the profile's
+     *         own d ln T / d ln P along the star, regions shaded
+     */
+    static JFreeChart gradients(ProfileDiagnosis d, Style style) {
+        double[] xs = style.axis().of(d);
+        Values x = k -> xs[k];
         XYSeriesCollection data = new XYSeriesCollection();
         int hidden = 0;
-        hidden += add(data, "\u2207_rad (radiative)", d.size(), x, column(d, DiagnosisColumn.NABLA_RAD), true);
-        hidden += add(data, "\u2207_ad (adiabatic)", d.size(), x, column(d, DiagnosisColumn.NABLA_AD), true);
-        hidden += add(data, "\u2207_L (Ledoux)", d.size(), x, column(d, DiagnosisColumn.NABLA_LEDOUX), true);
-        hidden += add(data, "\u2207 (actual)", d.size(), x, column(d, DiagnosisColumn.NABLA), true);
-        double[] model = d.column(DiagnosisColumn.NABLA_MODEL);
-        int undefined = 0; // where the pressure does not fall outwards; the diagnosis warns about those zones
-        for (double v : model) {
-            undefined += Double.isNaN(v) ? 1 : 0;
+        double[] nablaAd = d.column(DiagnosisColumn.NABLA_AD);
+        double[] nablaL = d.column(DiagnosisColumn.NABLA_LEDOUX);
+        int differs = 0;
+        for (int k = 0; k < nablaL.length; k++) {
+            if (Math.abs(nablaL[k] - nablaAd[k]) > LEDOUX_DIFFERS * nablaAd[k]) {
+                differs++;
+            } else {
+                nablaL[k] = Double.NaN; // not drawn: it lies on nabla_ad
+            }
         }
-        hidden += add(data, "\u2207_model (the profile's own d ln T / d ln P)", d.size(), x, k -> model[k], true)
-                - undefined;
+        hidden += add(data, "\u2207_rad (radiative)", d.size(), x, column(d, DiagnosisColumn.NABLA_RAD), true);
+        hidden += add(data, "\u2207_ad (adiabatic)", d.size(), x, k -> nablaAd[k], true);
+        if (differs > 0) {
+            hidden += add(data, "\u2207_L (Ledoux; drawn where it differs from \u2207_ad)", d.size(), x,
+                    k -> nablaL[k], true);
+        }
+        hidden += add(data, "\u2207 (actual)", d.size(), x, column(d, DiagnosisColumn.NABLA), true);
+        // NaN where the pressure does not fall outwards; the diagnosis warns about those zones
+        hidden += add(data, "\u2207_model (the profile's own d ln T / d ln P)", d.size(), x,
+                column(d, DiagnosisColumn.NABLA_MODEL), true);
         ValueAxis y = logAxis("temperature gradient \u2207 = d ln T / d ln P (dimensionless)", data);
-        XYPlot plot = new XYPlot(data, fractionAxis(), y, new XYLineAndShapeRenderer(true, false));
+        XYPlot plot = new XYPlot(data, style.axis().axis(xs), y, new XYLineAndShapeRenderer(true, false));
         JFreeChart chart = chart("Temperature gradients of " + d.source() + " (" + d.criterion().label()
                 + " criterion, \u03b1 = " + d.alpha() + ")", plot);
-        style(plot, 0, 5);
-        shadeRegions(d, plot);
+        if (differs > 0) {
+            style(plot, 0, 5);
+        } else {
+            styleSkipping(plot, 2);
+            chart.addSubtitle(subtitle("\u2207_L (Ledoux) equals \u2207_ad in every zone (no composition gradient)"
+                    + " and is not drawn"));
+        }
+        shadeRegions(d, plot, style.axis(), xs);
         note(chart, hidden, "gradient values \u2264 0");
         return chart;
     }
 
     /**
      * @param d a diagnosis
-     * @return v_conv (left axis) and D_mix (right axis) against r/R, regions shaded
+     * @return the velocity and mixing plot in the default style
      */
     static JFreeChart velocityAndMixing(ProfileDiagnosis d) {
-        Values x = radiusFraction(d);
+        return velocityAndMixing(d, Style.DEFAULT);
+    }
+
+    /**
+     * @param d     a diagnosis
+     * @param style how to draw it
+     * @return v_conv (left axis) and D_mix (right axis) along the star, regions shaded
+     */
+    static JFreeChart velocityAndMixing(ProfileDiagnosis d, Style style) {
+        double[] xs = style.axis().of(d);
+        Values x = k -> xs[k];
         XYSeriesCollection velocity = new XYSeriesCollection();
         XYSeriesCollection mixing = new XYSeriesCollection();
         int hidden = add(velocity, "v_conv (left axis)", d.size(), x, column(d, DiagnosisColumn.VELOCITY), true);
         int hiddenMixing = add(mixing, "D_mix (right axis)", d.size(), x, column(d, DiagnosisColumn.DIFFUSION),
                 true);
-        XYPlot plot = new XYPlot(velocity, fractionAxis(),
+        XYPlot plot = new XYPlot(velocity, style.axis().axis(xs),
                 logAxis("convective velocity v_conv (cm s\u207b\u00b9)", velocity),
                 new XYLineAndShapeRenderer(true, false));
         plot.setRangeAxis(1, logAxis("mixing diffusion coefficient D_mix (cm\u00b2 s\u207b\u00b9)", mixing));
@@ -142,7 +209,7 @@ final class DiagnosisCharts {
         JFreeChart chart = chart("Convective velocity and mixing in " + d.source(), plot);
         style(plot, 0, 1);
         style(plot, 1, 1);
-        shadeRegions(d, plot);
+        shadeRegions(d, plot, style.axis(), xs);
         if (hidden == d.size() && hiddenMixing == d.size()) {
             chart.addSubtitle(subtitle("no zone has v_conv > 0 or D_mix > 0: nothing to draw"));
         } else {
@@ -153,22 +220,32 @@ final class DiagnosisCharts {
 
     /**
      * @param d a diagnosis
-     * @return kappa against log10 T
+     * @return the opacity plot in the default style
      */
     static JFreeChart opacity(ProfileDiagnosis d) {
+        return opacity(d, Style.DEFAULT);
+    }
+
+    /**
+     * @param d     a diagnosis
+     * @param style how to draw it (names where kappa came from)
+     * @return kappa against log10 T
+     */
+    static JFreeChart opacity(ProfileDiagnosis d, Style style) {
         double[] t = d.column(DiagnosisColumn.TEMPERATURE);
         for (int k = 0; k < t.length; k++) {
             t[k] = Math.log10(t[k]);
         }
         Values logT = k -> t[k];
         XYSeriesCollection data = new XYSeriesCollection();
-        int hidden = add(data, "\u03ba (Rosseland mean, as used)", d.size(), logT, column(d, DiagnosisColumn.OPACITY),
-                false);
+        int hidden = add(data, "\u03ba from " + style.opacitySource(), d.size(), logT,
+                column(d, DiagnosisColumn.OPACITY), false);
         NumberAxis x = new NumberAxis("log\u2081\u2080 (T / K)");
         x.setAutoRangeIncludesZero(false);
         XYPlot plot = new XYPlot(data, x, logAxis("opacity \u03ba (cm\u00b2 g\u207b\u00b9)", data),
                 new XYLineAndShapeRenderer(true, false));
         JFreeChart chart = chart("Opacity against temperature in " + d.source(), plot);
+        chart.addSubtitle(subtitle("\u03ba from " + style.opacitySource()));
         style(plot, 0, 1);
         note(chart, hidden, "opacity values \u2264 0");
         return chart;
@@ -176,15 +253,25 @@ final class DiagnosisCharts {
 
     /**
      * The propagation diagram: the buoyancy frequency N and the l = 1 Lamb frequency S_1 as cyclic
-     * frequencies (N / 2 pi, S_1 / 2 pi, in microhertz) against r/R on a logarithmic axis, the large
+     * frequencies (N / 2 pi, S_1 / 2 pi, in microhertz) along the star on a logarithmic axis, the large
      * separation Delta nu marked, non-radiative regions shaded. Zones with N^2 &lt;= 0 (convectively
      * unstable) leave gaps in N.
      *
      * @param d a diagnosis
-     * @return the chart
+     * @return the chart in the default style
      */
     static JFreeChart propagation(ProfileDiagnosis d) {
-        Values x = radiusFraction(d);
+        return propagation(d, Style.DEFAULT);
+    }
+
+    /**
+     * @param d     a diagnosis
+     * @param style how to draw it
+     * @return the propagation diagram
+     */
+    static JFreeChart propagation(ProfileDiagnosis d, Style style) {
+        double[] xs = style.axis().of(d);
+        Values x = k -> xs[k];
         double[] n2 = d.column(DiagnosisColumn.BUOYANCY_SQUARED);
         double[] s1 = d.column(DiagnosisColumn.LAMB_L1);
         double[] n = new double[n2.length];
@@ -196,14 +283,15 @@ final class DiagnosisCharts {
         int hidden = add(data, "N / 2\u03c0 (buoyancy frequency)", d.size(), x, k -> n[k], true);
         add(data, "S\u2081 / 2\u03c0 (Lamb frequency, l = 1)", d.size(), x, k -> s1[k], true);
         ValueAxis y = logAxis("cyclic frequency (\u03bcHz)", data);
-        XYPlot plot = new XYPlot(data, fractionAxis(), y, new XYLineAndShapeRenderer(true, false));
+        XYPlot plot = new XYPlot(data, style.axis().axis(xs), y, new XYLineAndShapeRenderer(true, false));
         JFreeChart chart = chart("Propagation diagram of " + d.source(), plot);
         XYLineAndShapeRenderer lines = (XYLineAndShapeRenderer) plot.getRenderer();
         lines.setSeriesPaint(0, new Color(200, 30, 30));
         lines.setSeriesStroke(0, new BasicStroke(2.5f));
         lines.setSeriesPaint(1, new Color(30, 110, 200));
         lines.setSeriesStroke(1, new BasicStroke(2.5f));
-        shadeRegions(d, plot);
+        lines.setDrawSeriesLineAsPath(true);
+        shadeRegions(d, plot, style.axis(), xs);
         double deltaNu = d.seismic().map(sm -> sm.largeSeparation() * 1e6).orElse(Double.NaN);
         if (Double.isFinite(deltaNu) && deltaNu > 0) {
             org.jfree.chart.plot.ValueMarker marker = new org.jfree.chart.plot.ValueMarker(deltaNu);
@@ -252,15 +340,6 @@ final class DiagnosisCharts {
     private static Values column(ProfileDiagnosis d, DiagnosisColumn c) {
         double[] v = d.column(c);
         return k -> v[k];
-    }
-
-    private static Values radiusFraction(ProfileDiagnosis d) {
-        double[] r = d.column(DiagnosisColumn.RADIUS);
-        double big = d.radius();
-        for (int k = 0; k < r.length; k++) {
-            r[k] /= big;
-        }
-        return k -> r[k];
     }
 
     /** Up to this many zones a series draws every zone. */
@@ -329,15 +408,18 @@ final class DiagnosisCharts {
     }
 
     /**
-     * Adds a series, decimated ({@link #decimate}); values a log axis cannot show become gaps.
+     * Adds a series, decimated ({@link #decimate}); values a log axis cannot show become gaps, and so do
+     * NaN values (a quantity not defined there) and zones that lie at infinity on the x axis.
      *
-     * @return how many zones (of all, not only those drawn) cannot be shown
+     * @return how many zones (of all, not only those drawn) have a value the log axis cannot show: zero,
+     *         negative or infinite (NaN and zones off the x axis are not counted)
      */
     private static int add(XYSeriesCollection data, String name, int n, Values x, Values y, boolean sortByX) {
         XYSeries s = new XYSeries(name, sortByX, true);
         int hidden = 0;
         for (int k = 0; k < n; k++) {
-            if (!drawable(x.at(k), y.at(k))) {
+            double v = y.at(k);
+            if (Double.isFinite(x.at(k)) && !Double.isNaN(v) && !drawable(x.at(k), v)) {
                 hidden++;
             }
         }
@@ -352,12 +434,6 @@ final class DiagnosisCharts {
         }
         data.addSeries(s);
         return hidden;
-    }
-
-    private static NumberAxis fractionAxis() {
-        NumberAxis x = new NumberAxis("fractional radius " + R_OVER_R + " (dimensionless)");
-        x.setRange(0.0, 1.0);
-        return x;
     }
 
     /**
@@ -383,16 +459,76 @@ final class DiagnosisCharts {
             y.setExpTickLabelsFlag(hi > 1e4 || lo < 1e-3);
             return y;
         }
-        LogAxis y = new LogAxis(label);
+        LogAxis y = hi > 0 && Math.log10(hi / lo) <= 6 ? new OneThreeLogAxis(label) : new LogAxis(label);
         y.setBase(10);
         y.setSmallestValue(1e-300);
         y.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
         return y;
     }
 
-    /** Colours and line styles, set after the theme (which would otherwise replace them). */
+    /**
+     * A logarithmic axis for three to six decades, labelled at 1 and 3 times each power of ten, with
+     * unlabelled ticks between: every decade alone would give only three or four labels.
+     */
+    static final class OneThreeLogAxis extends LogAxis {
+        private static final long serialVersionUID = 1L;
+
+        OneThreeLogAxis(String label) {
+            super(label);
+        }
+
+        @Override
+        protected java.util.List<org.jfree.chart.axis.ValueTick> refreshTicksVertical(java.awt.Graphics2D g2,
+                java.awt.geom.Rectangle2D dataArea, RectangleEdge edge) {
+            java.util.List<org.jfree.chart.axis.ValueTick> ticks = new java.util.ArrayList<>();
+            double lo = getLowerBound();
+            double hi = getUpperBound();
+            org.jfree.chart.ui.TextAnchor anchor = edge == RectangleEdge.LEFT
+                    ? org.jfree.chart.ui.TextAnchor.CENTER_RIGHT : org.jfree.chart.ui.TextAnchor.CENTER_LEFT;
+            for (int e = (int) Math.floor(Math.log10(lo)); e <= (int) Math.ceil(Math.log10(hi)); e++) {
+                for (int m = 1; m <= 9; m++) {
+                    double v = m * Math.pow(10, e);
+                    if (v < lo || v > hi) {
+                        continue;
+                    }
+                    boolean labelled = m == 1 || m == 3;
+                    ticks.add(new org.jfree.chart.axis.LogTick(labelled ? org.jfree.chart.axis.TickType.MAJOR
+                            : org.jfree.chart.axis.TickType.MINOR, v, labelled ? label(m, e) : null, anchor));
+                }
+            }
+            return ticks;
+        }
+
+        /** {@code 10} with the exponent raised, after {@code m×} when m is not 1. */
+        private java.text.AttributedString label(int m, int e) {
+            String base = (m == 1 ? "" : m + "\u00d7") + "10";
+            String exponent = Integer.toString(e).replace('-', '\u2212');
+            java.text.AttributedString s = new java.text.AttributedString(base + exponent);
+            s.addAttributes(getTickLabelFont().getAttributes(), 0, base.length() + exponent.length());
+            s.addAttribute(java.awt.font.TextAttribute.SUPERSCRIPT, java.awt.font.TextAttribute.SUPERSCRIPT_SUPER,
+                    base.length(), base.length() + exponent.length());
+            return s;
+        }
+    }
+
+    /** The gradient plot's styles without the one at {@code skip}: that series is absent. */
+    private static void styleSkipping(XYPlot plot, int skip) {
+        style(plot, 0, 5);
+        XYLineAndShapeRenderer r = (XYLineAndShapeRenderer) plot.getRenderer(0);
+        for (int s = skip; s < 4; s++) {
+            r.setSeriesPaint(s, r.getSeriesPaint(s + 1));
+            r.setSeriesStroke(s, r.getSeriesStroke(s + 1));
+        }
+    }
+
+    /**
+     * Colours and line styles, set after the theme (which would otherwise replace them). Each series is
+     * drawn as one path: drawn segment by segment, a dash pattern starts again at every zone and a
+     * dashed curve looks solid where zones are close.
+     */
     private static void style(XYPlot plot, int index, int series) {
         XYLineAndShapeRenderer r = (XYLineAndShapeRenderer) plot.getRenderer(index);
+        r.setDrawSeriesLineAsPath(true);
         Paint[] paints = {new Color(200, 30, 30), new Color(30, 30, 30), new Color(30, 110, 200),
             new Color(20, 150, 60), new Color(150, 60, 180)};
         Stroke[] strokes = {new BasicStroke(2.5f),
@@ -436,18 +572,52 @@ final class DiagnosisCharts {
         return chart;
     }
 
+    /**
+     * Where a region's edges lie on the x axis: r/R or the mass scales from the region's own fractions, the
+     * pressure scale by interpolation between zones; edges at infinity (the centre or the surface on a mass
+     * scale) at the axis's end.
+     */
+    private static double[] edges(ProfileDiagnosis d, Region region, PlotAxis axis, double[] xs, XYPlot plot) {
+        double a;
+        double b;
+        switch (axis) {
+            case RADIUS -> {
+                a = region.bottomRadiusFraction();
+                b = region.topRadiusFraction();
+            }
+            case PRESSURE -> {
+                a = PlotAxis.atRadius(d, xs, region.bottomRadius());
+                b = PlotAxis.atRadius(d, xs, region.topRadius());
+            }
+            default -> {
+                a = axis.atMassFraction(region.bottomMassFraction());
+                b = axis.atMassFraction(region.topMassFraction());
+            }
+        }
+        ValueAxis x = plot.getDomainAxis();
+        return new double[] {clamp(a, x), clamp(b, x)};
+    }
+
+    private static double clamp(double v, ValueAxis x) {
+        return Double.isNaN(v) ? x.getLowerBound() : Math.max(x.getLowerBound(), Math.min(x.getUpperBound(), v));
+    }
+
     /** Shades each non-radiative region and adds one legend entry per regime shown. */
-    private static void shadeRegions(ProfileDiagnosis d, XYPlot plot) {
+    private static void shadeRegions(ProfileDiagnosis d, XYPlot plot, PlotAxis axis, double[] xs) {
         Set<Regime> shown = EnumSet.noneOf(Regime.class);
+        boolean overshot = false;
         for (Region region : d.regions()) {
             if (region.regime() == Regime.RADIATIVE) {
                 continue;
             }
-            IntervalMarker m = new IntervalMarker(region.bottomRadiusFraction(), region.topRadiusFraction());
+            double[] e = edges(d, region, axis, xs, plot);
+            IntervalMarker m = new IntervalMarker(Math.min(e[0], e[1]), Math.max(e[0], e[1]));
             m.setPaint(SHADE.get(region.regime()));
             m.setOutlinePaint(null);
             plot.addDomainMarker(m, Layer.BACKGROUND);
             shown.add(region.regime());
+            overshot |= shadeOvershoot(d, plot, axis, xs, region.overshootBottom(), region.bottomRadius(), e[0]);
+            overshot |= shadeOvershoot(d, plot, axis, xs, region.overshootTop(), region.topRadius(), e[1]);
         }
         LegendItemCollection items = new LegendItemCollection();
         LegendItemCollection series = plot.getLegendItems();
@@ -460,7 +630,40 @@ final class DiagnosisCharts {
                     new Rectangle(-8, -8, 16, 16), new Color(c.getRed(), c.getGreen(), c.getBlue(), 140));
             items.add(item);
         }
+        if (overshot) {
+            items.add(new LegendItem("overshoot mixing", null, null, null, new Rectangle(-8, -8, 16, 16),
+                    new Color(OVERSHOOT_SHADE.getRed(), OVERSHOOT_SHADE.getGreen(), OVERSHOOT_SHADE.getBlue(), 140)));
+        }
         plot.setFixedLegendItems(items);
+    }
+
+    /**
+     * Shades the layer between an edge (already placed on the x axis) and the point where overshoot mixing
+     * beyond it ends, placed by its radius.
+     *
+     * @return whether anything was shaded (an edge with overshoot of non-zero extent)
+     */
+    private static boolean shadeOvershoot(ProfileDiagnosis d, XYPlot plot, PlotAxis axis, double[] xs,
+                                          java.util.OptionalDouble reach, double edge, double edgeOnAxis) {
+        if (reach.isEmpty() || reach.getAsDouble() == edge) {
+            return false;
+        }
+        ValueAxis x = plot.getDomainAxis();
+        double a = edgeOnAxis;
+        double b = clamp(onAxis(d, axis, xs, reach.getAsDouble()), x);
+        if (a == b) {
+            return false;
+        }
+        IntervalMarker m = new IntervalMarker(Math.min(a, b), Math.max(a, b));
+        m.setPaint(OVERSHOOT_SHADE);
+        m.setOutlinePaint(null);
+        plot.addDomainMarker(m, Layer.BACKGROUND);
+        return true;
+    }
+
+    /** A point given by its radius on the x axis: r/R directly, otherwise between the zones either side. */
+    private static double onAxis(ProfileDiagnosis d, PlotAxis axis, double[] xs, double radius) {
+        return axis == PlotAxis.RADIUS ? radius / d.radius() : PlotAxis.atRadius(d, xs, radius);
     }
 
     private static void note(JFreeChart chart, int hidden, String what) {

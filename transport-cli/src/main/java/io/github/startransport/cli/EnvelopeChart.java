@@ -85,6 +85,7 @@ final class EnvelopeChart {
                 new float[] {10f, 6f}, 0f));
         r.setSeriesPaint(2, new Color(20, 150, 60));
         r.setSeriesStroke(2, new BasicStroke(3.5f));
+        r.setDrawSeriesLineAsPath(true); // one dash pattern along each curve, not one per segment
         for (ConvectiveZone z : e.convectiveZones()) {
             IntervalMarker m = new IntervalMarker(Math.log10(z.topPressure()), Math.log10(z.bottomPressure()));
             m.setPaint(SHADE);

@@ -8,6 +8,7 @@ import io.github.startransport.spi.EnvelopeIntegrator;
 import io.github.startransport.spi.EnvelopeSetup;
 import io.github.startransport.spi.EnvelopeSolution;
 import io.github.startransport.spi.EnvelopeStar;
+import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.OpacityModel;
@@ -44,8 +45,9 @@ import java.util.concurrent.Callable;
                 + " summary.json and envelope.png (nabla, nabla_ad, nabla_rad against log P). Nothing is left"
                 + " half-written: the files appear in DIR only when everything succeeded.",
             ""},
-        footer = {"", "Exit codes: 0 success; 1 bad input (the message says which value and why); 2 usage error;"
-                + " 3 out of memory."})
+        footer = {"", "Exit codes: 0 success; 1 bad input (an opacity table that cannot be read or holds bad data,"
+                + " an output folder that cannot be written); 2 usage error (unknown option or model name, a bad"
+                + " option value: the message says which and why); 3 out of memory."})
 final class EnvelopeCommand implements Callable<Integer> {
     /** The envelope's data file. */
     static final String CSV = "envelope.csv";
@@ -88,6 +90,16 @@ final class EnvelopeCommand implements Callable<Integer> {
                     + " replaces --alpha. The Sun's is 0.713 (Christensen-Dalsgaard, Gough & Thompson 1991).")
     private Double calibrateBase;
 
+    @Option(names = "--alpha-low", paramLabel = "A",
+            description = "With --calibrate-base: the lower end of the alpha interval searched (> 0)."
+                    + " Default: the envelope model's own, 0.5.")
+    private Double alphaLow;
+
+    @Option(names = "--alpha-high", paramLabel = "A",
+            description = "With --calibrate-base: the upper end of the alpha interval searched (> --alpha-low)."
+                    + " Default: the envelope model's own, 4.")
+    private Double alphaHigh;
+
     @Option(names = "--convection", paramLabel = "NAME",
             description = "Convection model, by name (see the models command). Default: the provider's recommended"
                     + " model.")
@@ -128,11 +140,16 @@ final class EnvelopeCommand implements Callable<Integer> {
         if (!matched("--opacity")) {
             opacity = null;
         }
+        if ((alphaLow != null || alphaHigh != null) && calibrateBase == null) {
+            throw new ParameterException(spec.commandLine(), "--alpha-low and --alpha-high bound the alpha a calibration"
+                    + " searches: give them with --calibrate-base");
+        }
         if (alpha != null && calibrateBase != null) {
             throw new ParameterException(spec.commandLine(), "give either --alpha or --calibrate-base, not both");
         }
         if (alpha != null && !(alpha > 0 && Double.isFinite(alpha))) {
-            throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not " + alpha);
+            throw new ParameterException(spec.commandLine(), "--alpha must be a finite number > 0, not "
+                    + Text.number(alpha));
         }
         if (opacityTable != null && opacity != null) {
             throw new ParameterException(spec.commandLine(), "give either --opacity or --opacity-table, not both");
@@ -141,11 +158,27 @@ final class EnvelopeCommand implements Callable<Integer> {
             throw new BadInputException("--opacity-table " + opacityTable + ": cannot be read"
                     + (Files.exists(opacityTable) ? " (permission denied)" : " (no such file)"));
         }
+        // The star and the target are the input data of this command: a star that cannot exist or a target
+        // it cannot reach is bad input (exit 1), like a bad profile for diagnose; usage errors (exit 2) are
+        // options that do not fit together or cannot be read as numbers.
         if (calibrateBase != null && !(calibrateBase > 0.0 && calibrateBase < 1.0)) {
-            throw new BadInputException("--calibrate-base " + calibrateBase + ": the base of the convection zone is a"
-                    + " fraction r/R of the radius, strictly between 0 and 1");
+            throw new BadInputException("--calibrate-base " + Text.number(calibrateBase) + ": the"
+                    + " base of the convection zone is a fraction r/R of the radius, strictly between 0 and 1");
         }
-        EnvelopeStar star = EnvelopeStar.inSolarUnits(mass, radius, luminosity, hydrogen, metals);
+        positive("--mass-msun", mass);
+        positive("--radius-rsun", radius);
+        positive("--luminosity-lsun", luminosity);
+        if (!(hydrogen >= 0 && hydrogen <= 1) || !(metals >= 0 && metals <= 1) || !(hydrogen + metals <= 1)) {
+            throw new BadInputException("--hydrogen " + Text.number(hydrogen) + " and --metals "
+                    + Text.number(metals) + ": mass fractions, each in [0, 1] and together at most 1");
+        }
+        EnvelopeStar star;
+        try {
+            star = EnvelopeStar.inSolarUnits(mass, radius, luminosity, hydrogen, metals);
+        } catch (InvalidInputException e) {
+            throw new BadInputException("the star given by --mass-msun, --radius-rsun,"
+                    + " --luminosity-lsun, --hydrogen and --metals is refused: " + e.getMessage());
+        }
         Transport transport = cli.transport();
         String convectionName = convection != null ? convection
                 : Catalog.defaultModel(transport, ModelFamily.CONVECTION);
@@ -153,7 +186,9 @@ final class EnvelopeCommand implements Callable<Integer> {
         if (alpha != null) {
             convectionOptions = convectionOptions.with(ModelNames.CONVECTION_ALPHA, Double.toString(alpha));
         }
-        ConvectionModel convectionModel = transport.convection(convectionName, convectionOptions);
+        ModelOptions finalConvectionOptions = convectionOptions;
+        ConvectionModel convectionModel = DiagnosisOptions.asOption("--convection", convectionName,
+                () -> transport.convection(convectionName, finalConvectionOptions));
         OpacityModel opacityModel;
         String opacityName;
         if (opacityTable != null) {
@@ -162,12 +197,23 @@ final class EnvelopeCommand implements Callable<Integer> {
                     .with(ModelNames.OPACITY_TABLE_FILE, opacityTable.toAbsolutePath().toString()));
         } else {
             opacityName = opacity != null ? opacity : Catalog.defaultModel(transport, ModelFamily.OPACITY);
-            opacityModel = transport.opacity(opacityName, ModelOptions.defaults());
+            opacityModel = DiagnosisOptions.asOption("--opacity", opacityName,
+                    () -> transport.opacity(opacityName, ModelOptions.defaults()));
         }
         String thermoName = thermodynamics != null ? thermodynamics
                 : Catalog.defaultModel(transport, ModelFamily.THERMODYNAMICS);
-        ThermodynamicsModel thermo = transport.thermodynamics(thermoName, ModelOptions.defaults());
-        EnvelopeIntegrator integrator = transport.envelope(null, ModelOptions.defaults());
+        ThermodynamicsModel thermo = DiagnosisOptions.asOption("--thermodynamics", thermoName,
+                () -> transport.thermodynamics(thermoName, ModelOptions.defaults()));
+        ModelOptions envelopeOptions = ModelOptions.defaults();
+        if (alphaLow != null) {
+            envelopeOptions = envelopeOptions.with(ModelNames.ENVELOPE_ALPHA_LOW, Double.toString(alphaLow));
+        }
+        if (alphaHigh != null) {
+            envelopeOptions = envelopeOptions.with(ModelNames.ENVELOPE_ALPHA_HIGH, Double.toString(alphaHigh));
+        }
+        ModelOptions finalEnvelopeOptions = envelopeOptions;
+        EnvelopeIntegrator integrator = DiagnosisOptions.asOption("--alpha-low/--alpha-high", "",
+                () -> transport.envelope(null, finalEnvelopeOptions));
         EnvelopeSetup setup = new EnvelopeSetup(convectionModel, opacityModel, thermo);
         Used used = new Used(Catalog.bare(convectionName), Catalog.bare(opacityName),
                 opacityTable == null ? null : opacityTable.toString(), Catalog.bare(thermoName));
@@ -178,12 +224,20 @@ final class EnvelopeCommand implements Callable<Integer> {
         List<String> warnings;
         try (OutputFolder folder = OutputFolder.open(out, cli.args(), notes)) {
             notes.forEach(n -> cli.err().println("note: " + n));
-            if (calibrateBase != null) {
-                cli.out().printf(Locale.ROOT, "calibrating alpha to r_b/R = %.6f%n", calibrateBase);
-                calibration = integrator.calibrate(star, setup, calibrateBase, this::printStep);
-                envelope = calibration.envelope();
-            } else {
-                envelope = integrator.integrate(star, setup);
+            try {
+                if (calibrateBase != null) {
+                    cli.out().printf(Locale.ROOT, "calibrating alpha to r_b/R = %.6f%n", calibrateBase);
+                    calibration = integrator.calibrate(star, setup, calibrateBase, this::printStep);
+                    envelope = calibration.envelope();
+                } else {
+                    envelope = integrator.integrate(star, setup);
+                }
+            } catch (InvalidInputException e) {
+                if (e.zone() != InvalidInputException.NO_ZONE) {
+                    throw e;
+                }
+                // not about a zone: about the star or a target given on the command line (bad input, exit 1)
+                throw new BadInputException(e.getMessage(), e);
             }
             Path dir = folder.staging();
             try {
@@ -198,6 +252,13 @@ final class EnvelopeCommand implements Callable<Integer> {
         printSummary(envelope, calibration);
         warnings.forEach(w -> cli.err().println("warning: " + w));
         return 0;
+    }
+
+    private static void positive(String option, double value) {
+        if (!(value > 0 && Double.isFinite(value))) {
+            throw new BadInputException(option + " must be a finite number > 0, not "
+                    + Text.number(value));
+        }
     }
 
     private boolean matched(String option) {

@@ -53,14 +53,18 @@ final class HumanSummary {
                             .append(days(r.turnoverLocal())).append(" (local), max v_conv ")
                             .append(r.maxVelocity().isPresent()
                                     ? String.format(Locale.ROOT, "%.3g cm/s", r.maxVelocity().getAsDouble()) : "n/a");
+                    if (r.overshootBottom().isPresent() || r.overshootTop().isPresent()) {
+                        b.append("   overshoot to r/R ").append(fraction(r.overshootBottom(), d.radius()))
+                                .append(" below, ").append(fraction(r.overshootTop(), d.radius())).append(" above");
+                    }
                 }
                 b.append('\n');
             }
         }
         Timescales t = d.timescales();
-        b.append(String.format(Locale.ROOT, "  timescales: photon diffusion %.3g yr, thermal diffusion %.3g yr,"
-                        + " Kelvin-Helmholtz %.3g yr\n", t.photonDiffusion() / SummaryJson.JULIAN_YEAR_S,
-                t.thermalDiffusion() / SummaryJson.JULIAN_YEAR_S, t.kelvinHelmholtz() / SummaryJson.JULIAN_YEAR_S));
+        b.append("  timescales: photon diffusion ").append(years(t.photonDiffusion())).append(", thermal diffusion ")
+                .append(years(t.thermalDiffusion())).append(", Kelvin-Helmholtz ").append(years(t.kelvinHelmholtz()))
+                .append('\n');
         d.seismic().ifPresent(s -> b.append(String.format(Locale.ROOT, "  seismic: acoustic radius %.4g s,"
                 + " large separation %.4g uHz, l = 1 period spacing %s\n", s.acousticRadius(),
                 s.largeSeparation() * 1e6, Double.isFinite(s.periodSpacingL1())
@@ -70,6 +74,16 @@ final class HumanSummary {
         }
         b.append("  written to ").append(where).append('\n');
         return b.toString();
+    }
+
+    /** A time in years, or "n/a" where it is undefined (as null in summary.json): never negative or infinite. */
+    static String years(double seconds) {
+        return seconds > 0 && Double.isFinite(seconds)
+                ? String.format(Locale.ROOT, "%.3g yr", seconds / SummaryJson.JULIAN_YEAR_S) : "n/a";
+    }
+
+    private static String fraction(OptionalDouble r, double radius) {
+        return r.isPresent() ? String.format(Locale.ROOT, "%.4f", r.getAsDouble() / radius) : "-";
     }
 
     private static String days(OptionalDouble seconds) {

@@ -1,6 +1,8 @@
 package io.github.startransport.cli;
 
 import io.github.startransport.spi.DataFormatException;
+import io.github.startransport.spi.DiscoveryException;
+import io.github.startransport.spi.InvalidOptionException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.Transport;
 import io.github.startransport.spi.TransportException;
@@ -21,16 +23,17 @@ import java.util.function.Supplier;
  * The command-line tool {@code startransport}: {@code diagnose} and {@code models}. It reaches
  * the physics only through the SPI ({@link Transport#discover()}).
  *
- * <p>Exit codes: {@value #OK} success, {@value #BAD_INPUT} bad input (file, line or zone,
- * column and what is wrong), {@value #USAGE} usage error, {@value #OUT_OF_MEMORY} out of memory
- * (one line saying how many zones and which {@code -Xmx} to try).
+ * <p>Exit codes: {@value #OK} success, {@value #BAD_INPUT} bad input (a file that cannot be read
+ * or holds bad data: file, line or zone, column and what is wrong), {@value #USAGE} usage error
+ * (an unknown option or model name, a malformed option value), {@value #OUT_OF_MEMORY} out of
+ * memory (one line saying how many zones and which {@code -Xmx} to try).
  */
 public final class Main {
     /** Exit code: success. */
     public static final int OK = 0;
-    /** Exit code: bad input (a file, a value, an output folder). */
+    /** Exit code: bad input (a file that cannot be read or holds bad data, an output folder). */
     public static final int BAD_INPUT = 1;
-    /** Exit code: the command line itself is wrong. */
+    /** Exit code: the command line itself is wrong (unknown option or model name, malformed option value). */
     public static final int USAGE = 2;
     /** Exit code: the Java heap is too small for the input (the message says which -Xmx to try). */
     public static final int OUT_OF_MEMORY = 3;
@@ -41,7 +44,8 @@ public final class Main {
     /** The top-level command; it only dispatches. */
     @Command(name = "startransport", mixinStandardHelpOptions = true, versionProvider = Version.class,
             description = {"Energy-transport diagnostics of stellar model profiles.", ""},
-            footer = {"", "Exit codes: 0 success; 1 bad input; 2 usage error; 3 out of memory (the message says which"
+            footer = {"", "Exit codes: 0 success; 1 bad input (a file that cannot be read or holds bad data); 2 usage"
+                + " error (unknown option or model name, a bad option value); 3 out of memory (the message says which"
                 + " -Xmx to try).",
                 "Run 'startransport diagnose --help' for the profile format and every option."})
     static final class Root implements Runnable {
@@ -50,7 +54,8 @@ public final class Main {
 
         @Override
         public void run() {
-            throw new ParameterException(spec.commandLine(), "missing command: diagnose, envelope, models or table");
+            throw new ParameterException(spec.commandLine(), "missing command: diagnose, track, envelope, models or"
+                    + " table");
         }
     }
 
@@ -134,6 +139,7 @@ public final class Main {
         Cli cli = new Cli(out, err, console, discovery, java.util.Arrays.asList(args));
         CommandLine cl = new CommandLine(new Root());
         cl.addSubcommand(new CommandLine(new DiagnoseCommand(cli)));
+        cl.addSubcommand(new CommandLine(new TrackCommand(cli)));
         cl.addSubcommand(new CommandLine(new EnvelopeCommand(cli)));
         cl.addSubcommand(new CommandLine(new ModelsCommand(cli)));
         CommandLine table = new CommandLine(new TableCommand());
@@ -143,12 +149,27 @@ public final class Main {
         cl.setDefaultValueProvider(new ProviderDefaults(cli));
         cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
         cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
+        cl.setParameterExceptionHandler((e, arguments) -> {
+            String command = e.getCommandLine().getCommandSpec().qualifiedName();
+            err.println(command + ": " + e.getMessage());
+            err.println("Run '" + command + " --help' for the options.");
+            err.flush();
+            return USAGE;
+        });
         cl.setExecutionExceptionHandler((e, line, parsed) -> {
             if (e instanceof IllegalStateException && e.getCause() instanceof OutOfMemoryError) {
                 return outOfMemory(err);
             }
+            if (isUsage(e)) {
+                String command = line.getCommandSpec().qualifiedName();
+                err.println(command + ": " + e.getMessage());
+                err.println("Run '" + command + " --help' for the options.");
+                err.flush();
+                return USAGE;
+            }
             err.println("startransport: " + describe(e));
-            if (!(e instanceof TransportException || e instanceof BadInputException)) {
+            if (!(e instanceof TransportException || e instanceof BadInputException
+                    || e instanceof java.io.UncheckedIOException)) {
                 e.printStackTrace(err);
             }
             err.flush();
@@ -172,9 +193,29 @@ public final class Main {
         return OUT_OF_MEMORY;
     }
 
-    private static String describe(Exception e) {
-        if (e instanceof DataFormatException || e instanceof BadInputException) {
+    /**
+     * @param e a failure
+     * @return whether it says the command line is wrong: a usage error, an option a model refuses, a
+     *         model name that no provider offers
+     */
+    static boolean isUsage(Exception e) {
+        if (e instanceof UsageException || e instanceof InvalidOptionException) {
+            return true;
+        }
+        return e instanceof DiscoveryException d && d.kind() != DiscoveryException.Kind.NO_PROVIDER
+                && d.kind() != DiscoveryException.Kind.DUPLICATE_PROVIDER;
+    }
+
+    /**
+     * @param e a failure
+     * @return its message for the person running the tool
+     */
+    static String describe(Exception e) {
+        if (e instanceof DataFormatException || e instanceof BadInputException || e instanceof UsageException) {
             return e.getMessage();
+        }
+        if (e instanceof java.io.UncheckedIOException u) {
+            return "cannot read or write a file: " + u.getCause().getMessage();
         }
         if (e instanceof TransportException) {
             return e.getMessage();

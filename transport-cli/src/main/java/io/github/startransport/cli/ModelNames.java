@@ -20,6 +20,21 @@ final class ModelNames {
     /** Option of {@link #OPACITY_TABLE_MODEL}: path of the table file. */
     static final String OPACITY_TABLE_FILE = "file";
 
+    /** Option of the diagnosis: f of exponential overshoot (dimensionless). */
+    static final String DIAGNOSIS_OVERSHOOT_F = "overshoot-f";
+
+    /** Option of the diagnosis: f0, where overshoot's D_0 is taken inside each edge (dimensionless). */
+    static final String DIAGNOSIS_OVERSHOOT_F0 = "overshoot-f0";
+
+    /** Option of the diagnosis: alpha_ov of step overshoot (dimensionless). */
+    static final String DIAGNOSIS_OVERSHOOT_STEP = "overshoot-step";
+
+    /** Option of the envelope model: lower end of the alpha interval a calibration searches (dimensionless). */
+    static final String ENVELOPE_ALPHA_LOW = "alpha-low";
+
+    /** Option of the envelope model: upper end of the alpha interval a calibration searches (dimensionless). */
+    static final String ENVELOPE_ALPHA_HIGH = "alpha-high";
+
     private ModelNames() {
     }
 }

@@ -7,8 +7,14 @@ import java.math.BigInteger;
 /**
  * The one place where the tool decides what a number in a profile cell is and turns it into a
  * double: an optional sign, digits with an optional decimal point (at least one digit), and an
- * optional exponent {@code e} or {@code E} with optional sign and at least one digit. Nothing
- * else: no {@code NaN}, {@code Infinity}, hexadecimal, or type suffixes.
+ * optional exponent with optional sign and at least one digit, introduced by {@code e} or
+ * {@code E}, or by Fortran's double-precision {@code d} or {@code D} ({@code 1.5D+07} is
+ * {@code 1.5e+07}; many stellar codes write it). Nothing else: no {@code NaN}, {@code Infinity},
+ * hexadecimal, or type suffixes.
+ *
+ * <p>A number too large for a double parses to infinity and one too small to 0 (as
+ * {@link Double#parseDouble} does); {@link #nonZeroDigits} tells a written zero from an
+ * underflow, so that the reader can refuse the one and warn about the other.
  *
  * <p>{@link #parse(byte[], int, int)} reads a cell straight from the file's bytes, creating no
  * object: the digits go into a {@code long} significand w and a decimal exponent q, and
@@ -82,7 +88,7 @@ final class NumberSyntax {
             return NOT_A_NUMBER;
         }
         long exp = 0;
-        if (i < to && (b[i] == 'e' || b[i] == 'E')) {
+        if (i < to && (b[i] == 'e' || b[i] == 'E' || b[i] == 'd' || b[i] == 'D')) {
             i++;
             boolean expNegative = false;
             if (i < to && (b[i] == '+' || b[i] == '-')) {
@@ -114,11 +120,12 @@ final class NumberSyntax {
         return negative ? -v : v;
     }
 
-    /** Cells of more than 19 significant digits: Jackson's parser on a copy. */
+    /** Cells of more than 19 significant digits: Jackson's parser on a copy (a Fortran D made an E). */
     private static double slow(byte[] b, int from, int to) {
         char[] c = new char[to - from];
         for (int k = 0; k < c.length; k++) {
-            c[k] = (char) b[from + k];
+            char ch = (char) b[from + k];
+            c[k] = ch == 'd' || ch == 'D' ? 'e' : ch;
         }
         return NumberInput.parseDouble(c, 0, c.length, true);
     }
@@ -219,6 +226,43 @@ final class NumberSyntax {
             t[k + 1] = c.longValue();
         }
         return t;
+    }
+
+    /**
+     * Whether a cell that {@link #parse(byte[], int, int)} accepted has a non-zero digit in its
+     * significand: then a result of 0 is an underflow (the number is below the smallest double,
+     * 4.9e-324), not a written zero. Cost: one pass over the cell, taken only for zeros.
+     *
+     * @param b    the bytes
+     * @param from first byte of the cell (already trimmed)
+     * @param to   one past its last byte
+     * @return whether a digit 1-9 comes before the exponent
+     */
+    static boolean nonZeroDigits(byte[] b, int from, int to) {
+        for (int i = from; i < to; i++) {
+            byte c = b[i];
+            if (c == 'e' || c == 'E' || c == 'd' || c == 'D') {
+                return false;
+            }
+            if (c >= '1' && c <= '9') {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * @param text a cell's text
+     * @return {@link #nonZeroDigits(byte[], int, int)} of its trimmed text
+     */
+    static boolean nonZeroDigits(String text) {
+        String t = text.trim();
+        byte[] b = new byte[t.length()];
+        for (int k = 0; k < b.length; k++) {
+            char ch = t.charAt(k);
+            b[k] = ch < 128 ? (byte) ch : (byte) '?';
+        }
+        return nonZeroDigits(b, 0, b.length);
     }
 
     /**

@@ -144,6 +144,7 @@ final class OutputFolder implements AutoCloseable {
      * @return a fresh, empty versioned folder to write into
      * @throws BadInputException when the target cannot be written, or exists and is not this tool's
      */
+    @SuppressWarnings("try") // the lock is held for the whole block and released by closing it
     static OutputFolder open(Path target, List<String> command, List<String> notes) {
         Path place = resolveUserLinks(target);
         Path name = place.getFileName();
@@ -219,6 +220,7 @@ final class OutputFolder implements AutoCloseable {
      *                           may not replace, or the commit failed (the previous output is
      *                           then left as it was)
      */
+    @SuppressWarnings("try") // the lock is held for the whole block and released by closing it
     List<String> commit() {
         String oldName = null;
         FileChannel oldChannel = null;

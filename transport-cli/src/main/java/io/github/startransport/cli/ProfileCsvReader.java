@@ -30,7 +30,13 @@ import java.util.Map;
 /**
  * Reads a profile file: CSV, one header row of column names, then one zone per row, in cgs
  * units. Lines whose first non-blank character is {@code #} and blank lines are skipped
- * anywhere. Each record is one physical line (no line breaks inside quoted cells).
+ * anywhere; a comment {@code # name = value} is kept as a {@link Property} (e.g.
+ * {@code # age_yr = 1.5e9}). Each record is one physical line (no line breaks inside quoted
+ * cells). Cells are separated by commas, or by the {@link Delimiter} given.
+ *
+ * <p>Header names are matched to our columns: a {@code --columns} map first, then our header
+ * names exactly, then our names in any case and our aliases ({@link ColumnMap#ourColumn}). A
+ * header that lacks a required column is refused with a hint that works when copied.
  *
  * <p>The file is streamed: bytes are split into cells in place, and the cells of our columns
  * go straight into growing {@code double} columns ({@link NumberSyntax}, no object per cell); cells of other columns
@@ -43,6 +49,8 @@ import java.util.Map;
  */
 final class ProfileCsvReader {
     private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setTrim(true).get();
+    /** Smallest profile the library accepts (zones). */
+    static final int MIN_ZONES = 3;
     /** Read buffer (bytes); a longer line grows it. */
     private static final int BUFFER = 1 << 20;
     /** Rows read before the column capacity is estimated from the file size. */
@@ -51,17 +59,32 @@ final class ProfileCsvReader {
     static final int MAX_ZONES = Integer.MAX_VALUE - 16;
 
     /**
+     * A comment line {@code # name = value} of a profile file.
+     *
+     * @param name   the name, e.g. {@code age_yr}
+     * @param value  the text after {@code =}, trimmed
+     * @param line   1-based file line
+     * @param column 1-based column (character) where the value starts
+     */
+    record Property(String name, String value, int line, int column) {
+    }
+
+    /**
      * A profile read from a file, with what the reader noticed and where each zone came from.
      *
-     * @param profile   the validated profile
-     * @param file      the file it was read from
-     * @param notes     things the reader ignored, one sentence each
-     * @param columnAt  1-based file column of each of our columns that the file holds
-     * @param map       the {@code --columns} map the file was read with
+     * @param profile    the validated profile
+     * @param file       the file it was read from
+     * @param notes      things the reader ignored or inferred, one sentence each
+     * @param warnings   things in the file that may not mean what it says (numbers that underflowed to 0)
+     * @param columnAt   1-based file column of each of our columns that the file holds
+     * @param map        the {@code --columns} map the file was read with
+     * @param delimiter  what separates its cells
+     * @param properties its {@code # name = value} comment lines, in file order
      */
-    record Read(Profile profile, Path file, List<String> notes, Map<ProfileColumn, Integer> columnAt, ColumnMap map) {
+    record Read(Profile profile, Path file, List<String> notes, List<String> warnings,
+                Map<ProfileColumn, Integer> columnAt, ColumnMap map, Delimiter delimiter, List<Property> properties) {
         /**
-         * Places an error about one zone of the profile in the file.
+         * Places an error about one zone of the profile in the file, quoting the file's own text.
          *
          * @param e           an error naming a zone and a field of {@link #profile()}
          * @param centreFirst whether {@code e.zone()} counts from the centre (the order of the
@@ -77,12 +100,22 @@ final class ProfileCsvReader {
             ProfileColumn c = ProfileColumn.byHeader(e.field());
             Integer at = c == null ? null : columnAt.get(c);
             String column = c == null ? "field " + e.field()
-                    : "column " + map.fileHeader(c) + (map.maps(c) ? " (our " + c.header() + ")" : "")
+                    : "column " + Text.shorten(map.fileHeader(c)) + (map.maps(c) ? " (our " + c.header() + ")" : "")
                     + (at == null ? "" : " (column " + at + ")");
             String unit = e.unit() == null || e.unit().isEmpty() || "1".equals(e.unit()) ? "" : " " + e.unit();
             String where = line > 0 ? "data row " + (row + 1) + ", " : "";
+            String written = line > 0 && at != null ? cellText(file, line, at, delimiter) : null;
+            String value;
+            if (written == null) {
+                value = "the value " + Text.number(e.value()) + unit;
+            } else {
+                double read = NumberSyntax.parse(written.trim());
+                value = "'" + Text.shorten(written.trim()) + "'" + unit + (Double.compare(read, e.value()) == 0
+                        && !(read == 0.0 && NumberSyntax.nonZeroDigits(written)) ? ""
+                        : " (read as " + Text.number(e.value()) + ")");
+            }
             return new DataFormatException(file.toString(), line, at == null ? 0 : at,
-                    where + column + ": the value " + e.value() + unit + " is refused; it must be " + e.requirement());
+                    where + column + ": " + value + " is refused; it must be " + e.requirement());
         }
 
         /** @return the 1-based file line of every data row, in file order (found by reading the file again) */
@@ -95,6 +128,14 @@ final class ProfileCsvReader {
                 return true;
             });
             return lines.stream().mapToInt(Integer::intValue).toArray();
+        }
+
+        /**
+         * @param name a property name, e.g. {@code age_yr}
+         * @return every comment line giving it, in file order
+         */
+        List<Property> properties(String name) {
+            return properties.stream().filter(p -> p.name().equals(name)).toList();
         }
     }
 
@@ -241,19 +282,31 @@ final class ProfileCsvReader {
     // ------------------------------------------------------------------ reading
 
     /**
-     * @param file the profile file
+     * @param file the profile file, comma-separated
      * @param map  {@code --columns}: which file header holds which of our columns
      * @return the profile and what the reader noticed
      * @throws DataFormatException when the file cannot be read or is malformed, or the profile
      *                             it holds is refused
      */
     static Read read(Path file, ColumnMap map) {
+        return read(file, map, Delimiter.COMMA);
+    }
+
+    /**
+     * @param file      the profile file
+     * @param map       {@code --columns}: which file header holds which of our columns
+     * @param delimiter what separates its cells
+     * @return the profile and what the reader noticed
+     * @throws DataFormatException when the file cannot be read or is malformed, or the profile
+     *                             it holds is refused
+     */
+    static Read read(Path file, ColumnMap map, Delimiter delimiter) {
         String name = file.toString();
         if (Files.isDirectory(file)) {
             throw new DataFormatException(name, 0, 0, "is a folder, not a profile file");
         }
         try (LineSource src = new LineSource(file)) {
-            return read(file, map, src);
+            return read(file, map, delimiter, src);
         } catch (NoSuchFileException e) {
             throw new DataFormatException(name, 0, 0, "cannot be read: no such file");
         } catch (AccessDeniedException e) {
@@ -263,14 +316,19 @@ final class ProfileCsvReader {
         }
     }
 
-    private static Read read(Path file, ColumnMap map, LineSource src) throws IOException {
+    private static Read read(Path file, ColumnMap map, Delimiter delimiter, LineSource src) throws IOException {
         String name = file.toString();
         List<String> notes = new ArrayList<>();
+        List<Property> properties = new ArrayList<>();
         List<String> header = null;
+        String headerText = null;
         long headerLine = 0;
         while (header == null && src.next()) {
-            if (!src.skippable()) {
-                header = cells(name, src.lineNo, decode(name, src));
+            if (src.skippable()) {
+                property(src, properties);
+            } else {
+                headerText = decode(name, src);
+                header = cells(name, src.lineNo, headerText, delimiter);
                 headerLine = src.lineNo;
             }
         }
@@ -280,22 +338,9 @@ final class ProfileCsvReader {
         }
         int hl = (int) headerLine;
         Map<String, Integer> position = headerPositions(name, hl, header);
+        EnumMap<ProfileColumn, Integer> source = HeaderMatch.resolve(name, hl, header, headerText, position, map,
+                delimiter, notes);
 
-        EnumMap<ProfileColumn, Integer> source = new EnumMap<>(ProfileColumn.class);
-        for (ProfileColumn c : ProfileColumn.values()) {
-            String theirs = map.fileHeader(c);
-            Integer at = position.get(theirs);
-            if (at != null) {
-                source.put(c, at);
-            } else if (map.maps(c)) {
-                throw new DataFormatException(name, hl, 0, "--columns maps " + c.header() + " onto '" + theirs
-                        + "', but the header has no column '" + theirs + "'; it has " + header);
-            } else if (c.required()) {
-                throw new DataFormatException(name, hl, 0, "the required column " + c.header() + " ("
-                        + c.unit() + ") is missing; the header has " + header + hint(header) + ". Name it "
-                        + c.header() + " in the file, or map it with --columns " + c.header() + "=YOUR_NAME");
-            }
-        }
         int width = header.size();
         // slot[j]: which of our columns file column j fills, or -1
         ProfileColumn[] ours = source.keySet().toArray(new ProfileColumn[0]);
@@ -304,18 +349,15 @@ final class ProfileCsvReader {
         for (int s = 0; s < ours.length; s++) {
             slot[source.get(ours[s])] = s;
         }
-        for (int j = 0; j < width; j++) {
-            if (slot[j] < 0) {
-                notes.add(name + ": column '" + header.get(j) + "' (column " + (j + 1) + ") is not a profile column;"
-                        + " ignored");
-            }
-        }
 
         Columns columns = new Columns(ours.length, SAMPLE_ROWS);
         long firstDataOffset = -1;
         MemoryAdvice.reading(file, src.size);
+        byte sep = (byte) delimiter.character();
+        boolean runs = delimiter == Delimiter.WHITESPACE;
         while (src.next()) {
             if (src.skippable()) {
+                property(src, properties);
                 continue;
             }
             int n = columns.size;
@@ -333,16 +375,27 @@ final class ProfileCsvReader {
                 MemoryAdvice.progress(n, src.consumed);
             }
             columns.add();
-            if (!row(src, slot, width, columns)) {
-                slowRow(name, src, header, slot, ours, columns, hl);
+            if (runs) {
+                rowOfRuns(src, slot, width, columns);
+            } else if (!row(src, sep, slot, width, columns)) {
+                slowRow(name, src, slot, columns, delimiter);
             }
-            checkRow(name, src, header, slot, ours, columns, hl);
+            checkRow(name, src, header, slot, ours, columns, hl, delimiter);
         }
-        if (columns.size == 0) {
-            throw new DataFormatException(name, hl, 0, "the header is followed by no data rows");
+        if (columns.size < MIN_ZONES) {
+            throw new DataFormatException(name, hl, 0, columns.size == 0 ? "the header is followed by no data rows;"
+                    + " a profile needs at least " + MIN_ZONES + " zones"
+                    : "a profile needs at least " + MIN_ZONES + " zones (data rows); this one has " + columns.size);
         }
         MemoryAdvice.progress(columns.size, src.consumed);
 
+        List<String> warnings = new ArrayList<>();
+        if (columns.underflows > 0) {
+            warnings.add(name + ":" + columns.underflowLine + ":" + (columns.underflowColumn + 1) + ": '"
+                    + Text.shorten(columns.underflowText) + "' in column " + Text.shorten(header.get(columns.underflowColumn))
+                    + " is smaller than the smallest double (4.9e-324) and was read as 0"
+                    + (columns.underflows > 1 ? "; so were " + (columns.underflows - 1) + " more cells" : ""));
+        }
         Map<ProfileColumn, Integer> columnAt = new EnumMap<>(ProfileColumn.class);
         source.forEach((c, j) -> columnAt.put(c, j + 1));
         EnumMap<ProfileColumn, double[]> values = new EnumMap<>(ProfileColumn.class);
@@ -350,14 +403,47 @@ final class ProfileCsvReader {
             values.put(ours[s], columns.trimmed(s));
         }
         columns = null;
-        Read unchecked = new Read(null, file, List.of(), columnAt, map);
+        Read unchecked = new Read(null, file, List.of(), List.of(), columnAt, map, delimiter, List.of());
         Profile profile;
         try {
             profile = new Profile(name, values);
         } catch (InvalidInputException e) {
             throw unchecked.locate(e, false);
         }
-        return new Read(profile, file, List.copyOf(notes), Map.copyOf(columnAt), map);
+        return new Read(profile, file, List.copyOf(notes), List.copyOf(warnings), Map.copyOf(columnAt), map, delimiter,
+                List.copyOf(properties));
+    }
+
+    /** Keeps a comment line of the form {@code # name = value}. */
+    private static void property(LineSource src, List<Property> properties) {
+        int i = src.from;
+        while (i < src.to && (src.buf[i] == ' ' || src.buf[i] == '\t')) {
+            i++;
+        }
+        if (i == src.to || src.buf[i] != '#') {
+            return;
+        }
+        int eq = -1;
+        for (int k = i + 1; k < src.to && k - i < 200; k++) {
+            if (src.buf[k] == '=') {
+                eq = k;
+                break;
+            }
+        }
+        if (eq < 0) {
+            return;
+        }
+        String key = new String(src.buf, i + 1, eq - i - 1, StandardCharsets.UTF_8).trim();
+        if (!key.matches("[A-Za-z_][A-Za-z0-9_.]*")) {
+            return;
+        }
+        int v = eq + 1;
+        while (v < src.to && (src.buf[v] == ' ' || src.buf[v] == '\t')) {
+            v++;
+        }
+        String value = new String(src.buf, v, src.to - v, StandardCharsets.UTF_8).trim();
+        int column = new String(src.buf, src.from, v - src.from, StandardCharsets.UTF_8).length() + 1;
+        properties.add(new Property(key, value, (int) Math.min(Integer.MAX_VALUE, src.lineNo), column));
     }
 
     /** Our columns while they grow: one array per column. */
@@ -367,6 +453,11 @@ final class ProfileCsvReader {
         /** Per row: the number of cells seen, or -1 when a number was refused (set by the row parser). */
         int cells;
         int badColumn = -1;
+        /** Cells whose number is below the smallest double and was read as 0; the first one's place and text. */
+        long underflows;
+        long underflowLine;
+        int underflowColumn;
+        String underflowText;
 
         Columns(int count, int capacity) {
             v = new double[count][capacity];
@@ -396,25 +487,43 @@ final class ProfileCsvReader {
             }
             return a;
         }
+
+        /** Stores a parsed cell of file column j into row {@code size - 1}; notes refusals and underflows. */
+        void put(LineSource src, int j, int slot, double value, int a, int z) {
+            if (!(Math.abs(value) <= Double.MAX_VALUE)) {
+                // not a number, or beyond the largest double: checkRow says which, quoting the cell
+                if (badColumn < 0) {
+                    badColumn = j;
+                }
+                return;
+            }
+            if (value == 0.0 && NumberSyntax.nonZeroDigits(src.buf, a, z)) {
+                if (underflows++ == 0) {
+                    underflowLine = src.lineNo;
+                    underflowColumn = j;
+                    underflowText = new String(src.buf, a, Math.min(z - a, 200), StandardCharsets.UTF_8);
+                }
+            }
+            v[slot][size - 1] = value;
+        }
     }
 
     /**
-     * Splits the current line at commas and parses the cells of our columns into row
+     * Splits the current line at {@code sep} and parses the cells of our columns into row
      * {@code size - 1}. Sets {@code columns.cells}, and {@code columns.badColumn} to the first
-     * file column whose cell is not a number.
+     * file column whose cell is not a finite number.
      *
      * @return {@code false} when the line holds a double quote (the slow path reads it)
      */
-    private static boolean row(LineSource src, int[] slot, int width, Columns columns) {
+    private static boolean row(LineSource src, byte sep, int[] slot, int width, Columns columns) {
         byte[] b = src.buf;
         int end = src.to;
-        int k = columns.size - 1;
         int j = 0;
         int i = src.from;
         columns.badColumn = -1;
         while (true) {
             int cellEnd = i;
-            while (cellEnd < end && b[cellEnd] != ',') {
+            while (cellEnd < end && b[cellEnd] != sep) {
                 if (b[cellEnd] == '"') {
                     return false;
                 }
@@ -429,14 +538,7 @@ final class ProfileCsvReader {
                 while (z > a && (b[z - 1] == ' ' || b[z - 1] == '\t')) {
                     z--;
                 }
-                double value = NumberSyntax.parse(b, a, z);
-                if (Double.isNaN(value)) {
-                    if (columns.badColumn < 0) {
-                        columns.badColumn = j;
-                    }
-                } else {
-                    columns.v[slot[j]][k] = value;
-                }
+                columns.put(src, j, slot[j], NumberSyntax.parse(b, a, z), a, z);
             }
             j++;
             if (cellEnd >= end) {
@@ -448,21 +550,52 @@ final class ProfileCsvReader {
         return true;
     }
 
+    /** The row parser for {@link Delimiter#WHITESPACE}: cells are the runs of other bytes; no quoting. */
+    private static void rowOfRuns(LineSource src, int[] slot, int width, Columns columns) {
+        byte[] b = src.buf;
+        int end = src.to;
+        int j = 0;
+        int i = src.from;
+        columns.badColumn = -1;
+        while (true) {
+            while (i < end && (b[i] == ' ' || b[i] == '\t')) {
+                i++;
+            }
+            if (i >= end) {
+                break;
+            }
+            int cellEnd = i;
+            while (cellEnd < end && b[cellEnd] != ' ' && b[cellEnd] != '\t') {
+                cellEnd++;
+            }
+            if (j < width && slot[j] >= 0) {
+                columns.put(src, j, slot[j], NumberSyntax.parse(b, i, cellEnd), i, cellEnd);
+            }
+            j++;
+            i = cellEnd;
+        }
+        columns.cells = j;
+    }
+
     /** A line with quotes: parsed by commons-csv, then the same checks. */
-    private static void slowRow(String name, LineSource src, List<String> header, int[] slot, ProfileColumn[] ours,
-                                Columns columns, int headerLine) {
-        List<String> cells = cells(name, src.lineNo, decode(name, src));
-        int k = columns.size - 1;
+    private static void slowRow(String name, LineSource src, int[] slot, Columns columns, Delimiter delimiter) {
+        List<String> cells = cells(name, src.lineNo, decode(name, src), delimiter);
         columns.badColumn = -1;
         for (int j = 0; j < cells.size() && j < slot.length; j++) {
             if (slot[j] >= 0) {
-                double v = NumberSyntax.parse(cells.get(j));
-                if (Double.isNaN(v)) {
-                    if (columns.badColumn < 0) {
-                        columns.badColumn = j;
-                    }
-                } else {
-                    columns.v[slot[j]][k] = v;
+                String cell = cells.get(j);
+                byte[] b = cell.getBytes(StandardCharsets.UTF_8);
+                double v = NumberSyntax.parse(b, 0, b.length);
+                if (Math.abs(v) <= Double.MAX_VALUE && v == 0.0 && NumberSyntax.nonZeroDigits(b, 0, b.length)
+                        && columns.underflows++ == 0) {
+                    columns.underflowLine = src.lineNo;
+                    columns.underflowColumn = j;
+                    columns.underflowText = Text.shorten(cell);
+                } else if (!(Math.abs(v) <= Double.MAX_VALUE) && columns.badColumn < 0) {
+                    columns.badColumn = j;
+                }
+                if (Math.abs(v) <= Double.MAX_VALUE) {
+                    columns.v[slot[j]][columns.size - 1] = v;
                 }
             }
         }
@@ -470,7 +603,7 @@ final class ProfileCsvReader {
     }
 
     private static void checkRow(String name, LineSource src, List<String> header, int[] slot, ProfileColumn[] ours,
-                                 Columns columns, int headerLine) {
+                                 Columns columns, int headerLine, Delimiter delimiter) {
         int line = (int) Math.min(Integer.MAX_VALUE, src.lineNo);
         if (columns.cells != header.size()) {
             throw new DataFormatException(name, line, 0, "this row has " + columns.cells + " cells but the header"
@@ -478,11 +611,35 @@ final class ProfileCsvReader {
         }
         int j = columns.badColumn;
         if (j >= 0) {
-            String cell = cells(name, src.lineNo, decode(name, src)).get(j);
-            throw new DataFormatException(name, line, j + 1, "column " + header.get(j) + " (column " + (j + 1)
-                    + "): " + (cell.isEmpty() ? "the cell is empty" : "'" + cell + "' is not a number")
-                    + "; expected a decimal number in " + ours[slot[j]].unit() + ", e.g. 1.5e7");
+            String cell = cells(name, src.lineNo, decode(name, src), delimiter).get(j);
+            String what = "column " + Text.shorten(header.get(j)) + " (column " + (j + 1) + "): ";
+            ProfileColumn c = ours[slot[j]];
+            if (cell.isEmpty()) {
+                throw new DataFormatException(name, line, j + 1, what + "the cell is empty; expected a decimal number in "
+                        + c.unit() + ", e.g. 1.5e7");
+            }
+            double v = NumberSyntax.parse(cell);
+            if (Double.isInfinite(v)) {
+                throw new DataFormatException(name, line, j + 1, what + "'" + Text.shorten(cell) + "' is larger than"
+                        + " the largest double (1.8e308)");
+            }
+            throw new DataFormatException(name, line, j + 1, what + "'" + Text.shorten(cell) + "' is not a number;"
+                    + " expected a decimal number in " + c.unit() + ", e.g. 1.5e7" + numberHint(cell, delimiter));
         }
+    }
+
+    /** Why a cell that looks numeric is not a number of our syntax, and what to write instead. */
+    private static String numberHint(String cell, Delimiter delimiter) {
+        String t = cell.trim();
+        if (t.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)[+-]\\d{3}")) {
+            int sign = Math.max(t.lastIndexOf('+'), t.lastIndexOf('-'));
+            return " (a Fortran number whose exponent lost its letter? write " + t.substring(0, sign) + "E"
+                    + t.substring(sign) + ")";
+        }
+        if (delimiter != Delimiter.COMMA && t.matches("[+-]?\\d+,\\d+([eEdD][+-]?\\d+)?")) {
+            return " (a decimal comma? write " + t.replace(',', '.') + ")";
+        }
+        return "";
     }
 
     private static String decode(String name, LineSource src) {
@@ -496,16 +653,6 @@ final class ProfileCsvReader {
         }
     }
 
-    private static String hint(List<String> header) {
-        for (String h : header) {
-            ProfileColumn c = ColumnMap.ourColumn(h);
-            if (c != null && !c.header().equals(h)) {
-                return " ('" + h + "' looks like " + c.header() + ": --columns " + c.header() + "=" + h + ")";
-            }
-        }
-        return "";
-    }
-
     private static String requiredHeaders() {
         StringBuilder b = new StringBuilder();
         for (ProfileColumn c : ProfileColumn.values()) {
@@ -516,9 +663,19 @@ final class ProfileCsvReader {
         return b.toString();
     }
 
-    private static List<String> cells(String name, long line, String text) {
+    /**
+     * @param text one line
+     * @return its cells, trimmed
+     */
+    static List<String> cells(String name, long line, String text, Delimiter delimiter) {
         int l = (int) Math.min(Integer.MAX_VALUE, line);
-        try (CSVParser parser = CSVParser.parse(text, FORMAT)) {
+        if (delimiter == Delimiter.WHITESPACE) {
+            String t = text.trim();
+            return t.isEmpty() ? List.of("") : List.of(t.split("[ \\t]+"));
+        }
+        CSVFormat format = delimiter == Delimiter.COMMA ? FORMAT
+                : FORMAT.builder().setDelimiter(delimiter.character()).get();
+        try (CSVParser parser = CSVParser.parse(text, format)) {
             List<CSVRecord> records = parser.getRecords();
             if (records.size() != 1) {
                 throw new DataFormatException(name, l, 0, "expected one CSV record on this line");
@@ -531,6 +688,21 @@ final class ProfileCsvReader {
         }
     }
 
+    /** @return the text of cell {@code column} (1-based) on file line {@code line}, or {@code null} */
+    static String cellText(Path file, int line, int column, Delimiter delimiter) {
+        try (LineSource src = new LineSource(file)) {
+            while (src.next()) {
+                if (src.lineNo == line) {
+                    List<String> cells = cells(file.toString(), line, decode(file.toString(), src), delimiter);
+                    return column >= 1 && column <= cells.size() ? cells.get(column - 1) : null;
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            // the file changed or vanished since it was read: no text to quote
+        }
+        return null;
+    }
+
     private static Map<String, Integer> headerPositions(String name, int line, List<String> header) {
         Map<String, Integer> position = new HashMap<>();
         for (int j = 0; j < header.size(); j++) {
@@ -540,8 +712,8 @@ final class ProfileCsvReader {
             }
             Integer earlier = position.putIfAbsent(h, j);
             if (earlier != null) {
-                throw new DataFormatException(name, line, j + 1, "the header names '" + h + "' twice (columns "
-                        + (earlier + 1) + " and " + (j + 1) + ")");
+                throw new DataFormatException(name, line, j + 1, "the header names '" + Text.shorten(h) + "' twice"
+                        + " (columns " + (earlier + 1) + " and " + (j + 1) + ")");
             }
         }
         return position;

@@ -72,6 +72,10 @@ final class SummaryJson {
                 optional(o, "turnover_time_global_days", r.turnoverGlobal(), DAY_S);
                 optional(o, "turnover_time_local_days", r.turnoverLocal(), DAY_S);
                 optional(o, "max_v_conv_cm_s", r.maxVelocity(), 1.0);
+                optional(o, "overshoot_bottom_cm", r.overshootBottom(), 1.0);
+                optional(o, "overshoot_top_cm", r.overshootTop(), 1.0);
+                optional(o, "margin_inside_bottom", r.marginInsideBottom(), 1.0);
+                optional(o, "margin_inside_top", r.marginInsideTop(), 1.0);
                 SeismicSummary.RegionDepths depths = seismic == null ? null : seismic.depthsOf(r);
                 if (depths != null) {
                     number(o, "acoustic_depth_bottom_s", depths.acousticDepthBottom());

@@ -1,5 +1,6 @@
 package io.github.startransport.cli;
 
+import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.OpacityGridSpec;
 import io.github.startransport.spi.OpacityModel;
@@ -33,27 +34,42 @@ final class TableCommand implements Callable<Integer> {
 
     /** How a grid axis is written on the command line: {@code lo:hi:n} or a comma-separated list. */
     static double[] axis(CommandLine cl, String option, String text) {
-        try {
-            String t = text.trim();
-            if (t.contains(":")) {
-                String[] p = t.split(":");
-                if (p.length != 3) {
-                    throw new NumberFormatException("expected lo:hi:n");
-                }
-                int n = Integer.parseInt(p[2].trim());
-                return OpacityGridSpec.evenly(Double.parseDouble(p[0].trim()), Double.parseDouble(p[1].trim()), n);
+        String t = text.trim();
+        String form = " (write lo:hi:n for n evenly spaced values from lo to hi, or a comma-separated list of numbers)";
+        if (t.contains(":")) {
+            String[] p = t.split(":", -1);
+            if (p.length != 3) {
+                throw new CommandLine.ParameterException(cl, option + " '" + Text.shorten(text) + "': expected three"
+                        + " parts lo:hi:n" + form);
             }
-            String[] items = t.split(",");
-            double[] v = new double[items.length];
-            for (int i = 0; i < items.length; i++) {
-                v[i] = Double.parseDouble(items[i].trim());
+            double lo = number(cl, option, text, p[0], "lo", form);
+            double hi = number(cl, option, text, p[1], "hi", form);
+            double n = number(cl, option, text, p[2], "n", form);
+            if (!(n == Math.rint(n) && n >= 2 && n <= Integer.MAX_VALUE)) {
+                throw new CommandLine.ParameterException(cl, option + " '" + Text.shorten(text) + "': n = "
+                        + Text.shorten(p[2].trim()) + " must be a whole number of values, at least 2" + form);
             }
-            return v;
-        } catch (RuntimeException e) {
-            throw new CommandLine.ParameterException(cl, "option " + option + " = '" + text
-                    + "': write lo:hi:n (n evenly spaced values) or a comma-separated list of numbers ("
-                    + e.getMessage() + ")");
+            if (!(hi > lo)) {
+                throw new CommandLine.ParameterException(cl, option + " '" + Text.shorten(text) + "': hi = "
+                        + Text.number(hi) + " must be greater than lo = " + Text.number(lo) + form);
+            }
+            return OpacityGridSpec.evenly(lo, hi, (int) n);
         }
+        String[] items = t.split(",", -1);
+        double[] v = new double[items.length];
+        for (int i = 0; i < items.length; i++) {
+            v[i] = number(cl, option, text, items[i], "item " + (i + 1), form);
+        }
+        return v;
+    }
+
+    private static double number(CommandLine cl, String option, String text, String item, String what, String form) {
+        double v = NumberSyntax.parse(item.trim());
+        if (!Double.isFinite(v)) {
+            throw new CommandLine.ParameterException(cl, option + " '" + Text.shorten(text) + "': " + what + " = '"
+                    + Text.shorten(item.trim()) + "' is not a finite number" + form);
+        }
+        return v;
     }
 
     static void print(PrintStream out, OpacityTableSummary s) {
@@ -74,7 +90,8 @@ final class TableCommand implements Callable<Integer> {
             footer = {"", "Axes: lo:hi:n for n evenly spaced values, or a comma-separated list.",
                 "Example: table build --out kappa.csv --hydrogen 0,0.35,0.7 --metals 0.01,0.02,0.04"
                         + " --log-t 3.5:8.5:101 --log-r -9:1:81", "",
-                "Exit codes: 0 success; 1 the model or the file failed; 2 usage error."})
+                "Exit codes: 0 success; 1 the model or the file failed; 2 usage error (unknown option or model name, a"
+                        + " bad option value such as a grid that is too large)."})
     static final class Build implements Callable<Integer> {
         @Spec
         CommandSpec spec;
@@ -122,10 +139,18 @@ final class TableCommand implements Callable<Integer> {
             } catch (IllegalArgumentException e) {
                 throw new CommandLine.ParameterException(cl, "--model-options: " + e.getMessage());
             }
-            OpacityGridSpec grid = new OpacityGridSpec(axis(cl, "--hydrogen", hydrogen), axis(cl, "--metals", metals),
-                    axis(cl, "--log-t", logT), axis(cl, "--log-r", logR));
+            OpacityGridSpec grid;
+            try {
+                grid = new OpacityGridSpec(axis(cl, "--hydrogen", hydrogen), axis(cl, "--metals", metals),
+                        axis(cl, "--log-t", logT), axis(cl, "--log-r", logR));
+            } catch (InvalidInputException e) {
+                throw new CommandLine.ParameterException(cl, "the grid of --hydrogen, --metals, --log-t and --log-r is"
+                        + " refused: " + e.getMessage());
+            }
             Transport transport = cli.transport();
-            OpacityModel model = transport.opacity(opacity, options);
+            ModelOptions modelOptions = options;
+            OpacityModel model = DiagnosisOptions.asOption("--opacity", opacity == null ? "(default)" : opacity,
+                    () -> transport.opacity(opacity, modelOptions));
             OpacityTableTool tool = transport.opacityTables(null, ModelOptions.defaults());
             OpacityTableSummary summary = tool.build(model, grid, out.toAbsolutePath());
             PrintStream o = cli.out();

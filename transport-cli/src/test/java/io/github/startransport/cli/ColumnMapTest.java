@@ -35,16 +35,16 @@ class ColumnMapTest {
 
     @Test
     void unknownNameOnOurSideIsRefusedByName() {
-        BadInputException e = assertThrows(BadInputException.class, () -> ColumnMap.parse("Temp=temprature"));
+        UsageException e = assertThrows(UsageException.class, () -> ColumnMap.parse("Temp=temprature"));
         assertTrue(e.getMessage().contains("'temprature'"), e.getMessage());
     }
 
     @Test
     void malformedItemsAndDoubleMappingsAreRefused() {
-        assertThrows(BadInputException.class, () -> ColumnMap.parse("temperature"));
-        assertThrows(BadInputException.class, () -> ColumnMap.parse("=temperature,D=density"));
-        assertThrows(BadInputException.class, () -> ColumnMap.parse("A=temperature,B=T_K"));
-        assertThrows(BadInputException.class, () -> ColumnMap.parse("A=temperature,A=density"));
-        assertThrows(BadInputException.class, () -> ColumnMap.parse("A=temperature,"));
+        assertThrows(UsageException.class, () -> ColumnMap.parse("temperature"));
+        assertThrows(UsageException.class, () -> ColumnMap.parse("=temperature,D=density"));
+        assertThrows(UsageException.class, () -> ColumnMap.parse("A=temperature,B=T_K"));
+        assertThrows(UsageException.class, () -> ColumnMap.parse("A=temperature,A=density"));
+        assertThrows(UsageException.class, () -> ColumnMap.parse("A=temperature,"));
     }
 }

@@ -195,6 +195,28 @@ class EndToEndTest {
     }
 
     @Test
+    void overshootOptionsReachTheDiagnosisAndItsOutputs(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("out");
+        Runs r = Runs.run("diagnose", "--demo", "--overshoot-f", "0.016", "--overshoot-f0", "0.004", "--out",
+                out.toString());
+        assertEquals(0, r.code(), r.toString());
+        DiagnosisSetup setup = new DiagnosisSetup(transport.convection(null, ModelOptions.defaults()),
+                transport.opacity(null, ModelOptions.defaults()), transport.thermodynamics(null, ModelOptions.defaults()));
+        ProfileDiagnosis expected = transport.diagnoser(null, ModelOptions.parse("overshoot-f=0.016,overshoot-f0=0.004"))
+                .diagnose(demo(), setup);
+        assertZonesEqual(expected, out);
+        JsonNode regions = summary(out).get("regions");
+        assertEquals(expected.regions().get(0).overshootTop().orElseThrow(),
+                regions.get(0).get("overshoot_top_cm").asDouble());
+        assertTrue(regions.get(0).get("overshoot_bottom_cm").isNull(), regions.toString());
+        assertTrue(zones(out).stream().anyMatch(z -> Double.parseDouble(z.get("D_overshoot_cm2_s")) > 0.0));
+        // without the option the column is all zeros
+        Path plain = dir.resolve("plain");
+        assertEquals(0, Runs.run("diagnose", "--demo", "--out", plain.toString()).code());
+        assertTrue(zones(plain).stream().allMatch(z -> Double.parseDouble(z.get("D_overshoot_cm2_s")) == 0.0));
+    }
+
+    @Test
     void severalProfilesGoEachIntoItsOwnFolderWithAProgressBarOnAConsole(@TempDir Path dir) throws Exception {
         Profile demo = demo();
         Path a = writeProfile(demo, dir.resolve("first.csv"));

@@ -51,6 +51,9 @@ class EnvelopeCommandTest {
         }
         double rb = s.get("cz_base_r_over_R").asDouble();
         assertTrue(rb > 0.5 && rb < 1.0, "r_b/R " + rb);
+        // without --thermodynamics the envelope uses the provider's default equation of state, the partially
+        // ionised gas that the Sun's deep convection zone needs
+        assertEquals("saha-ionising-gas", s.get("thermodynamics_model").asText(), s.toString());
         assertTrue(r.out().contains("base of the surface convection zone: r/R = "), r.out());
         // the profile reads back through the diagnose reader, photosphere on top at R and T_eff
         Profile p = ProfileCsvReader.read(out.resolve(EnvelopeCommand.CSV), ColumnMap.parse(null)).profile();
@@ -80,7 +83,7 @@ class EnvelopeCommandTest {
     }
 
     @Test
-    void badInputExitsOneWithAMessageAndWritesNothing(@TempDir Path dir) {
+    void aBadStarOrAnUnreachableTargetIsBadInputAndWritesNothing(@TempDir Path dir) {
         Path out = dir.resolve("never");
         String[][] bad = {
             {"--luminosity-lsun", "0"},
@@ -108,11 +111,25 @@ class EnvelopeCommandTest {
             all[all.length - 2] = "--out";
             all[all.length - 1] = out.toString();
             Runs r = Runs.run(all);
+            // the rule for this command: a star that cannot exist or an unreachable target exits 1
             assertEquals(1, r.code(), r.toString());
             assertTrue(r.err().contains(field[i]), r.err());
             assertFalse(Files.exists(out), "nothing written for " + String.join(" ", bad[i]));
         }
         assertEquals(2, envelope(out, "--alpha", "1.5", "--calibrate-base", "0.9").code());
+        assertFalse(Files.exists(out));
+        // the alpha interval of a calibration is the user's to choose, and only with --calibrate-base
+        assertEquals(2, envelope(out, "--alpha-low", "0.1").code());
+        assertFalse(Files.exists(out));
+        // a target the chosen alpha interval cannot reach is bad input (exit 1), the range stated
+        Runs narrow = envelope(out, "--calibrate-base", "0.9", "--alpha-low", "0.6", "--alpha-high", "0.7");
+        assertEquals(1, narrow.code(), narrow.toString());
+        assertTrue(narrow.err().contains("alpha from 0.6 to 0.7"), narrow.err());
+        assertFalse(Files.exists(out));
+        // options that do not fit together are usage errors (exit 2)
+        Runs reversed = envelope(out, "--calibrate-base", "0.9", "--alpha-low", "2", "--alpha-high", "1");
+        assertEquals(2, reversed.code(), reversed.toString());
+        assertTrue(reversed.err().contains("alpha-high"), reversed.err());
         assertFalse(Files.exists(out));
     }
 }

@@ -26,6 +26,12 @@ final class HandMadeDiagnosis {
     static final double SEMI_BOTTOM = 0.30;
     static final double SEMI_TOP = 0.36;
     static final double ENVELOPE_BOTTOM = 0.70;
+    /** Where overshoot mixing ends above the core and below the envelope, as r/R. */
+    static final double CORE_OVERSHOOT_TOP = 0.15;
+    static final double ENVELOPE_OVERSHOOT_BOTTOM = 0.66;
+    /** Margins on the convective side of the core's top and the envelope's bottom. */
+    static final double CORE_MARGIN_TOP = 0.3;
+    static final double ENVELOPE_MARGIN_BOTTOM = -0.001;
 
     static final double PHOTON_S = 5.0e12;
     static final double THERMAL_S = 8.0e13;
@@ -95,16 +101,23 @@ final class HandMadeDiagnosis {
             put(c, DiagnosisColumn.NABLA_ELEMENT, k, conv ? 0.4 + 5e-5 : nablaRad);
             put(c, DiagnosisColumn.VELOCITY, k, conv ? 1e4 * (1 + 50 * f * f) : 0.0);
             put(c, DiagnosisColumn.CONVECTIVE_FRACTION, k, conv ? 0.99 - 0.5 * Math.max(0, f - 0.95) : 0.0);
+            boolean overshot = (f > CORE_TOP && f <= CORE_OVERSHOOT_TOP)
+                    || (f >= ENVELOPE_OVERSHOOT_BOTTOM && f < ENVELOPE_BOTTOM);
+            put(c, DiagnosisColumn.OVERSHOOT_DIFFUSION, k, overshot ? 1e8 : 0.0);
             put(c, DiagnosisColumn.DIFFUSION, k, conv ? 1e13 * (1 + 50 * f * f)
-                    : regime == Regime.SEMICONVECTIVE ? 1e3 : 0.0);
+                    : regime == Regime.SEMICONVECTIVE ? 1e3 : overshot ? 1e8 : 0.0);
         }
         List<Region> regions = List.of(
                 region(Regime.CONVECTIVE, 0.0, CORE_TOP, OptionalDouble.of(CORE_TURNOVER_GLOBAL_S),
-                        OptionalDouble.of(CORE_TURNOVER_LOCAL_S), OptionalDouble.of(CORE_MAX_V)),
+                        OptionalDouble.of(CORE_TURNOVER_LOCAL_S), OptionalDouble.of(CORE_MAX_V))
+                        .withEdges(OptionalDouble.empty(), OptionalDouble.of(CORE_OVERSHOOT_TOP * RADIUS),
+                                OptionalDouble.empty(), OptionalDouble.of(CORE_MARGIN_TOP)),
                 region(Regime.SEMICONVECTIVE, SEMI_BOTTOM, SEMI_TOP, OptionalDouble.empty(), OptionalDouble.empty(),
                         OptionalDouble.empty()),
                 region(Regime.CONVECTIVE, ENVELOPE_BOTTOM, 1.0, OptionalDouble.of(ENVELOPE_TURNOVER_GLOBAL_S),
-                        OptionalDouble.of(ENVELOPE_TURNOVER_LOCAL_S), OptionalDouble.of(ENVELOPE_MAX_V)));
+                        OptionalDouble.of(ENVELOPE_TURNOVER_LOCAL_S), OptionalDouble.of(ENVELOPE_MAX_V))
+                        .withEdges(OptionalDouble.of(ENVELOPE_OVERSHOOT_BOTTOM * RADIUS), OptionalDouble.empty(),
+                                OptionalDouble.of(ENVELOPE_MARGIN_BOTTOM), OptionalDouble.empty()));
         return new ProfileDiagnosis("hand-made", Criterion.LEDOUX, 1.7, c, regimes, regions,
                 new Timescales(PHOTON_S, THERMAL_S, KH_S), List.of("invented numbers for testing"));
     }

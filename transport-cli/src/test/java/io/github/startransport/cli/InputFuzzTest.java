@@ -22,7 +22,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /**
  * Garbage for the tool's own readers: profile files and --columns maps. The only allowed outcomes
  * are a whole, valid result or our own refusal with a message (a DataFormatException naming the
- * file, or a BadInputException naming the option); never another exception type.
+ * file, or a UsageException naming the option); never another exception type.
  */
 class InputFuzzTest {
     private static final String HEADER = "r_cm,m_g,T_K,rho_g_cm3,P_dyn_cm2,L_erg_s,X,Z";
@@ -45,7 +45,11 @@ class InputFuzzTest {
     Arbitrary<String> header() {
         return Arbitraries.oneOf(Arbitraries.just(HEADER), Arbitraries.just(HEADER + ",kappa_cm2_g"),
                 Arbitraries.just("r_cm,m_g,T_K"), Arbitraries.strings().ofMaxLength(40),
-                Arbitraries.just(HEADER.replace("T_K", "Temp")));
+                Arbitraries.just(HEADER.replace("T_K", "Temp")),
+                Arbitraries.just("radius,mass,temperature,density,pressure,luminosity,hydrogen,metals"),
+                Arbitraries.just("r,radius,m_g,T_K,rho_g_cm3,P_dyn_cm2,L_erg_s,X,Z"),
+                Arbitraries.just("rad,Mass,logT,Dens,Press,Lum,X,Z"),
+                Arbitraries.just(HEADER.replace(",", ";")));
     }
 
     @Property(tries = 400, seed = "601")
@@ -130,7 +134,7 @@ class InputFuzzTest {
             for (ProfileColumn c : ProfileColumn.values()) {
                 assertTrue(!map.fileHeader(c).isBlank());
             }
-        } catch (BadInputException e) {
+        } catch (UsageException e) {
             Statistics.collect("refused");
             assertTrue(e.getMessage().startsWith("--columns"), e.getMessage());
         } catch (TransportException e) {

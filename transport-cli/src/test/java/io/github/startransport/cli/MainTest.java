@@ -54,7 +54,7 @@ class MainTest {
         assertEquals(0, r.code(), r.toString());
         String help = r.out().replaceAll("\\s+", " ");
         for (String s : List.of("--out", "--alpha", "--criterion", "--convection", "--opacity", "--opacity-table",
-                "--columns", "--demo", "Default: diagnosis", "Default: schwarzschild", "r_cm", "kappa_cm2_g",
+                "--columns", "--demo", "--overshoot-f", "--overshoot-f0", "--overshoot-step", "Default: diagnosis", "Default: schwarzschild", "r_cm", "kappa_cm2_g",
                 "Exit codes")) {
             assertTrue(help.contains(s), "help lacks " + s + ":\n" + r.out());
         }
@@ -74,11 +74,34 @@ class MainTest {
                 new String[] {"diagnose", p.toString(), "--alpha", "many", "--out", out},
                 new String[] {"diagnose", p.toString(), "--opacity", "x", "--opacity-table", p.toString(), "--out", out},
                 new String[] {"diagnose", p.toString(), "--no-such-option", "--out", out},
-                new String[] {"diagnose", "--demo", "--columns", "T=temperature", "--out", out});
+                new String[] {"diagnose", "--demo", "--columns", "T=temperature", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-f", "-0.01", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-f", "0.016", "--overshoot-step", "0.2", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-f0", "0.01", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-f", "0.016", "--overshoot-f0", "1.5", "--out", out},
+                new String[] {"diagnose", p.toString(), "--overshoot-step", "NaN", "--out", out},
+                new String[] {"diagnose", p.toString(), "--columns", "temperature", "--out", out},
+                new String[] {"diagnose", p.toString(), "--columns", "A=temperature,B=T_K", "--out", out},
+                new String[] {"diagnose", p.toString(), "--delimiter", "pipe", "--out", out},
+                new String[] {"diagnose", p.toString(), "--x-axis", "time", "--out", out},
+                new String[] {"diagnose", p.toString(), "--convection", "no-such-model", "--out", out},
+                new String[] {"track", p.toString(), "--ages", "1e9,2e9", "--out", out},
+                new String[] {"track", p.toString(), "--ages", "young", "--out", out},
+                new String[] {"track", p.toString(), "--criterion", "sideways", "--out", out},
+                new String[] {"envelope", "--mass-msun", "1", "--radius-rsun", "1", "--luminosity-lsun", "1",
+                    "--hydrogen", "0.7", "--metals", "0.02", "--alpha", "1.5", "--calibrate-base", "0.7", "--out", out},
+                new String[] {"envelope", "--mass-msun", "1", "--radius-rsun", "1", "--luminosity-lsun", "1",
+                    "--hydrogen", "0.7", "--metals", "0.02", "--opacity", "no-such-model", "--out", out},
+                new String[] {"table", "build", "--out", out, "--log-t", "8.5:3.5:4"},
+                new String[] {"table", "build", "--out", out, "--log-t", "3.5:8.5:4.5"},
+                new String[] {"table", "build", "--out", out, "--hydrogen", "0.7", "--metals", "0.5"},
+                new String[] {"table", "build", "--out", out, "--opacity", "no-such-model"});
         for (String[] args : cases) {
             Runs r = Runs.run(args);
             assertEquals(2, r.code(), String.join(" ", args) + "\n" + r);
             assertFalse(r.err().isBlank(), String.join(" ", args));
+            assertFalse(r.err().contains("Exception") || r.err().contains("\tat "), r.toString());
+            assertFalse(r.err().matches("(?s).*[ =(]\\d+\\.0[ ,;:)].*"), "a whole number printed as x.0: " + r.err());
         }
         assertEquals(List.of(), leftovers(dir, p));
     }
@@ -93,12 +116,18 @@ class MainTest {
     }
 
     @Test
-    void unknownColumnInColumnsOptionExitsOneNamingIt(@TempDir Path dir) throws IOException {
+    void unknownColumnInColumnsOptionIsAUsageErrorNamingIt(@TempDir Path dir) throws IOException {
         Path p = ProfileFiles.valid(dir, "p.csv");
         Runs ours = Runs.run("diagnose", p.toString(), "--columns", "Temp=temprature", "--out",
                 dir.resolve("out").toString());
-        assertRefusedWithNothingWritten(ours, dir, p);
-        assertTrue(ours.err().contains("temprature"), ours.err());
+        assertEquals(2, ours.code(), ours.toString());
+        assertTrue(ours.err().contains("'temprature'"), ours.err());
+        assertEquals(List.of(), leftovers(dir, p));
+    }
+
+    @Test
+    void aColumnsMapNamingAColumnTheFileLacksIsBadInput(@TempDir Path dir) throws IOException {
+        Path p = ProfileFiles.valid(dir, "p.csv");
         Runs theirs = Runs.run("diagnose", p.toString(), "--columns", "Temp=temperature", "--out",
                 dir.resolve("out").toString());
         assertRefusedWithNothingWritten(theirs, dir, p);
@@ -170,12 +199,15 @@ class MainTest {
     }
 
     @Test
-    void unknownModelNameExitsOneNamingItAndWritesNothing(@TempDir Path dir) throws IOException {
+    void unknownModelNameIsAUsageErrorNamingItAndWritesNothing(@TempDir Path dir) throws IOException {
         Path p = ProfileFiles.valid(dir, "p.csv");
-        Runs r = Runs.run("diagnose", p.toString(), "--convection", "no-such-model", "--out",
-                dir.resolve("out").toString());
-        assertRefusedWithNothingWritten(r, dir, p);
-        assertTrue(r.err().contains("no-such-model"), r.err());
+        for (String option : List.of("--convection", "--opacity")) {
+            Runs r = Runs.run("diagnose", p.toString(), option, "no-such-model", "--out",
+                    dir.resolve("out").toString());
+            assertEquals(2, r.code(), r.toString());
+            assertTrue(r.err().contains(option + " no-such-model"), r.err());
+            assertEquals(List.of(), leftovers(dir, p));
+        }
     }
 
     @Test

@@ -37,10 +37,39 @@ class NumberSyntaxTest {
             assertSameAsJdk(ok);
         }
         for (String bad : List.of("", "+", "-", ".", "e5", "1e", "1e+", "1.2.3", "NaN", "Infinity", "-Infinity",
-                "0x1p3", "1.5d", "1.5f", "1,5", " 1", "1 ", "1e5.0", "--1", "\u0661", "1_000", "1.5D+07")) {
+                "0x1p3", "1.5d", "1.5D+", "1.5f", "1,5", " 1", "1 ", "1e5.0", "--1", "\u0661", "1_000", "1.5-100",
+                "1.5De7", "1.5ED7")) {
             assertEquals(Double.NaN, parse(bad), "'" + bad + "' was taken as a number");
         }
         assertEquals(Double.NaN, parse("1".repeat(NumberSyntax.MAX_LENGTH + 1)));
+    }
+
+    /** Fortran's double-precision exponent letter: the same double as the JDK gives for the E form. */
+    private static void assertFortranSameAsJdk(String eForm) {
+        double jdk = Double.parseDouble(eForm);
+        for (String letter : List.of("D", "d")) {
+            String fortran = eForm.replace("e", letter).replace("E", letter);
+            assertEquals(Double.doubleToRawLongBits(jdk), Double.doubleToRawLongBits(parse(fortran)),
+                    fortran + ": JDK (as " + eForm + ") " + jdk + ", ours " + parse(fortran));
+        }
+    }
+
+    @Test
+    void readsFortranDoublePrecisionExponents() {
+        for (String s : List.of("1.5E+07", "1.5e7", "-2.5E-300", "0.1000000000000000E+01", "7E0", ".5E-3",
+                "1e-400", "1e400", "0.15E-100", "123456789012345678901234567890E-10")) {
+            assertFortranSameAsJdk(s);
+        }
+    }
+
+    @Test
+    void aZeroIsToldFromAnUnderflow() {
+        // the independent truth: BigDecimal holds the written number exactly
+        for (String s : List.of("0", "-0.0", "0e5", "0.000D-3", "1e-400", "-2.5d-999", "0.0001e-330", "4.9e-324",
+                "1e-5", "000.000")) {
+            boolean writtenNonZero = new java.math.BigDecimal(s.replace('d', 'e').replace('D', 'e')).signum() != 0;
+            assertEquals(writtenNonZero, NumberSyntax.nonZeroDigits(s), s);
+        }
     }
 
     @Test
@@ -79,5 +108,12 @@ class NumberSyntaxTest {
     @Property(tries = 20000, seed = "13")
     void givesTheSameDoubleAsTheJdk(@ForAll("numbers") String text) {
         assertSameAsJdk(text);
+    }
+
+    @Property(tries = 3000, seed = "29")
+    void fortranExponentsGiveTheSameDoubleAsTheJdksEForm(@ForAll("numbers") String text) {
+        if (text.contains("e") || text.contains("E")) {
+            assertFortranSameAsJdk(text);
+        }
     }
 }

@@ -84,7 +84,7 @@ class ProfileStreamingTest {
     @Test
     void aBadCellFarDownIsPlacedOnItsLineAndColumn(@TempDir Path dir) throws Exception {
         String[][] rows = rows(5000, 9);
-        rows[4321][3] = "1.0D+02";
+        rows[4321][3] = "1.0Q+02";
         StringBuilder b = new StringBuilder("# c\n" + ProfileFiles.HEADER + "\n");
         for (String[] r : rows) {
             b.append(String.join(",", r)).append('\n');
@@ -94,7 +94,7 @@ class ProfileStreamingTest {
                 () -> ProfileCsvReader.read(file, ColumnMap.none()));
         assertEquals(4321 + 3, e.line());
         assertEquals(4, e.column());
-        assertTrue(e.reason().contains("'1.0D+02' is not a number"), e.getMessage());
+        assertTrue(e.reason().contains("'1.0Q+02' is not a number"), e.getMessage());
     }
 
     @Test

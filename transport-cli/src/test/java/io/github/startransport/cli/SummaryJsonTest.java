@@ -76,4 +76,24 @@ class SummaryJsonTest {
         }
         assertEquals(HandMadeDiagnosis.ENVELOPE_MAX_V, regions.get(2).get("max_v_conv_cm_s").asDouble());
     }
+
+    @Test
+    void convectiveRegionsCarryOvershootReachAndEdgeMarginsOrNull(@TempDir Path dir) throws Exception {
+        JsonNode regions = written(dir).get("regions");
+        JsonNode core = regions.get(0);
+        assertTrue(core.get("overshoot_bottom_cm").isNull(), "no edge at the centre: " + core);
+        assertEquals(HandMadeDiagnosis.CORE_OVERSHOOT_TOP * HandMadeDiagnosis.RADIUS,
+                core.get("overshoot_top_cm").asDouble());
+        assertTrue(core.get("margin_inside_bottom").isNull(), core.toString());
+        assertEquals(HandMadeDiagnosis.CORE_MARGIN_TOP, core.get("margin_inside_top").asDouble());
+        JsonNode envelope = regions.get(2);
+        assertEquals(HandMadeDiagnosis.ENVELOPE_OVERSHOOT_BOTTOM * HandMadeDiagnosis.RADIUS,
+                envelope.get("overshoot_bottom_cm").asDouble());
+        assertTrue(envelope.get("overshoot_top_cm").isNull(), "no edge at the surface: " + envelope);
+        assertEquals(HandMadeDiagnosis.ENVELOPE_MARGIN_BOTTOM, envelope.get("margin_inside_bottom").asDouble());
+        for (String key : List.of("overshoot_bottom_cm", "overshoot_top_cm", "margin_inside_bottom",
+                "margin_inside_top")) {
+            assertFalse(regions.get(1).has(key), "semiconvective regions have no " + key);
+        }
+    }
 }

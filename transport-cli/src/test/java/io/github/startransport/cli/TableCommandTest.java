@@ -117,7 +117,7 @@ class TableCommandTest {
         Path file = Files.writeString(dir.resolve("existing.csv"), "precious\n");
         Runs r = Runs.run("table", "build", "--out", file.toString(), "--hydrogen", "0,0.35,0.7", "--metals",
                 "0.01,0.02,0.03", "--log-t", "3:8:2300", "--log-r", "-9:1:2200");
-        assertEquals(1, r.code(), r.toString());
+        assertEquals(2, r.code(), r.toString()); // a bad option value: a usage error
         assertTrue(r.err().contains("45,540,000") && r.err().contains("at most 4,000,000"), r.err());
         assertFalse(r.err().contains("Exception"), r.err());
         assertEquals("precious\n", Files.readString(file));

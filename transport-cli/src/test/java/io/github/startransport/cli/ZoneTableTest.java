@@ -23,6 +23,8 @@ class ZoneTableTest {
             + "v_conv_cm_s,flux_conv_frac,D_mix_cm2_s";
     /** The columns issue 14 adds after them, verbatim. */
     private static final String ISSUE_14_COLUMNS = ",Gamma1,phi,c_s_cm_s,N2_rad2_s2,S1_rad_s";
+    /** The column issue 15 adds at the end, verbatim. */
+    private static final String ISSUE_15_COLUMNS = ",D_overshoot_cm2_s";
 
     @Test
     void headerIsExactlyTheIssuesAndEveryCellReadsBackToTheSameDouble(@TempDir Path dir) throws Exception {
@@ -30,7 +32,7 @@ class ZoneTableTest {
         Path file = dir.resolve("zones.csv");
         ZoneTable.write(d, file);
         List<String> lines = Files.readAllLines(file);
-        assertEquals(ISSUE_HEADER + ISSUE_14_COLUMNS, lines.get(0));
+        assertEquals(ISSUE_HEADER + ISSUE_14_COLUMNS + ISSUE_15_COLUMNS, lines.get(0));
         try (Reader in = Files.newBufferedReader(file);
              CSVParser csv = CSVParser.parse(in, CSVFormat.DEFAULT.builder().setHeader().get())) {
             List<CSVRecord> rows = csv.getRecords();

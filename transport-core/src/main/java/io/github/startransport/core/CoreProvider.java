@@ -1,5 +1,6 @@
 package io.github.startransport.core;
 
+import io.github.startransport.core.convection.EddySpectrumConvection;
 import io.github.startransport.core.convection.LocalMixingLength;
 import io.github.startransport.core.convection.TransparentEddyMixingLength;
 import io.github.startransport.core.envelope.GreyAtmosphereEnvelope;
@@ -41,6 +42,7 @@ public final class CoreProvider implements TransportProvider {
             new Entry(IdealGasRadiation.INFO, IdealGasRadiation::fromOptions),
             new Entry(LocalMixingLength.INFO, LocalMixingLength::fromOptions),
             new Entry(TransparentEddyMixingLength.INFO, TransparentEddyMixingLength::fromOptions),
+            new Entry(EddySpectrumConvection.INFO, EddySpectrumConvection::fromOptions),
             new Entry(AnalyticOpacity.INFO, AnalyticOpacity::fromOptions),
             new Entry(TabulatedOpacity.INFO, TabulatedOpacity::fromOptions),
             new Entry(CsvTableTool.INFO, CsvTableTool::fromOptions),
@@ -61,7 +63,7 @@ public final class CoreProvider implements TransportProvider {
     @Override
     public String description() {
         return "startransport's own physics: stability tests, partially ionised gas (Saha) and ideal gas plus radiation, "
-                + "mixing-length convection, opacities (analytic and tabulated), profile diagnosis, envelope integration, "
+                + "mixing-length and full-spectrum convection, opacities (analytic and tabulated), profile diagnosis, envelope integration, "
                 + "demo star, buoyancy and acoustic frequencies";
     }
 

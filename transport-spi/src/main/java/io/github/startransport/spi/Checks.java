@@ -55,7 +55,7 @@ public final class Checks {
      */
     public static double openInterval(String field, double value, double lo, double hi, String unit, int zone) {
         if (!(value > lo && value < hi)) {
-            throw new InvalidInputException(field, value, unit, zone, "inside (" + lo + ", " + hi + ")");
+            throw new InvalidInputException(field, value, unit, zone, "inside (" + text(lo) + ", " + rounded(hi) + ")");
         }
         return value;
     }
@@ -73,8 +73,29 @@ public final class Checks {
      */
     public static double closedInterval(String field, double value, double lo, double hi, String unit, int zone) {
         if (!(value >= lo && value <= hi)) {
-            throw new InvalidInputException(field, value, unit, zone, "inside [" + lo + ", " + hi + "]");
+            throw new InvalidInputException(field, value, unit, zone, "inside [" + text(lo) + ", " + rounded(hi) + "]");
         }
         return value;
+    }
+
+    /**
+     * A value as a message shows it: a whole number below 10^10 without a decimal point ({@code 4},
+     * not {@code 4.0}), any other value as {@link Double#toString(double)} (every digit it needs).
+     */
+    static String text(double value) {
+        return value == Math.rint(value) && Math.abs(value) < 1e10 ? Long.toString((long) value)
+                : Double.toString(value);
+    }
+
+    /**
+     * A computed bound as a message shows it: rounded to 10 significant digits, so that
+     * {@code 1 - 0.99} reads {@code 0.01}, not {@code 0.010000000000000009}.
+     */
+    static String rounded(double value) {
+        if (!Double.isFinite(value)) {
+            return Double.toString(value);
+        }
+        return new java.math.BigDecimal(value).round(new java.math.MathContext(10)).stripTrailingZeros()
+                .toString().replace('E', 'e').replace("e+", "e");
     }
 }

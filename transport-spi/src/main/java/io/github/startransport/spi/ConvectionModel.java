@@ -87,6 +87,54 @@ public interface ConvectionModel {
     }
 
     /**
+     * Whether this model's length scale is the distance to the nearest edge of the convective region, read
+     * from {@link ZoneState#edgeDistance} (and {@link ZoneColumns#edgeDistance}); a caller must then fill it
+     * (the diagnosis does, from the edges it locates).
+     *
+     * @return true when {@link ZoneState#edgeDistance} is read; the default is false
+     */
+    default boolean needsEdgeDistance() {
+        return false;
+    }
+
+    /**
+     * Solves zones [from, to) like {@link #solveColumns}, with the Jacobian in the zone-major layout
+     * of {@link ZoneMajorJacobian}: zone k's values go to {@code out} (its derivative columns are
+     * left untouched) and its 52 partial derivatives to
+     * {@code jacobian[k * ZoneMajorJacobian.PER_ZONE ...]}, bit for bit what {@link #solve} gives for
+     * {@code in.load(k, state)}.
+     *
+     * <p>The default loops over {@link #solve} (or {@link #solveValues} when {@code jacobian} is
+     * null) with the output's working space and allocates nothing; implementations override it with
+     * a loop over their static kernel.
+     *
+     * @param in       input columns (read only)
+     * @param from     first zone, inclusive
+     * @param to       last zone, exclusive
+     * @param out      output columns: the values of zones [from, to) are overwritten
+     * @param jacobian caller-owned block of at least {@code to * ZoneMajorJacobian.PER_ZONE} doubles,
+     *                 overwritten for zones [from, to); or null for the values only
+     * @throws InvalidInputException naming the zone (column index) of the first bad input, a bad range
+     *                               or a short block; zones before it have been written
+     */
+    default void solveZoneMajor(ZoneColumns in, int from, int to, ConvectionColumns out, double[] jacobian) {
+        in.checkRange(from, to, out.capacity);
+        ZoneMajorJacobian.checkCapacity(jacobian, to);
+        ZoneState zone = out.workZone;
+        ConvectionResult r = out.workResult;
+        for (int k = from; k < to; k++) {
+            in.load(k, zone);
+            if (jacobian != null) {
+                solve(zone, r);
+                ZoneMajorJacobian.store(jacobian, k, r);
+            } else {
+                solveValues(zone, r);
+            }
+            out.store(k, r, false);
+        }
+    }
+
+    /**
      * The efficiency parameter of exponentially decaying overshoot beyond a convective
      * boundary: the velocity scale height is f H_P.
      *

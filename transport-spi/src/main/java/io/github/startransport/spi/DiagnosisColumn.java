@@ -59,7 +59,7 @@ public enum DiagnosisColumn {
     VELOCITY("v_conv_cm_s", "cm s^-1"),
     /** F_conv / F. */
     CONVECTIVE_FRACTION("flux_conv_frac", "1"),
-    /** Mixing diffusion coefficient (cm^2 s^-1). */
+    /** Mixing diffusion coefficient (cm^2 s^-1): the regime's own, or the overshoot coefficient where that is larger. */
     DIFFUSION("D_mix_cm2_s", "cm^2 s^-1"),
     /** Gamma_1 in use: the profile's, or the thermodynamics model's at the zone's rho and T. */
     GAMMA1("Gamma1", "1"),
@@ -70,7 +70,9 @@ public enum DiagnosisColumn {
     /** Buoyancy frequency squared N^2 = (g^2 rho / P) delta (nabla_L - nabla), the actual nabla (rad^2 s^-2). */
     BUOYANCY_SQUARED("N2_rad2_s2", "rad^2 s^-2"),
     /** Lamb frequency of degree l = 1, S_1 = sqrt(2) c_s / r (rad s^-1). */
-    LAMB_L1("S1_rad_s", "rad s^-1");
+    LAMB_L1("S1_rad_s", "rad s^-1"),
+    /** Overshoot mixing coefficient beyond the edges of convective regions (cm^2 s^-1); 0 without overshoot. */
+    OVERSHOOT_DIFFUSION("D_overshoot_cm2_s", "cm^2 s^-1");
 
     private final String header;
     private final String unit;

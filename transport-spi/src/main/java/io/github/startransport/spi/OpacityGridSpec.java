@@ -89,8 +89,12 @@ public record OpacityGridSpec(double[] hydrogen, double[] metals, double[] logT,
      * @return the nodes
      */
     public static double[] evenly(double lo, double hi, int n) {
-        if (n < 2 || !(hi > lo)) {
-            throw new InvalidInputException("n", n, "1", InvalidInputException.NO_ZONE, ">= 2 with hi > lo");
+        if (n < 2) {
+            throw new InvalidInputException("n", n, "1", InvalidInputException.NO_ZONE, "at least 2 (values on the axis)");
+        }
+        if (!(hi > lo)) {
+            throw new InvalidInputException("hi", hi, "1", InvalidInputException.NO_ZONE, "greater than lo = "
+                    + Checks.text(lo));
         }
         double[] a = new double[n];
         for (int k = 0; k < n; k++) {

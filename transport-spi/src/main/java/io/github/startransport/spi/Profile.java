@@ -47,8 +47,9 @@ public final class Profile {
             copy.put(c, values.clone());
         }
         if (n < 3) {
-            throw new InvalidInputException(ProfileColumn.RADIUS.header(), n, "zones", InvalidInputException.NO_ZONE,
-                    "at least 3 zones in " + source);
+            throw new InvalidInputException(ProfileColumn.RADIUS.header(), Math.max(n, 0), "zones",
+                    InvalidInputException.NO_ZONE, "at least 3 (a profile needs at least 3 zones; " + source
+                    + " has " + Math.max(n, 0) + ")");
         }
         this.size = n;
         for (Map.Entry<ProfileColumn, double[]> e : copy.entrySet()) {
@@ -62,7 +63,7 @@ public final class Profile {
         for (int k = 0; k < n; k++) {
             if (x[k] + z[k] > 1.0 + 1e-12) {
                 throw new InvalidInputException(ProfileColumn.METALS.header(), z[k], "1", k,
-                        "at most 1 - X = " + (1.0 - x[k]) + " (" + source + ")");
+                        "at most 1 - X = " + Checks.rounded(1.0 - x[k]) + " (" + source + ")");
             }
         }
         double[] r = copy.get(ProfileColumn.RADIUS);

@@ -45,6 +45,8 @@ public final class ZoneColumns {
     public final double[] hydrogen;
     /** Metal mass fraction Z (dimensionless), in [0, 1], X + Z &lt;= 1. */
     public final double[] metals;
+    /** Distance to the nearest edge of the zone's convective region (cm): see {@link ZoneState#edgeDistance}. */
+    public final double[] edgeDistance;
 
     /**
      * @param capacity number of zones, &gt;= 0
@@ -70,6 +72,7 @@ public final class ZoneColumns {
         java.util.Arrays.fill(phi, 1.0);
         hydrogen = new double[capacity];
         metals = new double[capacity];
+        edgeDistance = new double[capacity];
     }
 
     /**
@@ -95,6 +98,7 @@ public final class ZoneColumns {
         zone.phi = phi[k];
         zone.hydrogen = hydrogen[k];
         zone.metals = metals[k];
+        zone.edgeDistance = edgeDistance[k];
         return zone;
     }
 
@@ -119,6 +123,7 @@ public final class ZoneColumns {
         phi[k] = zone.phi;
         hydrogen[k] = zone.hydrogen;
         metals[k] = zone.metals;
+        edgeDistance[k] = zone.edgeDistance;
     }
 
     /**

@@ -46,6 +46,13 @@ public final class ZoneState {
     public double hydrogen;
     /** Metal mass fraction Z (dimensionless), in [0, 1], X + Z &lt;= 1. */
     public double metals;
+    /**
+     * Distance from the zone to the nearest edge of its convective region (cm), &gt; 0: read only by
+     * convection models whose length scale is that distance ({@link ConvectionModel#needsEdgeDistance()});
+     * 0 (unset) otherwise. Not a {@link ZoneInput}: a model with length scale alpha z reports
+     * d/d alpha, from which d/dz = (alpha / z) d/d alpha.
+     */
+    public double edgeDistance;
 
     /**
      * Copies every field of {@code other} into this instance (no allocation).
@@ -69,6 +76,7 @@ public final class ZoneState {
         phi = other.phi;
         hydrogen = other.hydrogen;
         metals = other.metals;
+        edgeDistance = other.edgeDistance;
         return this;
     }
 
@@ -126,6 +134,6 @@ public final class ZoneState {
                 + " K, rho=" + density + " g/cm^3, P=" + pressure + " dyn/cm^2, L=" + luminosity
                 + " erg/s, kappa=" + opacity + " cm^2/g, c_P=" + cp + " erg/(g K), nabla_ad=" + nablaAd
                 + ", delta=" + delta + ", nabla_mu=" + nablaMu + ", phi=" + phi + ", X=" + hydrogen
-                + ", Z=" + metals + "]";
+                + ", Z=" + metals + ", edge distance=" + edgeDistance + " cm]";
     }
 }

@@ -5,6 +5,7 @@ import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.ZoneColumns;
+import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
 
 /**
@@ -70,6 +71,28 @@ public abstract sealed class MixingLengthModel implements ConvectionModel
     @Override
     public void solveColumns(ZoneColumns in, int from, int to, ConvectionColumns out, boolean jacobian) {
         MixingLengthZone.solveColumns(settings, eddyShape, in, from, to, out, jacobian);
+    }
+
+    /**
+     * The per-zone kernel in a loop (no per-zone dispatch), each zone's Jacobian copied into its
+     * contiguous block: one stream of stores per zone instead of the column layout's 52.
+     */
+    @Override
+    public void solveZoneMajor(ZoneColumns in, int from, int to, ConvectionColumns out, double[] jacobian) {
+        in.checkRange(from, to, out.capacity);
+        ZoneMajorJacobian.checkCapacity(jacobian, to);
+        final ZoneState zone = out.workZone;
+        final ConvectionResult r = out.workResult;
+        final boolean wanted = jacobian != null;
+        for (int k = from; k < to; k++) {
+            MixingLengthZone.solve(in.load(k, zone), settings.alpha(), settings.geometry(), eddyShape,
+                    settings.centreLimit(), settings.criterion(), settings.semiconvection(), settings.thermohaline(),
+                    r, wanted);
+            if (wanted) {
+                ZoneMajorJacobian.store(jacobian, k, r);
+            }
+            out.store(k, r, false);
+        }
     }
 
     @Override

@@ -405,6 +405,13 @@ public final class GreyAtmosphereEnvelope implements EnvelopeIntegrator {
      * @return the envelope
      */
     EnvelopeSolution run(EnvelopeStar star, EnvelopeSetup setup, boolean sample) {
+        if (setup.convection().needsEdgeDistance()) {
+            throw new InvalidOptionException(String.valueOf(setup.convection()), "length scale", null,
+                    "this convection model takes its length from the distance to the nearest edge of the convective"
+                            + " region, which an envelope integrated inward from the photosphere does not know before it"
+                            + " reaches the zone's base; give it a local length instead (eddy-spectrum:"
+                            + " length-scale=scale-height)");
+        }
         double mass = star.mass();
         double radius = star.radius();
         double teff = GreyAtmosphere.effectiveTemperature(star.luminosity(), radius);

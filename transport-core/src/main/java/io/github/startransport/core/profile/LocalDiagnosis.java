@@ -1,6 +1,7 @@
 package io.github.startransport.core.profile;
 
 import io.github.startransport.core.constants.Codata2018;
+import io.github.startransport.core.convection.OvershootMixing;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.gradient.LedouxGradient;
 import io.github.startransport.core.seismic.AsymptoticIntegrals;
@@ -13,6 +14,8 @@ import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.DiagnosisColumn;
 import io.github.startransport.spi.DiagnosisSetup;
 import io.github.startransport.spi.InvalidInputException;
+import io.github.startransport.spi.InvalidOptionException;
+import io.github.startransport.spi.OptionInfo;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
@@ -67,25 +70,86 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
     /** Below this temperature (K) a fully ionised equation of state is not to be trusted. */
     public static final double PARTIAL_IONISATION_T = 1e5;
 
-    /** Describes this model (it takes no options). */
+    /** Option: f of exponential overshoot applied in the diagnosis; 0 (the default) applies none. */
+    public static final String OVERSHOOT_F = "overshoot-f";
+    /** Option: f0, where D_0 of overshoot is taken, in units of H inside the edge. */
+    public static final String OVERSHOOT_F0 = "overshoot-f0";
+    /** Option: alpha_ov of step overshoot, in units of H; 0 (the default) applies none. */
+    public static final String OVERSHOOT_STEP = "overshoot-step";
+    /** Option: the coefficient below which overshoot mixing ends (cm^2 s^-1). */
+    public static final String OVERSHOOT_FLOOR = "overshoot-floor";
+
+    /** Describes this model and its options (overshoot, off by default). */
     public static final ModelInfo INFO = new ModelInfo(ModelFamily.DIAGNOSIS, NAME,
             "zone-by-zone diagnosis with local models: gradients, regime, convection, mixing; regions with "
-                    + "boundaries interpolated between zones; photon, thermal and Kelvin-Helmholtz timescales; "
-                    + "convective turnover times", List.of());
+                    + "boundaries interpolated between zones and their self-consistency (Gabriel et al. 2014); "
+                    + "overshoot mixing at the edges of convective regions (off by default); photon, thermal and "
+                    + "Kelvin-Helmholtz timescales; convective turnover times",
+            List.of(new OptionInfo(OVERSHOOT_F, "0", "1",
+                            "f of exponential diffusive overshoot, D = D_0 exp(-2|r - r_0|/(f H)) (Freytag, Ludwig & "
+                                    + "Steffen 1996; Herwig 2000); 0: none"),
+                    new OptionInfo(OVERSHOOT_F0, Double.toString(OvershootMixing.DEFAULT_F0), "1",
+                            "D_0 is taken f0 H inside each convective edge, where the exponential starts "
+                                    + "(Pedersen et al. 2018 use 0.005)"),
+                    new OptionInfo(OVERSHOOT_STEP, "0", "1",
+                            "alpha_ov of step overshoot: D = D_0 up to alpha_ov H beyond each edge, nabla left "
+                                    + "radiative; 0: none; not together with overshoot-f"),
+                    new OptionInfo(OVERSHOOT_FLOOR, Double.toString(OvershootMixing.DEFAULT_FLOOR), "cm^2 s^-1",
+                            "overshoot mixing ends where its coefficient falls below this")));
 
-    /** The one instance: the model has no parameters. */
-    public static final LocalDiagnosis INSTANCE = new LocalDiagnosis();
+    /** The diagnosis with every option at its default (no overshoot). */
+    public static final LocalDiagnosis INSTANCE = new LocalDiagnosis(0.0, OvershootMixing.DEFAULT_F0, 0.0,
+            OvershootMixing.DEFAULT_FLOOR);
 
-    private LocalDiagnosis() {
+    /** f of exponential overshoot (dimensionless). */
+    private final double overshootF;
+    /** f0 (dimensionless). */
+    private final double overshootF0;
+    /** alpha_ov of step overshoot (dimensionless). */
+    private final double overshootStep;
+    /** Floor of the overshoot coefficient (cm^2 s^-1). */
+    private final double overshootFloor;
+
+    private LocalDiagnosis(double overshootF, double overshootF0, double overshootStep, double overshootFloor) {
+        OvershootMixing.checkSettings(overshootF, overshootF0, overshootStep, overshootFloor);
+        this.overshootF = overshootF;
+        this.overshootF0 = overshootF0;
+        this.overshootStep = overshootStep;
+        this.overshootFloor = overshootFloor;
     }
 
     /**
-     * @param options must be empty
+     * @param options {@value #OVERSHOOT_F}, {@value #OVERSHOOT_F0}, {@value #OVERSHOOT_STEP},
+     *                {@value #OVERSHOOT_FLOOR} (see {@link #INFO})
      * @return the model
+     * @throws InvalidOptionException for an unknown option or a value out of range
      */
     public static LocalDiagnosis fromOptions(ModelOptions options) {
         options.requireKnown(NAME, INFO.optionNames());
-        return INSTANCE;
+        double f = options.getDouble(NAME, OVERSHOOT_F, 0.0);
+        double f0 = options.getDouble(NAME, OVERSHOOT_F0, OvershootMixing.DEFAULT_F0);
+        double step = options.getDouble(NAME, OVERSHOOT_STEP, 0.0);
+        double floor = options.getDouble(NAME, OVERSHOOT_FLOOR, OvershootMixing.DEFAULT_FLOOR);
+        try {
+            return new LocalDiagnosis(f, f0, step, floor);
+        } catch (InvalidInputException e) {
+            throw new InvalidOptionException(NAME, e.field(), Double.toString(e.value()), e.requirement());
+        }
+    }
+
+    /** @return whether this diagnosis applies overshoot (f &gt; 0 or alpha_ov &gt; 0) */
+    public boolean appliesOvershoot() {
+        return overshootF > 0.0 || overshootStep > 0.0;
+    }
+
+    /**
+     * Overshoot with this diagnosis's settings: see {@link OvershootMixing#profile}.
+     */
+    @Override
+    public void overshoot(double[] radius, double[] scaleHeight, double[] diffusion, double[] regionBottom,
+                          double[] regionTop, double[] overshoot, double[] reachBottom, double[] reachTop) {
+        OvershootMixing.profile(radius, scaleHeight, diffusion, regionBottom, regionTop, overshootF, overshootF0,
+                overshootStep, overshootFloor, overshoot, reachBottom, reachTop);
     }
 
     @Override
@@ -122,10 +186,14 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
             nablaMu = ColumnSharing.read(p, ProfileColumn.NABLA_MU);
         } else {
             for (int k = 1; k < n; k++) {
-                if (!(pres[k] < pres[k - 1])) {
+                // nabla_mu = d ln mu / d ln P needs P to fall where mu changes; it may stay equal where X and Z do
+                boolean sameComposition = x[k] == x[k - 1] && z[k] == z[k - 1];
+                if (!(pres[k] < pres[k - 1] || pres[k] == pres[k - 1] && sameComposition)) {
                     throw new InvalidInputException(ProfileColumn.PRESSURE.header(), pres[k], ProfileColumn.PRESSURE.unit(),
-                            zoneAsGiven(p, k), "decreasing outwards to compute nabla_mu from the composition (zone before it: "
-                            + pres[k - 1] + "); give a nabla_mu column instead (" + p.source() + ")");
+                            zoneAsGiven(p, k), (sameComposition ? "equal to or below the pressure of the zone inside it"
+                            : "below the pressure of the zone inside it, which has another X or Z,")
+                            + " to compute nabla_mu from the composition (zone before it: " + pres[k - 1]
+                            + "); give a nabla_mu column instead (" + p.source() + ")");
                 }
             }
             nablaMu = new double[n];
@@ -158,69 +226,87 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         OpacityResult opacity = new OpacityResult();
         ConvectionResult conv = new ConvectionResult();
         int cool = 0;
-        for (int k = 0; k < n; k++) {
-            zone.zone = zoneAsGiven(p, k);
-            zone.radius = r[k];
-            zone.mass = m[k];
-            zone.temperature = t[k];
-            zone.density = rho[k];
-            zone.pressure = pres[k];
-            zone.luminosity = lum[k];
-            zone.hydrogen = x[k];
-            zone.metals = z[k];
-            if (useThermo) {
-                setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone.zone, thermo);
-                if (!hasThermo) {
-                    if (!p.has(ProfileColumn.NABLA_AD)) {
-                        nablaAd[k] = thermo.nablaAd;
+        // a convection model whose length scale is the distance to the nearest edge needs the edges first: a
+        // first pass fills every zone's inputs, EdgeDistances classifies them and locates the edges, and the
+        // second pass solves with the distances (one pass, filling and solving, for every other model)
+        final boolean deferred = convection.needsEdgeDistance();
+        double[] edgeDistance = null;
+        for (int pass = deferred ? 0 : 1; pass <= 1; pass++) {
+            for (int k = 0; k < n; k++) {
+                zone.zone = zoneAsGiven(p, k);
+                zone.radius = r[k];
+                zone.mass = m[k];
+                zone.temperature = t[k];
+                zone.density = rho[k];
+                zone.pressure = pres[k];
+                zone.luminosity = lum[k];
+                zone.hydrogen = x[k];
+                zone.metals = z[k];
+                if (pass == 0 || !deferred) {
+                    if (useThermo) {
+                        setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone.zone, thermo);
+                        if (!hasThermo) {
+                            if (!p.has(ProfileColumn.NABLA_AD)) {
+                                nablaAd[k] = thermo.nablaAd;
+                            }
+                            if (!p.has(ProfileColumn.CP)) {
+                                cp[k] = thermo.cp;
+                            }
+                            if (!p.has(ProfileColumn.DELTA)) {
+                                delta[k] = thermo.delta;
+                            }
+                            if (t[k] < PARTIAL_IONISATION_T) {
+                                cool++;
+                            }
+                        }
+                        if (!hasGamma1) {
+                            gamma1[k] = thermo.gamma1;
+                        }
+                        if (!hasPhi) {
+                            phi[k] = thermo.phi;
+                        }
+                        thermoChecks.add(thermo, pres[k]);
                     }
-                    if (!p.has(ProfileColumn.CP)) {
-                        cp[k] = thermo.cp;
-                    }
-                    if (!p.has(ProfileColumn.DELTA)) {
-                        delta[k] = thermo.delta;
-                    }
-                    if (t[k] < PARTIAL_IONISATION_T) {
-                        cool++;
+                    if (!hasKappa) {
+                        setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone.zone, opacity);
+                        kappa[k] = opacity.kappa;
                     }
                 }
-                if (!hasGamma1) {
-                    gamma1[k] = thermo.gamma1;
+                if (pass == 0) {
+                    continue;
                 }
-                if (!hasPhi) {
-                    phi[k] = thermo.phi;
+                if (edgeDistance != null) {
+                    zone.edgeDistance = edgeDistance[k];
                 }
-                thermoChecks.add(thermo, pres[k]);
+                zone.opacity = kappa[k];
+                zone.nablaAd = nablaAd[k];
+                zone.cp = cp[k];
+                zone.delta = delta[k];
+                zone.phi = phi[k];
+                zone.nablaMu = nablaMu[k];
+                convection.solve(zone, conv);
+                g[k] = Codata2018.GRAVITATIONAL_CONSTANT * m[k] / (r[k] * r[k]);
+                hp[k] = pres[k] / (rho[k] * g[k]);
+                nablaRad[k] = conv.nablaRad;
+                nablaL[k] = LedouxGradient.value(nablaAd[k], phi[k], delta[k], nablaMu[k]);
+                nabla[k] = conv.nabla;
+                nablaE[k] = conv.nablaElement;
+                v[k] = conv.velocity;
+                fconv[k] = conv.convectiveFraction;
+                dmix[k] = conv.diffusion;
+                ell[k] = conv.mixingLength;
+                regimes[k] = conv.regime;
+                soundSpeed[k] = LocalFrequencies.soundSpeed(gamma1[k], pres[k], rho[k]);
+                n2[k] = LocalFrequencies.buoyancySquared(r[k], m[k], rho[k], pres[k], delta[k], nablaAd[k], phi[k],
+                        nablaMu[k], nabla[k]);
+                lamb1[k] = LocalFrequencies.lamb(1, soundSpeed[k], r[k]);
+                marginS[k] = nablaRad[k] - nablaAd[k];
+                marginL[k] = nablaRad[k] - nablaL[k];
+                marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
             }
-            if (!hasKappa) {
-                setup.opacity().evaluate(t[k], rho[k], x[k], z[k], zone.zone, opacity);
-                kappa[k] = opacity.kappa;
+            if (pass == 0) {
+                edgeDistance = EdgeDistances.of(criterion, r, m, t, pres, lum, kappa, nablaAd, delta, phi, nablaMu);
             }
-            zone.opacity = kappa[k];
-            zone.nablaAd = nablaAd[k];
-            zone.cp = cp[k];
-            zone.delta = delta[k];
-            zone.phi = phi[k];
-            zone.nablaMu = nablaMu[k];
-            convection.solve(zone, conv);
-            g[k] = Codata2018.GRAVITATIONAL_CONSTANT * m[k] / (r[k] * r[k]);
-            hp[k] = pres[k] / (rho[k] * g[k]);
-            nablaRad[k] = conv.nablaRad;
-            nablaL[k] = LedouxGradient.value(nablaAd[k], phi[k], delta[k], nablaMu[k]);
-            nabla[k] = conv.nabla;
-            nablaE[k] = conv.nablaElement;
-            v[k] = conv.velocity;
-            fconv[k] = conv.convectiveFraction;
-            dmix[k] = conv.diffusion;
-            ell[k] = conv.mixingLength;
-            regimes[k] = conv.regime;
-            soundSpeed[k] = LocalFrequencies.soundSpeed(gamma1[k], pres[k], rho[k]);
-            n2[k] = LocalFrequencies.buoyancySquared(r[k], m[k], rho[k], pres[k], delta[k], nablaAd[k], phi[k],
-                    nablaMu[k], nabla[k]);
-            lamb1[k] = LocalFrequencies.lamb(1, soundSpeed[k], r[k]);
-            marginS[k] = nablaRad[k] - nablaAd[k];
-            marginL[k] = nablaRad[k] - nablaL[k];
-            marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
         }
         if (!hasThermo) {
             boolean fullyIonised = IdealGasRadiation.NAME.equals(setup.thermodynamics().toString());
@@ -274,6 +360,12 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         warnings.addAll(ModelConsistency.warnings(mismatch, regimes, k -> zoneAsGiven(p, k)));
 
         List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, marginC, nablaMu);
+        double[] dov = computed(out, DiagnosisColumn.OVERSHOOT_DIFFUSION, n);
+        regions = edges(r, hp, nablaAd, marginC, dmix, dov, regions, criterion, warnings);
+        if (!(lum[n - 1] > 0.0)) {
+            warnings.add("the surface luminosity is L = " + lum[n - 1] + " erg/s, not > 0: the Kelvin-Helmholtz time"
+                    + " G M^2 / (R L) is undefined there and is not reported");
+        }
         Timescales times = new Timescales(
                 Timescale.photonDiffusion(r, kappa, rho),
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
@@ -359,6 +451,75 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
     public static final double PRESSURE_IONISATION_LIMIT = 0.01;
     /** Count zones where the thermodynamics model's P differs from the profile's by more than this. */
     public static final double PRESSURE_MISMATCH_LIMIT = 0.01;
+    /**
+     * The edges of the convective regions: overshoot (when this diagnosis applies it) into {@code dov}, with
+     * D_mix raised to it where it is larger; each edge's margin on the convective side
+     * ({@link BoundaryMargins}), with a warning where it is not ~0. Returns the regions with both recorded.
+     */
+    private List<Region> edges(double[] r, double[] hp, double[] nablaAd, double[] marginC, double[] dmix,
+                               double[] dov, List<Region> regions, Criterion criterion, List<String> warnings) {
+        int n = r.length;
+        List<Region> convective = regions.stream().filter(g -> g.regime() == Regime.CONVECTIVE).toList();
+        int count = convective.size();
+        double[] bottoms = new double[count];
+        double[] tops = new double[count];
+        for (int i = 0; i < count; i++) {
+            bottoms[i] = convective.get(i).bottomRadius();
+            tops[i] = convective.get(i).topRadius();
+        }
+        double[] reachBottom = new double[count];
+        double[] reachTop = new double[count];
+        overshoot(r, hp, dmix, bottoms, tops, dov, reachBottom, reachTop);
+        for (int k = 0; k < n; k++) {
+            dmix[k] = Math.max(dmix[k], dov[k]);
+        }
+        double radius = r[n - 1];
+        List<Region> result = new ArrayList<>(regions.size());
+        int i = 0;
+        for (Region g : regions) {
+            if (g.regime() != Regime.CONVECTIVE) {
+                result.add(g);
+                continue;
+            }
+            int first = g.firstZone();
+            int last = g.lastZone();
+            OptionalDouble bottom = OptionalDouble.empty();
+            OptionalDouble top = OptionalDouble.empty();
+            if (first > 0) {
+                double at = BoundaryMargins.inside(r, marginC, nablaAd, first, first < last ? first + 1 : -1,
+                        g.bottomRadius());
+                bottom = OptionalDouble.of(at);
+                misplaced(warnings, g, "bottom", at, radius, criterion);
+            }
+            if (last < n - 1) {
+                double at = BoundaryMargins.inside(r, marginC, nablaAd, last, last > first ? last - 1 : -1,
+                        g.topRadius());
+                top = OptionalDouble.of(at);
+                misplaced(warnings, g, "top", at, radius, criterion);
+            }
+            result.add(g.withEdges(present(reachBottom[i]), present(reachTop[i]), bottom, top));
+            i++;
+        }
+        return result;
+    }
+
+    private static OptionalDouble present(double value) {
+        return Double.isNaN(value) ? OptionalDouble.empty() : OptionalDouble.of(value);
+    }
+
+    private static void misplaced(List<String> warnings, Region g, String side, double margin, double radius,
+                                  Criterion criterion) {
+        if (!(Math.abs(margin) > BoundaryMargins.MISPLACED)) {
+            return;
+        }
+        boolean grow = margin > 0.0;
+        warnings.add(String.format(java.util.Locale.ROOT, "the %s edge of the convective region at r/R %.4f - %.4f"
+                        + " is not self-consistent (Gabriel et al. 2014): the %s criterion's margin on its convective"
+                        + " side, (nabla_rad - nabla_crit)/nabla_ad extrapolated to the edge, is %+.3g, not ~0"
+                        + " (|margin| > %.2g); a host should move the edge %s until the margin vanishes there",
+                side, g.bottomRadius() / radius, g.topRadius() / radius, criterion.label(), margin,
+                BoundaryMargins.MISPLACED, grow == side.equals("top") ? "outwards" : "inwards"));
+    }
 
     private static int zoneAsGiven(Profile p, int k) {
         return p.wasReversed() ? p.size() - 1 - k : k;
@@ -490,6 +651,10 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
 
     @Override
     public String toString() {
-        return NAME;
+        if (!appliesOvershoot()) {
+            return NAME;
+        }
+        return NAME + "(" + (overshootF > 0.0 ? OVERSHOOT_F + "=" + overshootF : OVERSHOOT_STEP + "=" + overshootStep)
+                + ", " + OVERSHOOT_F0 + "=" + overshootF0 + ", " + OVERSHOOT_FLOOR + "=" + overshootFloor + ")";
     }
 }

@@ -77,14 +77,19 @@ public final class Timescale {
 
     /**
      * Kelvin-Helmholtz time t_KH = G M^2 / (R L) (Kippenhahn, Weigert &amp; Weiss 2012 eq. 3.18,
-     * from memory; about 3e7 yr for the Sun).
+     * from memory; about 3e7 yr for the Sun): the time the star's gravitational energy lasts at its
+     * luminosity. It has no meaning for L &lt;= 0 (a star that loses no energy at its surface: the
+     * formula would give a negative or infinite time), so it is NaN there.
      *
      * @param mass       M (g)
      * @param radius     R (cm)
-     * @param luminosity L (erg s^-1)
-     * @return t_KH (s)
+     * @param luminosity L at the surface (erg s^-1)
+     * @return t_KH (s), or NaN when {@code luminosity} is not &gt; 0
      */
     public static double kelvinHelmholtz(double mass, double radius, double luminosity) {
+        if (!(luminosity > 0.0)) {
+            return Double.NaN;
+        }
         return Codata2018.GRAVITATIONAL_CONSTANT * mass * mass / (radius * luminosity);
     }
 

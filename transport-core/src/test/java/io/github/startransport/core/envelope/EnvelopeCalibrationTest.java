@@ -1,6 +1,9 @@
 package io.github.startransport.core.envelope;
 
 import io.github.startransport.core.constants.Iau2015;
+import io.github.startransport.core.convection.EddySpectrumConvection;
+import io.github.startransport.core.opacity.AnalyticOpacity;
+import io.github.startransport.core.thermo.IonisingGas;
 import io.github.startransport.spi.AlphaCalibration;
 import io.github.startransport.spi.CalibrationStep;
 import io.github.startransport.spi.EnvelopeSetup;
@@ -106,5 +109,14 @@ class EnvelopeCalibrationTest {
                 () -> GreyAtmosphereEnvelope.fromOptions(ModelOptions.parse("alpha-low=3,alpha-high=2")));
         assertThrows(InvalidOptionException.class,
                 () -> GreyAtmosphereEnvelope.fromOptions(ModelOptions.parse("depth=3")));
+        // a length taken from the distance to the zone's edges is not known while integrating from the surface
+        EnvelopeSetup edges = new EnvelopeSetup(
+                EddySpectrumConvection.fromOptions(ModelOptions.parse("length-scale=edge-distance")),
+                AnalyticOpacity.DEFAULT, IonisingGas.INSTANCE);
+        InvalidOptionException e = assertThrows(InvalidOptionException.class,
+                () -> GreyAtmosphereEnvelope.DEFAULT.integrate(Stars.sun(), edges));
+        assertTrue(e.getMessage().contains("length-scale=scale-height"), e.getMessage());
+        assertThrows(InvalidOptionException.class,
+                () -> GreyAtmosphereEnvelope.DEFAULT.calibrate(Stars.sun(), edges, 0.713, null));
     }
 }

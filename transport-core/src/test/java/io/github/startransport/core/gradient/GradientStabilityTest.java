@@ -1,5 +1,7 @@
 package io.github.startransport.core.gradient;
 
+import io.github.startransport.core.convection.EddySpectrumConvection;
+import io.github.startransport.core.convection.LengthScale;
 import io.github.startransport.core.convection.LocalMixingLength;
 import io.github.startransport.core.convection.MixingLengthGeometry;
 import io.github.startransport.core.convection.TransparentEddyMixingLength;
@@ -156,6 +158,18 @@ class GradientStabilityTest {
                 ConvectionResult out = new ConvectionResult();
                 model.solve(z, out);
                 assertEquals(expected, out.regime, row + ": " + model);
+                assertEquals(expected == Regime.CONVECTIVE, out.velocity > 0.0, row + ": " + out);
+                assertEquals(expected != Regime.RADIATIVE, out.diffusion > 0.0, row + ": " + out);
+            }
+            // the full-spectrum model too, except that a zone convective through its composition alone
+            // (nabla_rad <= nabla_ad) has no full-spectrum solution and is refused
+            ConvectionModel spectrum = new EddySpectrumConvection(1.0, c, LengthScale.SCALE_HEIGHT);
+            ConvectionResult out = new ConvectionResult();
+            if (expected == Regime.CONVECTIVE && nablaRad <= 0.4) {
+                assertThrows(InvalidInputException.class, () -> spectrum.solve(z, out), row);
+            } else {
+                spectrum.solve(z, out);
+                assertEquals(expected, out.regime, row + ": " + spectrum);
                 assertEquals(expected == Regime.CONVECTIVE, out.velocity > 0.0, row + ": " + out);
                 assertEquals(expected != Regime.RADIATIVE, out.diffusion > 0.0, row + ": " + out);
             }

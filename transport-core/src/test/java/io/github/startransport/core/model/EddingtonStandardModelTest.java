@@ -2,7 +2,14 @@ package io.github.startransport.core.model;
 
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.constants.Iau2015;
+import io.github.startransport.core.profile.LocalDiagnosis;
+import io.github.startransport.spi.DiagnosisColumn;
+import io.github.startransport.spi.DiagnosisSetup;
+import io.github.startransport.spi.EnvelopeSetup;
 import io.github.startransport.spi.ModelOptions;
+import io.github.startransport.spi.ProfileDiagnosis;
+import io.github.startransport.spi.Region;
+import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
 import org.junit.jupiter.api.Test;
@@ -80,5 +87,34 @@ class EddingtonStandardModelTest {
                 assertEquals(1.0, here / before, 0.25, c.header() + " slope at r/R = " + rk);
             }
         }
+    }
+
+    /**
+     * The demo star's surface convection zone comes from the ionisation of hydrogen (and helium), where
+     * nabla_ad falls to ~0.1 (Kippenhahn, Weigert &amp; Weiss 2012, ch. 14, the nabla_ad figure [from memory]):
+     * diagnosed with the models its envelope was integrated with, the outermost region is convective, reaches
+     * the photosphere and holds the zone where nabla_ad is smallest, a hydrogen-ionisation value below 0.15
+     * between 8e3 and 3e4 K.
+     */
+    @Test
+    void demoStarsSurfaceConvectionHoldsTheHydrogenIonisationDip() {
+        Profile p = DemoStar.fromOptions(ModelOptions.parse("zones=400")).profile();
+        EnvelopeSetup models = DemoSurface.models();
+        ProfileDiagnosis d = LocalDiagnosis.INSTANCE.diagnose(p,
+                new DiagnosisSetup(models.convection(), models.opacity(), models.thermodynamics()));
+        int dip = 0;
+        for (int k = 1; k < d.size(); k++) {
+            if (d.value(DiagnosisColumn.NABLA_AD, k) < d.value(DiagnosisColumn.NABLA_AD, dip)) {
+                dip = k;
+            }
+        }
+        double t = d.value(DiagnosisColumn.TEMPERATURE, dip);
+        assertTrue(d.value(DiagnosisColumn.NABLA_AD, dip) < 0.15 && t > 8e3 && t < 3e4,
+                "nabla_ad " + d.value(DiagnosisColumn.NABLA_AD, dip) + " at " + t + " K");
+        Region surface = d.regions().get(d.regions().size() - 1);
+        assertEquals(Regime.CONVECTIVE, surface.regime(), surface.toString());
+        assertEquals(1.0, surface.topRadiusFraction(), 1e-12, surface.toString());
+        assertTrue(dip >= surface.firstZone() && dip <= surface.lastZone(),
+                "zone " + dip + " in " + surface.firstZone() + "-" + surface.lastZone());
     }
 }

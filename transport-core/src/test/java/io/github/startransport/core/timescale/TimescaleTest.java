@@ -5,6 +5,7 @@ import io.github.startransport.core.constants.Iau2015;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 class TimescaleTest {
 
@@ -111,5 +112,15 @@ class TimescaleTest {
         double topMass = 2.0e32;
         double mean = 1e3 * (topMass / 2) / 1e32;
         assertEquals(4e10 / mean, Timescale.turnoverCore(m, v, 19, 4e10, topMass), 1e-9 * 4e10 / mean);
+    }
+
+    @Test
+    void kelvinHelmholtzTimeIsUndefinedWhereTheStarLosesNoEnergy() {
+        // t_KH = G M^2 / (R L) is the time the star's gravitational energy lasts at its luminosity
+        // (Kippenhahn, Weigert & Weiss 2012 eq. 3.18, from memory): no such time for L <= 0
+        for (double l : new double[] {0.0, -0.0, -Iau2015.SOLAR_LUMINOSITY, Double.NaN}) {
+            assertTrue(Double.isNaN(Timescale.kelvinHelmholtz(Iau2015.SOLAR_MASS, Iau2015.SOLAR_RADIUS, l)), "L = " + l);
+        }
+        assertTrue(Timescale.kelvinHelmholtz(Iau2015.SOLAR_MASS, Iau2015.SOLAR_RADIUS, 1e-30) > 0);
     }
 }
