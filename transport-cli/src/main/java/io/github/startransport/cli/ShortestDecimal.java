@@ -33,14 +33,19 @@ final class ShortestDecimal {
     /** Digits of the scaled significand. */
     private static final int H = 17;
     private static final long MASK_63 = (1L << 63) - 1;
-    private static final int MASK_28 = (1 << 28) - 1;
     /** ceil(2^84 / 10^8): multiplyHigh(f, this) >>> 20 is f / 10^8 for f &lt; 10^17. */
     private static final long INV_1E8 = 193_428_131_138_340_668L;
     private static final long[] POW10 = new long[H + 1];
+    /** "00", "01", ..., "99" as ASCII. */
+    private static final byte[] PAIRS = new byte[200];
     /** g of 10^-k, k = K_MIN..K_MAX, at 2 (k - K_MIN): high 63 bits and low 63 bits. */
     private static final long[] G = new long[2 * (K_MAX - K_MIN + 1)];
 
     static {
+        for (int p = 0; p < 100; p++) {
+            PAIRS[2 * p] = (byte) ('0' + p / 10);
+            PAIRS[2 * p + 1] = (byte) ('0' + p % 10);
+        }
         POW10[0] = 1;
         for (int i = 1; i <= H; i++) {
             POW10[i] = 10 * POW10[i - 1];
@@ -192,22 +197,13 @@ final class ShortestDecimal {
         int m = (int) (hm - 100_000_000L * hd);       // the 8 after it
         int i = at;
         if (0 < e && e <= 7) {
-            // plain, without leading zeros: e digits before the point
-            out[i++] = (byte) ('0' + hd);
-            int y = scaled(m);
-            int d = 1;
-            for (; d < e; d++) {
-                int tt = 10 * y;
-                out[i++] = (byte) ('0' + (tt >>> 28));
-                y = tt & MASK_28;
-            }
-            out[i++] = '.';
-            for (; d <= 8; d++) {
-                int tt = 10 * y;
-                out[i++] = (byte) ('0' + (tt >>> 28));
-                y = tt & MASK_28;
-            }
-            return lowDigits(l, out, i);
+            // plain, without leading zeros: e digits before the point; the first nine digits written, those
+            // after the first e moved one place on for the point
+            out[i] = (byte) ('0' + hd);
+            eightDigits(m, out, i + 1);
+            System.arraycopy(out, i + e, out, i + e + 1, 9 - e);
+            out[i + e] = '.';
+            return lowDigits(l, out, i + 10);
         }
         if (-3 < e && e <= 0) {
             // plain, with leading zeros
@@ -234,13 +230,11 @@ final class ShortestDecimal {
             int d = x * 1_311 >>> 17;                  // x / 100
             out[i++] = (byte) ('0' + d);
             x -= 100 * d;
-            int d10 = x * 103 >>> 10;                  // x / 10
-            out[i++] = (byte) ('0' + d10);
-            out[i++] = (byte) ('0' + x - 10 * d10);
+            out[i++] = PAIRS[2 * x];
+            out[i++] = PAIRS[2 * x + 1];
         } else if (x >= 10) {
-            int d10 = x * 103 >>> 10;
-            out[i++] = (byte) ('0' + d10);
-            out[i++] = (byte) ('0' + x - 10 * d10);
+            out[i++] = PAIRS[2 * x];
+            out[i++] = PAIRS[2 * x + 1];
         } else {
             out[i++] = (byte) ('0' + x);
         }
@@ -262,19 +256,22 @@ final class ShortestDecimal {
         return i;
     }
 
+    /** The eight digits of m &lt; 10^8, leading zeros included, two at a time from {@link #PAIRS}. */
     private static int eightDigits(int m, byte[] out, int at) {
-        int y = scaled(m);
-        int i = at;
-        for (int d = 0; d < 8; d++) {
-            int tt = 10 * y;
-            out[i++] = (byte) ('0' + (tt >>> 28));
-            y = tt & MASK_28;
-        }
-        return i;
+        int hi = (int) (m * 109_951_163L >>> 40);      // m / 10^4: ceil(2^40 / 10^4), exact for m < 10^8
+        int lo = m - 10_000 * hi;
+        fourDigits(hi, out, at);
+        fourDigits(lo, out, at + 4);
+        return at + 8;
     }
 
-    /** floor((a + 1) 2^28 / 10^8) - 1 for a &lt; 10^8: a / 10^8 as a 28-bit fraction, read digit by digit. */
-    private static int scaled(int a) {
-        return (int) (Math.multiplyHigh((long) (a + 1) << 28, INV_1E8) >>> 20) - 1;
+    private static void fourDigits(int x, byte[] out, int at) {
+        int hi = x * 5_243 >>> 19;                     // x / 100: ceil(2^19 / 100), exact for x < 10^4
+        int lo = x - 100 * hi;
+        out[at] = PAIRS[2 * hi];
+        out[at + 1] = PAIRS[2 * hi + 1];
+        out[at + 2] = PAIRS[2 * lo];
+        out[at + 3] = PAIRS[2 * lo + 1];
     }
+
 }

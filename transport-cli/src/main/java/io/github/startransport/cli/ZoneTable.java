@@ -120,9 +120,12 @@ final class ZoneTable {
     /** @return the rows of zones [from, to) */
     private static Rows block(ProfileDiagnosis diagnosis, int from, int to) {
         DiagnosisColumn[] columns = DiagnosisColumn.values();
+        Regime[] regimes = Regime.values();
+        byte[][] labels = new byte[regimes.length][];
         int longestLabel = 0;
-        for (Regime r : Regime.values()) {
-            longestLabel = Math.max(longestLabel, r.label().length());
+        for (Regime r : regimes) {
+            labels[r.ordinal()] = r.label().getBytes(StandardCharsets.US_ASCII);
+            longestLabel = Math.max(longestLabel, labels[r.ordinal()].length);
         }
         // every number and its comma, the regime and its comma, the line end
         byte[] b = new byte[(to - from) * (columns.length * (ShortestDecimal.MAX_LENGTH + 1) + longestLabel + 2)];
@@ -135,10 +138,9 @@ final class ZoneTable {
                 i = ShortestDecimal.write(diagnosis.value(columns[j], k), b, i);
                 if (columns[j] == DiagnosisColumn.NABLA_LEDOUX) {
                     b[i++] = ',';
-                    String label = diagnosis.regime(k).label();
-                    for (int c = 0; c < label.length(); c++) {
-                        b[i++] = (byte) label.charAt(c);
-                    }
+                    byte[] label = labels[diagnosis.regime(k).ordinal()];
+                    System.arraycopy(label, 0, b, i, label.length);
+                    i += label.length;
                 }
             }
             b[i++] = '\n';
