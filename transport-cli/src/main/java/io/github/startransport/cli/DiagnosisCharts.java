@@ -141,21 +141,24 @@ final class DiagnosisCharts {
         Values x = k -> xs[k];
         XYSeriesCollection data = new XYSeriesCollection();
         int hidden = 0;
-        double[] nablaAd = d.column(DiagnosisColumn.NABLA_AD);
-        double[] nablaL = d.column(DiagnosisColumn.NABLA_LEDOUX);
+        Values nablaAd = column(d, DiagnosisColumn.NABLA_AD);
+        // NaN (not drawn) where nabla_L lies on nabla_ad
+        Values nablaL = k -> {
+            double l = d.value(DiagnosisColumn.NABLA_LEDOUX, k);
+            double ad = nablaAd.at(k);
+            return Math.abs(l - ad) > LEDOUX_DIFFERS * ad ? l : Double.NaN;
+        };
         int differs = 0;
-        for (int k = 0; k < nablaL.length; k++) {
-            if (Math.abs(nablaL[k] - nablaAd[k]) > LEDOUX_DIFFERS * nablaAd[k]) {
+        for (int k = 0; k < d.size(); k++) {
+            if (!Double.isNaN(nablaL.at(k))) {
                 differs++;
-            } else {
-                nablaL[k] = Double.NaN; // not drawn: it lies on nabla_ad
             }
         }
         hidden += add(data, "\u2207_rad (radiative)", d.size(), x, column(d, DiagnosisColumn.NABLA_RAD), true);
-        hidden += add(data, "\u2207_ad (adiabatic)", d.size(), x, k -> nablaAd[k], true);
+        hidden += add(data, "\u2207_ad (adiabatic)", d.size(), x, nablaAd, true);
         if (differs > 0) {
             hidden += add(data, "\u2207_L (Ledoux; drawn where it differs from \u2207_ad)", d.size(), x,
-                    k -> nablaL[k], true);
+                    nablaL, true);
         }
         hidden += add(data, "\u2207 (actual)", d.size(), x, column(d, DiagnosisColumn.NABLA), true);
         // NaN where the pressure does not fall outwards; the diagnosis warns about those zones
@@ -272,16 +275,14 @@ final class DiagnosisCharts {
     static JFreeChart propagation(ProfileDiagnosis d, Style style) {
         double[] xs = style.axis().of(d);
         Values x = k -> xs[k];
-        double[] n2 = d.column(DiagnosisColumn.BUOYANCY_SQUARED);
-        double[] s1 = d.column(DiagnosisColumn.LAMB_L1);
-        double[] n = new double[n2.length];
-        for (int k = 0; k < n2.length; k++) {
-            n[k] = n2[k] > 0 ? Math.sqrt(n2[k]) / (2 * Math.PI) * 1e6 : 0.0;
-            s1[k] = s1[k] / (2 * Math.PI) * 1e6;
-        }
+        Values n = k -> {
+            double n2 = d.value(DiagnosisColumn.BUOYANCY_SQUARED, k);
+            return n2 > 0 ? Math.sqrt(n2) / (2 * Math.PI) * 1e6 : 0.0;
+        };
+        Values s1 = k -> d.value(DiagnosisColumn.LAMB_L1, k) / (2 * Math.PI) * 1e6;
         XYSeriesCollection data = new XYSeriesCollection();
-        int hidden = add(data, "N / 2\u03c0 (buoyancy frequency)", d.size(), x, k -> n[k], true);
-        add(data, "S\u2081 / 2\u03c0 (Lamb frequency, l = 1)", d.size(), x, k -> s1[k], true);
+        int hidden = add(data, "N / 2\u03c0 (buoyancy frequency)", d.size(), x, n, true);
+        add(data, "S\u2081 / 2\u03c0 (Lamb frequency, l = 1)", d.size(), x, s1, true);
         ValueAxis y = logAxis("cyclic frequency (\u03bcHz)", data);
         XYPlot plot = new XYPlot(data, style.axis().axis(xs), y, new XYLineAndShapeRenderer(true, false));
         JFreeChart chart = chart("Propagation diagram of " + d.source(), plot);
@@ -336,10 +337,12 @@ final class DiagnosisCharts {
         double at(int zone);
     }
 
-    /** One column as values (a copy: a plain array is read ten times faster than through the diagnosis). */
+    /**
+     * One column as values, read through the diagnosis: a copy of each column drawn would add 8 bytes per zone
+     * to the tool's peak memory while a plot is drawn (a series reads each zone two or three times).
+     */
     private static Values column(ProfileDiagnosis d, DiagnosisColumn c) {
-        double[] v = d.column(c);
-        return k -> v[k];
+        return k -> d.value(c, k);
     }
 
     /** Up to this many zones a series draws every zone. */
