@@ -107,10 +107,12 @@ final class DiagnosisCharts {
      * @throws IOException when a file cannot be written
      */
     static void writeAll(ProfileDiagnosis diagnosis, Style style, Path dir) throws IOException {
-        write(gradients(diagnosis, style), dir.resolve(GRADIENTS_PNG));
-        write(velocityAndMixing(diagnosis, style), dir.resolve(MIXING_PNG));
+        // the abscissa once for the three plots along the star (two logarithms a zone on the mass axis)
+        double[] xs = style.axis().of(diagnosis);
+        write(gradients(diagnosis, style, xs), dir.resolve(GRADIENTS_PNG));
+        write(velocityAndMixing(diagnosis, style, xs), dir.resolve(MIXING_PNG));
         write(opacity(diagnosis, style), dir.resolve(OPACITY_PNG));
-        write(propagation(diagnosis, style), dir.resolve(PROPAGATION_PNG));
+        write(propagation(diagnosis, style, xs), dir.resolve(PROPAGATION_PNG));
     }
 
     /**
@@ -137,7 +139,11 @@ final class DiagnosisCharts {
      *         own d ln T / d ln P along the star, regions shaded
      */
     static JFreeChart gradients(ProfileDiagnosis d, Style style) {
-        double[] xs = style.axis().of(d);
+        return gradients(d, style, style.axis().of(d));
+    }
+
+    /** The same, with every zone's coordinate on the style's axis given. */
+    private static JFreeChart gradients(ProfileDiagnosis d, Style style, double[] xs) {
         Values x = k -> xs[k];
         XYSeriesCollection data = new XYSeriesCollection();
         int hidden = 0;
@@ -194,7 +200,11 @@ final class DiagnosisCharts {
      * @return v_conv (left axis) and D_mix (right axis) along the star, regions shaded
      */
     static JFreeChart velocityAndMixing(ProfileDiagnosis d, Style style) {
-        double[] xs = style.axis().of(d);
+        return velocityAndMixing(d, style, style.axis().of(d));
+    }
+
+    /** The same, with every zone's coordinate on the style's axis given. */
+    private static JFreeChart velocityAndMixing(ProfileDiagnosis d, Style style, double[] xs) {
         Values x = k -> xs[k];
         XYSeriesCollection velocity = new XYSeriesCollection();
         XYSeriesCollection mixing = new XYSeriesCollection();
@@ -273,7 +283,11 @@ final class DiagnosisCharts {
      * @return the propagation diagram
      */
     static JFreeChart propagation(ProfileDiagnosis d, Style style) {
-        double[] xs = style.axis().of(d);
+        return propagation(d, style, style.axis().of(d));
+    }
+
+    /** The same, with every zone's coordinate on the style's axis given. */
+    private static JFreeChart propagation(ProfileDiagnosis d, Style style, double[] xs) {
         Values x = k -> xs[k];
         Values n = k -> {
             double n2 = d.value(DiagnosisColumn.BUOYANCY_SQUARED, k);
