@@ -378,7 +378,24 @@ final class DiagnosisCharts {
      * @return zone indices, increasing
      */
     static int[] decimate(int n, Values x, Values y) {
+        return decimate(n, x, y, new int[1]);
+    }
+
+    /**
+     * {@link #decimate(int, Values, Values)}, counting in the same pass the zones whose value a log axis
+     * cannot show (see {@link #add}).
+     *
+     * @param hidden receives that count in element 0
+     */
+    private static int[] decimate(int n, Values x, Values y, int[] hidden) {
         if (n <= MAX_POINTS) {
+            for (int k = 0; k < n; k++) {
+                double v = y.at(k);
+                double xv = x.at(k);
+                if (Double.isFinite(xv) && !Double.isNaN(v) && !drawable(xv, v)) {
+                    hidden[0]++;
+                }
+            }
             int[] all = new int[n];
             for (int k = 0; k < n; k++) {
                 all[k] = k;
@@ -394,17 +411,27 @@ final class DiagnosisCharts {
             int lo = -1;
             int hi = -1;
             int gap = -1;
+            double loV = 0.0;
+            double hiV = 0.0;
             for (int k = from; k < to; k++) {
                 double v = y.at(k);
-                if (drawable(x.at(k), v)) {
-                    if (lo < 0 || v < y.at(lo)) {
+                double xv = x.at(k);
+                if (drawable(xv, v)) {
+                    if (lo < 0 || v < loV) {
                         lo = k;
+                        loV = v;
                     }
-                    if (hi < 0 || v > y.at(hi)) {
+                    if (hi < 0 || v > hiV) {
                         hi = k;
+                        hiV = v;
                     }
-                } else if (gap < 0) {
-                    gap = k;
+                } else {
+                    if (gap < 0) {
+                        gap = k;
+                    }
+                    if (Double.isFinite(xv) && !Double.isNaN(v)) {
+                        hidden[0]++;
+                    }
                 }
             }
             int[] picks = {from, lo, hi, gap, to - 1};
@@ -433,14 +460,8 @@ final class DiagnosisCharts {
      */
     private static int add(XYSeriesCollection data, String name, int n, Values x, Values y, boolean sortByX) {
         XYSeries s = new XYSeries(name, sortByX, true);
-        int hidden = 0;
-        for (int k = 0; k < n; k++) {
-            double v = y.at(k);
-            if (Double.isFinite(x.at(k)) && !Double.isNaN(v) && !drawable(x.at(k), v)) {
-                hidden++;
-            }
-        }
-        for (int k : decimate(n, x, y)) {
+        int[] hidden = new int[1];
+        for (int k : decimate(n, x, y, hidden)) {
             double xv = x.at(k);
             double yv = y.at(k);
             if (drawable(xv, yv)) {
@@ -450,7 +471,7 @@ final class DiagnosisCharts {
             }
         }
         data.addSeries(s);
-        return hidden;
+        return hidden[0];
     }
 
     /**
