@@ -280,7 +280,7 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 zone.delta = delta[k];
                 zone.phi = phi[k];
                 zone.nablaMu = nablaMu[k];
-                convection.solve(zone, conv);
+                convection.solveValues(zone, conv);   // the diagnosis reads no derivative
                 hp[k] = pres[k] / (rho[k] * gravity(r, m, k));
                 nablaRad[k] = conv.nablaRad;
                 nablaL[k] = LedouxGradient.value(nablaAd[k], phi[k], delta[k], nablaMu[k]);
