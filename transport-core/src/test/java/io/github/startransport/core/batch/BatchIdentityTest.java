@@ -28,6 +28,7 @@ import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -113,6 +114,7 @@ class BatchIdentityTest {
                 new TransparentEddyMixingLength(2.0, Criterion.LEDOUX, MixingLengthGeometry.BOHM_VITENSE_1958, 1.0 / 3.0));
     }
 
+    @Tag("internal")
     @Test
     void convectionBatchEqualsPerZoneWithAndWithoutJacobian() {
         ZoneColumns in = demoColumns(2000, 11);
@@ -138,6 +140,7 @@ class BatchIdentityTest {
         assertEquals(EnumSet.allOf(Regime.class), seen, "regimes seen: " + seen);
     }
 
+    @Tag("internal")
     @Test
     void stabilityBatchEqualsPerZone() {
         ZoneColumns in = demoColumns(2000, 12);
@@ -164,6 +167,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void opacityBatchEqualsPerZone() {
         ZoneColumns in = demoColumns(2000, 13);
@@ -185,6 +189,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void oneProfileSplitAcrossThreadsEqualsOneCall() throws Exception {
         ZoneColumns in = demoColumns(2000, 14);
@@ -221,6 +226,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void badZoneIsRefusedWithItsColumnIndex() {
         ZoneColumns in = demoColumns(100, 15);
@@ -242,6 +248,7 @@ class BatchIdentityTest {
         assertTrue(conv.velocity[n - 1] >= 0.0);
     }
 
+    @Tag("internal")
     @Test
     void badRangesAreRefused() {
         ZoneColumns in = demoColumns(100, 16);

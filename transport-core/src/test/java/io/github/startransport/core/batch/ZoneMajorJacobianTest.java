@@ -13,6 +13,7 @@ import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -99,6 +100,7 @@ class ZoneMajorJacobianTest {
         same(r.diffusion, c.diffusion[k], "D", k);
     }
 
+    @Tag("internal")
     @Test
     void blockEqualsPerZoneCallsBitForBit() {
         ZoneColumns in = BatchIdentityTest.demoColumns(2000, 21);
@@ -131,6 +133,7 @@ class ZoneMajorJacobianTest {
         assertEquals(EnumSet.allOf(Regime.class), seen, "regimes seen: " + seen);
     }
 
+    @Tag("internal")
     @Test
     void valuesOnlyEqualPerZoneValues() {
         ZoneColumns in = BatchIdentityTest.demoColumns(600, 22);
@@ -147,6 +150,7 @@ class ZoneMajorJacobianTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void aRangeWritesOnlyItsOwnBlocksAtTheirColumnIndex() {
         ZoneColumns in = BatchIdentityTest.demoColumns(400, 23);
@@ -174,6 +178,7 @@ class ZoneMajorJacobianTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void shortBlockAndBadZoneAreRefused() {
         ZoneColumns in = BatchIdentityTest.demoColumns(200, 24);

@@ -1,5 +1,6 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
@@ -9,6 +10,7 @@ import io.github.startransport.spi.ZoneState;
 import net.jqwik.api.Assume;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
+import net.jqwik.api.Tag;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.constraints.Scale;
@@ -35,6 +37,7 @@ class ConvectionJacobianTest {
     }
 
     /** Convective zones, both variants, both geometry sets, both near-centre limits. */
+    @Tag(CheckKind.INTERNAL)
     @Property(tries = 400, seed = "51")
     void convectiveJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                             @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -58,6 +61,7 @@ class ConvectionJacobianTest {
      * b = -(phi/delta) nabla_mu in the buoyancy, R0 &lt; 1, W from -0.95 b to 2 b): every entry, including
      * d/d nabla_mu and d/d phi, under both criteria, both variants and both geometry sets.
      */
+    @Tag(CheckKind.INTERNAL)
     @Property(tries = 400, seed = "53")
     void compositionJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                              @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -80,6 +84,7 @@ class ConvectionJacobianTest {
     }
 
     /** Stable zones: radiative, semiconvective (Ledoux, nabla_mu &gt; 0) and thermohaline (nabla_mu &lt; 0). */
+    @Tag(CheckKind.INTERNAL)
     @Property(tries = 300, seed = "52")
     void stableJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                         @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,

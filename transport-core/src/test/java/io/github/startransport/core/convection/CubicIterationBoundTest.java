@@ -1,5 +1,7 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -15,6 +17,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class CubicIterationBoundTest {
     static final int BOUND = 10;
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void newtonConvergesWithinTheBoundOnTheWorstInputs() {
         int worst = 0;
@@ -47,6 +50,7 @@ class CubicIterationBoundTest {
         assertTrue(worst <= BOUND, "worst " + worst + " steps at a0 = " + worstA0 + ", S = " + worstS);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void specialValuesStopAtOnce() {
         assertEquals(0.0, MixingLengthCubic.efficiency(2.25, 0.0));
