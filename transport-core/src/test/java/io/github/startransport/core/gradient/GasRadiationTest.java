@@ -63,8 +63,11 @@ class GasRadiationTest {
     @Tag(CheckKind.EXTERNAL)
     @Test
     void meanMolecularWeightOfTheSolarMixtureIsNearSixTenths() {
-        // X = 0.70, Z = 0.02: mu ~ 0.6 (Hansen, Kawaler & Trimble 2004 §1.4, from memory: "about 0.6")
+        // X = 0.70, Z = 0.02: mu ~ 0.6 (Hansen, Kawaler & Trimble 2004 §1.4, from memory: "about 0.6"); exactly,
+        // 1/mu = 2X + 3Y/4 + Z/2 = 1.62 for full ionisation with metals counted as A/2 particles per nucleon mass
+        // (Kippenhahn, Weigert & Weiss 2012 §4.2, from memory)
         double mu = GasRadiation.meanMolecularWeight(0.70, 0.02);
+        assertEquals(1.0 / 1.62, mu, 1e-15);
         assertTrue(mu > 0.59 && mu < 0.63, "mu = " + mu);
     }
 
