@@ -70,6 +70,7 @@ class EqualPressureTest {
         InvalidInputException e = assertThrows(InvalidInputException.class,
                 () -> LocalDiagnosisTest.diagnose(new Profile("rising P", cols), "ledoux"));
         assertEquals(k, e.zone());
+        assertEquals(ProfileColumn.PRESSURE.header(), e.field());
     }
 
     @Tag(CheckKind.INTERNAL)
