@@ -49,4 +49,12 @@ class OpacityPartsTest {
         // kappa_mol = 0.1 Z cm^2/g (an analytic envelope prescription, attribution unknown, from memory)
         assertEquals(0.002, MolecularFloor.kappa(0.02), 1e-15);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void chargeSquaredPerMassOfTheSolarMixture() {
+        // sum X_i Z_i^2 / A_i: hydrogen 1, helium 4/4, metals as oxygen-16, 64/16 = 4 (the representative metal is
+        // common practice, no source): X = 0.7, Z = 0.02 gives 0.7 + 0.28 + 0.08
+        assertEquals(1.06, Conduction.chargeSquaredPerMass(0.7, 0.02), 1e-15);
+    }
 }
