@@ -8,6 +8,7 @@ import io.github.startransport.spi.OutOfRangePolicy;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
+import net.jqwik.api.constraints.Scale;
 import net.jqwik.api.constraints.IntRange;
 import org.apache.commons.math3.analysis.BivariateFunction;
 import org.apache.commons.math3.analysis.interpolation.BicubicInterpolator;
@@ -260,7 +261,7 @@ class InterpolationTest {
     @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 300, seed = "20261203")
     void valueAndDerivativesContinuousAcrossSeams(@ForAll @IntRange(min = 1, max = 9) int seam,
-                                                 @ForAll @DoubleRange(min = 0, max = 1) double along,
+                                                 @ForAll @Scale(9) @DoubleRange(min = 0, max = 1) double along,
                                                  @ForAll boolean alongLogT,
                                                  @ForAll @IntRange(min = 0, max = 1000) int dataSeed) {
         double[] t = Grids.nonUniform(3.5, 6.0, 11, 1000 + dataSeed);
@@ -294,8 +295,8 @@ class InterpolationTest {
 
     @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 200, seed = "20261204")
-    void derivativesMatchCentralDifferences(@ForAll @DoubleRange(min = 3.8, max = 7.8) double logT,
-                                            @ForAll @DoubleRange(min = -7.5, max = 0.5) double logR) {
+    void derivativesMatchCentralDifferences(@ForAll @Scale(9) @DoubleRange(min = 3.8, max = 7.8) double logT,
+                                            @ForAll @Scale(9) @DoubleRange(min = -7.5, max = 0.5) double logR) {
         // The demo table; derivatives with respect to ln rho and ln T against central differences.
         TabulatedOpacity model = new TabulatedOpacity(DemoTable.set(), OutOfRangePolicy.REFUSE);
         double t = Math.pow(10, logT);
