@@ -49,4 +49,14 @@ class GreyAtmosphereLawTest {
         double expected = 2.0 / 3.0 * Codata2018.STEFAN_BOLTZMANN * Math.pow(teff, 4) / Codata2018.SPEED_OF_LIGHT;
         assertEquals(expected, surface, 1e-12 * expected);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void effectiveTemperatureOfASixSolarLuminosityStarOfOnePointSevenSolarRadii() {
+        // L = 4 pi R^2 sigma T_eff^4: T_eff = 5772 K (6^(1/4) / 1.7^(1/2)) with the IAU 2015 nominal Sun
+        double teff = GreyAtmosphere.effectiveTemperature(6 * 3.828e33, 1.7 * 6.957e10);
+        double sun = Math.pow(3.828e33 / (4 * Math.PI * 6.957e10 * 6.957e10 * Codata2018.STEFAN_BOLTZMANN), 0.25);
+        assertEquals(sun * Math.pow(6.0, 0.25) / Math.sqrt(1.7), teff, 1e-9 * teff);
+        assertEquals(6929.0, teff, 1.0);
+    }
 }

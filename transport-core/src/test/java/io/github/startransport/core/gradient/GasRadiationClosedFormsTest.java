@@ -183,4 +183,14 @@ class GasRadiationClosedFormsTest {
         assertEquals(Regime.CONVECTIVE, StabilityClassifier.classify(Criterion.LEDOUX, 0.49, 0.4,
                 LedouxGradient.value(0.4, 0.7, 1.6, 0.2), 0.2));
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void radiationPressureAtTenMillionKelvin() {
+        // P_rad = a T^4 / 3 (Kippenhahn, Weigert & Weiss 2012 §13.1) = 2.5219e13 dyn/cm^2 at 1e7 K
+        assertEquals(2.5219e13, GasRadiation.radiationPressure(1e7), 0.0001e13);
+        assertEquals(A * 1e28 / 3.0, GasRadiation.radiationPressure(1e7), 1e-15 * 2.5e13);
+        // and the ideal gas: rho k T / (mu m_u)
+        assertEquals(1.5 * K * 1e7 / (MU * M_U), GasRadiation.gasPressure(1e7, 1.5, MU), 1e-14 * 2e15);
+    }
 }

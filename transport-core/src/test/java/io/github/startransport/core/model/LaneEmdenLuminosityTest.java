@@ -185,4 +185,15 @@ class LaneEmdenLuminosityTest {
         double gm2r4 = 6.67430e-8 * 1.989e33 * 1.989e33 / Math.pow(6.957e10, 4);
         assertEquals(coefficient * gm2r4, sun.centralPressure(), 1e-7 * coefficient * gm2r4);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void indexOneProfileIsSinXiOverXi() {
+        LaneEmden le = LaneEmden.solve(1.0, 0.0);
+        double[] s = new double[3];
+        for (double xi : new double[] {0.1, 0.9, 1.7, 2.6, 3.1}) {
+            le.sample(xi, s);
+            assertEquals(Math.sin(xi) / xi, s[0], 1e-10, "theta at xi = " + xi);
+        }
+    }
 }
