@@ -29,6 +29,7 @@ import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -114,6 +115,7 @@ class BatchIdentityTest {
                 new TransparentEddyMixingLength(2.0, Criterion.LEDOUX, MixingLengthGeometry.BOHM_VITENSE_1958, 1.0 / 3.0));
     }
 
+    @Tag("internal")
     @Test
     void convectionBatchEqualsPerZoneWithAndWithoutJacobian() {
         ZoneColumns in = demoColumns(2000, 11);
@@ -139,6 +141,7 @@ class BatchIdentityTest {
         assertEquals(EnumSet.allOf(Regime.class), seen, "regimes seen: " + seen);
     }
 
+    @Tag("internal")
     @Test
     void stabilityBatchEqualsPerZone() {
         ZoneColumns in = demoColumns(2000, 12);
@@ -165,6 +168,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void opacityBatchEqualsPerZone() {
         ZoneColumns in = demoColumns(2000, 13);
@@ -186,6 +190,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void oneProfileSplitAcrossThreadsEqualsOneCall() throws Exception {
         ZoneColumns in = demoColumns(2000, 14);
@@ -222,6 +227,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void badZoneIsRefusedWithItsColumnIndex() {
         ZoneColumns in = demoColumns(100, 15);
@@ -243,6 +249,7 @@ class BatchIdentityTest {
         assertTrue(conv.velocity[n - 1] >= 0.0);
     }
 
+    @Tag("internal")
     @Test
     void oddRangesAcrossChunkBoundariesEqualPerZoneInEveryLayout() {
         // the batch kernels stage chunks of zones: ranges of one zone, ranges that start or end inside a

@@ -13,6 +13,7 @@ import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.nio.ByteBuffer;
@@ -102,6 +103,7 @@ class ZoneMajorJacobianTest {
         same(r.diffusion, c.diffusion[k], "D", k);
     }
 
+    @Tag("internal")
     @Test
     void blockEqualsPerZoneCallsBitForBit() {
         ZoneColumns in = BatchIdentityTest.demoColumns(2000, 21);
@@ -134,6 +136,7 @@ class ZoneMajorJacobianTest {
         assertEquals(EnumSet.allOf(Regime.class), seen, "regimes seen: " + seen);
     }
 
+    @Tag("internal")
     @Test
     void valuesOnlyEqualPerZoneValues() {
         ZoneColumns in = BatchIdentityTest.demoColumns(600, 22);
@@ -150,6 +153,7 @@ class ZoneMajorJacobianTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void aRangeWritesOnlyItsOwnBlocksAtTheirColumnIndex() {
         ZoneColumns in = BatchIdentityTest.demoColumns(400, 23);
@@ -177,6 +181,7 @@ class ZoneMajorJacobianTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void shortBlockAndBadZoneAreRefused() {
         ZoneColumns in = BatchIdentityTest.demoColumns(200, 24);

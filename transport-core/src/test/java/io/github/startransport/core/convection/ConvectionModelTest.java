@@ -12,6 +12,7 @@ import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Transport;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;
@@ -52,6 +53,7 @@ class ConvectionModelTest {
      * expected values were computed from those equations and recomputed independently in 40-digit
      * arithmetic (xi-form of the cubic); tolerances allow for the 7-digit inputs.
      */
+    @Tag("external")
     @Test
     void syntheticEnvelopePoint() {
         ZoneState z = zone(1.2e4, 3e-7, 4.989201e5, 10.0, 3.467265e8, 1.000419, 0.39987430, 2.74e4, 3.0);
@@ -94,6 +96,7 @@ class ConvectionModelTest {
      * nabla is within 1e-5 of nabla_ad, convection carries 1 - nabla_ad/nabla_rad of the flux, and v is of order 10^3-10^5 cm/s (tens of m/s in the deep
      * envelope; from memory).
      */
+    @Tag("law")
     @Test
     void deepSolarEnvelope() {
         ZoneState z = solarLike(0.85, 1.0e6, 0.05, 10.0);
@@ -112,6 +115,7 @@ class ConvectionModelTest {
      * of order km/s (peak convective velocities of a few km/s below the solar surface, from memory).
      * With optically thin eddies allowed for, losses are smaller and nabla cannot rise.
      */
+    @Tag("external")
     @Test
     void nearSolarSurface() {
         ZoneState z = solarLike(1.0, 1.0e4, 3e-7, 10.0);
@@ -127,6 +131,7 @@ class ConvectionModelTest {
     }
 
     /** A stable zone: nabla = nabla_rad, no convective flux, radiative fraction 1. */
+    @Tag("law")
     @Test
     void stableZoneCarriesNoConvectiveFlux() {
         ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.2);
@@ -144,6 +149,7 @@ class ConvectionModelTest {
      * A semiconvective zone (Ledoux) gets D_sc = alpha_sc (4acT^3 / (3 kappa rho)) / (6 c_P rho)
      * (nabla - nabla_ad) / (nabla_L - nabla) with nabla = nabla_rad (Langer, Sugimoto &amp; Fricke 1983, from memory).
      */
+    @Tag("external")
     @Test
     void semiconvectiveZoneUsesTheLangerCoefficient() {
         ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.45);
@@ -161,6 +167,7 @@ class ConvectionModelTest {
      * A thermohaline zone gets D_th = C_t (4acT^3 / (3 kappa rho^2 c_P)) (phi/delta)(-nabla_mu)/(nabla_ad - nabla)
      * (Kippenhahn, Ruschenplatt &amp; Thomas 1980; Charbonnel &amp; Zahn 2007; from memory).
      */
+    @Tag("external")
     @Test
     void thermohalineZoneUsesTheFingerCoefficient() {
         ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.3);
@@ -173,6 +180,7 @@ class ConvectionModelTest {
         assertEquals(expected, out.diffusion, 1e-12 * expected);
     }
 
+    @Tag("internal")
     @Test
     void discoveredByNameWithTextbookDefault() {
         ConvectionModel dflt = TRANSPORT.convection(null, ModelOptions.defaults());
@@ -190,6 +198,7 @@ class ConvectionModelTest {
         assertEquals(0.3333333333, t.eddyShape());
     }
 
+    @Tag("internal")
     @Test
     void unknownOrMalformedOptionsAreRefused() {
         assertThrows(InvalidOptionException.class,
@@ -200,6 +209,7 @@ class ConvectionModelTest {
                 () -> TRANSPORT.convection(LocalMixingLength.NAME, ModelOptions.parse("alpha=abc")));
     }
 
+    @Tag("internal")
     @Test
     void nonPositiveAlphaIsRefused() {
         InvalidInputException e = assertThrows(InvalidInputException.class,
@@ -210,6 +220,7 @@ class ConvectionModelTest {
                 MixingLengthGeometry.BOHM_VITENSE_1958));
     }
 
+    @Tag("internal")
     @Test
     void badZoneInputIsRefusedWithFieldValueUnitAndZone() {
         refused("temperature", "K", Double.NaN, z -> z.temperature = Double.NaN);
@@ -244,6 +255,7 @@ class ConvectionModelTest {
      * Overshoot through the SPI: D(0) = D_0 and D(f H_P / 2) = D_0 / e for D = D_0 exp(-2z/(f H_P))
      * (Freytag, Ludwig &amp; Steffen 1996; Herwig 2000; from memory).
      */
+    @Tag("external")
     @Test
     void overshootThroughTheContract() {
         ConvectionModel m = TRANSPORT.convection(LocalMixingLength.NAME, ModelOptions.parse("overshoot-f=0.02"));

@@ -1,5 +1,7 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -15,6 +17,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class CubicIterationBoundTest {
     static final int BOUND = 10;
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void newtonConvergesWithinTheBoundOnTheWorstInputs() {
         int worst = 0;
@@ -25,8 +28,11 @@ class CubicIterationBoundTest {
                 double a0 = Math.pow(10, la0);
                 double s = Math.pow(10, ls);
                 double root = MixingLengthCubic.efficiency(a0, s, MixingLengthCubic.MAX_STEPS);
+                // a NaN, infinite or non-positive root fails here, before the step count is looked at
+                assertTrue(root > 0.0 && Double.isFinite(root), "a0 = " + a0 + ", S = " + s + ": Gamma = " + root);
                 int steps = 0;
-                while (Double.doubleToRawLongBits(MixingLengthCubic.efficiency(a0, s, steps))
+                while (steps < MixingLengthCubic.MAX_STEPS
+                        && Double.doubleToRawLongBits(MixingLengthCubic.efficiency(a0, s, steps))
                         != Double.doubleToRawLongBits(root)) {
                     steps++;
                 }
@@ -35,7 +41,6 @@ class CubicIterationBoundTest {
                     worstA0 = a0;
                     worstS = s;
                 }
-                assertTrue(root > 0.0 && Double.isFinite(root), "a0 = " + a0 + ", S = " + s);
                 // residual relative to the largest term: rounding only
                 double scale = Math.max(s, 1.0 * root);
                 assertTrue(Math.abs(MixingLengthCubic.residual(a0, s, root)) <= 1e-12 * scale,
@@ -47,13 +52,19 @@ class CubicIterationBoundTest {
         assertTrue(worst <= BOUND, "worst " + worst + " steps at a0 = " + worstA0 + ", S = " + worstS);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void specialValuesStopAtOnce() {
         assertEquals(0.0, MixingLengthCubic.efficiency(2.25, 0.0));
         assertEquals(0.0, MixingLengthCubic.efficiency(2.25, -1.0));
         assertEquals(0.0, MixingLengthCubic.efficiency(2.25, Double.NaN));
-        // infinite S: no finite root; the loop still ends (at most MAX_STEPS steps)
+        // infinite S: the root a0 Gamma^3 + Gamma^2 + Gamma = S is infinite; the loop still ends (at most
+        // MAX_STEPS steps) with +infinity or a huge positive value, never NaN, a negative or a small number
         double g = MixingLengthCubic.efficiency(2.25, Double.POSITIVE_INFINITY);
-        assertTrue(!(g > 0.0 && Double.isFinite(g)) || g > 1e100);
+        assertTrue(g > 1e100, "Gamma(S = infinity) = " + g);
+        // the largest finite S: Gamma ~ (S / a0)^(1/3), finite and positive
+        double big = MixingLengthCubic.efficiency(2.25, Double.MAX_VALUE);
+        assertTrue(big > 0.0 && Double.isFinite(big), "Gamma(S = MAX_VALUE) = " + big);
+        assertEquals(Math.cbrt(Double.MAX_VALUE / 2.25), big, 1e-6 * big);
     }
 }

@@ -1,5 +1,6 @@
 package io.github.startransport.core.convection;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -14,6 +15,7 @@ class MixingLengthCubicTest {
      * and Gamma = (xi - U)/(2U), nabla_ad = 0.4. Values computed from those equations, and recomputed
      * independently here in 40-digit arithmetic (polynomial roots of the xi form) before use.
      */
+    @Tag("external")
     @ParameterizedTest
     @CsvSource({
             "1e-6, 1,   0.00961570078658671, 0.400092461700617, 4807.35039329335",

@@ -32,6 +32,7 @@ import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
+import net.jqwik.api.Tag;
 import net.jqwik.api.Tuple;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.statistics.Statistics;
@@ -117,6 +118,7 @@ class HotPathFuzzTest {
         }
     }
 
+    @Tag("internal")
     @Property(tries = 3000, seed = "7101")
     void hotPathCallsGiveAFiniteResultOrOurException(
             @ForAll("extreme") double t, @ForAll("extreme") double rho, @ForAll("extreme") double p,
@@ -198,6 +200,7 @@ class HotPathFuzzTest {
     }
 
     /** The batch call over a column of garbage zones: refused naming a zone in range, or all finite. */
+    @Tag("internal")
     @Property(tries = 200, seed = "7102")
     void batchCallsGiveFiniteColumnsOrOurException(@ForAll("extreme") double a, @ForAll("extreme") double b,
                                                    @ForAll @IntRange(min = 0, max = 11) int field,
@@ -227,6 +230,7 @@ class HotPathFuzzTest {
     }
 
     /** Whole-profile diagnosis of the demo star with one column spoiled: a finite diagnosis or our exception. */
+    @Tag("internal")
     @Property(tries = 150, seed = "7103")
     void diagnosisGivesFiniteColumnsOrOurException(@ForAll("extreme") double a,
                                                    @ForAll @IntRange(min = 0, max = 7) int column,

@@ -11,6 +11,7 @@ import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
+import net.jqwik.api.Tag;
 import net.jqwik.api.Tuple;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.statistics.Statistics;
@@ -72,6 +73,7 @@ class OpacityTableFuzzTest {
         }
     }
 
+    @Tag("internal")
     @Property(tries = 400, seed = "7201")
     void randomBytesAreRefusedOrLoaded(@ForAll @IntRange(min = 0, max = 400) int length, @ForAll long seed) {
         java.util.SplittableRandom rnd = new java.util.SplittableRandom(seed);
@@ -82,6 +84,7 @@ class OpacityTableFuzzTest {
         check(HEADER + "\n" + new String(bytes, java.nio.charset.StandardCharsets.ISO_8859_1));
     }
 
+    @Tag("internal")
     @Property(tries = 600, seed = "7202")
     void spoiledFieldsAreRefusedOrLoaded(@ForAll("junkField") String junk, @ForAll @IntRange(min = 0, max = 200) int at,
                                          @ForAll @IntRange(min = 0, max = 3) int how) {

@@ -8,6 +8,7 @@ import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
+import net.jqwik.api.Tag;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.statistics.Statistics;
 
@@ -32,6 +33,7 @@ class ProfileFuzzTest {
                 net.jqwik.api.Tuple.of(1, Arbitraries.doubles().between(-1e40, 1e40).ofScale(3)));
     }
 
+    @Tag("internal")
     @Property(tries = 2000, seed = "701")
     void garbageIsRefusedWithOurExceptionOrAcceptedWhole(@ForAll @IntRange(min = 0, max = 12) int n,
                                                          @ForAll("cell") double a, @ForAll("cell") double b,
@@ -76,6 +78,7 @@ class ProfileFuzzTest {
         }
     }
 
+    @Tag("internal")
     @Property(tries = 200, seed = "702")
     void reversedInputGivesTheSameProfile(@ForAll @IntRange(min = 3, max = 50) int n) {
         Map<ProfileColumn, double[]> out = new EnumMap<>(ProfileColumn.class);
