@@ -310,6 +310,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void zonesBeforeARefusedZoneKeepTheirWholeResult() {
         // the batch kernels work on chunks of zones: a refusal in the middle of one must leave every earlier
@@ -350,6 +351,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void badRangesAreRefused() {
         ZoneColumns in = demoColumns(100, 16);

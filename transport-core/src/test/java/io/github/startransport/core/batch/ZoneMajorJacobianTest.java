@@ -204,6 +204,7 @@ class ZoneMajorJacobianTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void bufferEqualsPerZoneCallsBitForBitAndWritesOnlyItsRange() {
         // direct buffers in native order (what a native host's memory looks like: stored straight into
@@ -257,6 +258,7 @@ class ZoneMajorJacobianTest {
         assertEquals(EnumSet.allOf(Regime.class), seen, "regimes seen: " + seen);
     }
 
+    @Tag("internal")
     @Test
     void shortReadOnlyOrMissingBufferIsRefusedBeforeAnythingIsWritten() {
         ZoneColumns in = BatchIdentityTest.demoColumns(200, 26);

@@ -6,6 +6,7 @@ import io.github.startransport.spi.DiagnosisColumn;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
 import io.github.startransport.spi.ProfileDiagnosis;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -18,6 +19,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
  */
 class DerivedColumnsTest {
 
+    @Tag("external")
     @Test
     void computedWhenReadAndTheSameEitherWay() {
         Profile p = new DemoStar(800).profile();

@@ -1,5 +1,6 @@
 package io.github.startransport.core.thermo;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.SplittableRandom;
@@ -18,6 +19,7 @@ class ExponentialTest {
         return Math.abs(ours - reference) / Math.ulp(reference);
     }
 
+    @Tag("external")
     @Test
     void withinOneUlpOfStrictMathOverTheWholeRange() {
         SplittableRandom random = new SplittableRandom(1989);
@@ -39,6 +41,7 @@ class ExponentialTest {
         assertTrue(worst <= 1.0, "largest difference " + worst + " ulp at x = " + worstAt);
     }
 
+    @Tag("external")
     @Test
     void exactPointsSpecialValuesAndTheEndsOfTheRange() {
         assertEquals(1.0, Exponential.exp(0.0));
