@@ -17,14 +17,15 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
  *
  * <p>Two states where pressure ionisation has taken the last bound states, so every nucleus is bare (each
  * test first checks the electron count): T = 3e8 K, rho = 500 g cm^-3, X = 0.7, Z = 0 (beta near 1/2) and
- * T = 1e8 K, rho = 18 g cm^-3, pure hydrogen (beta near 0.54). Constants are typed here from CODATA 2018.
+ * T = 1e8 K, rho = 18 g cm^-3, pure hydrogen (beta near 0.54), and a radiation-dominated one, T = 1e9 K,
+ * rho = 1e-8 g cm^-3, X = 0.7 (beta = 1e-11: Gamma_1 = 4/3, nabla_ad = 1/4 to that order). Constants are typed here from CODATA 2018.
  */
 class IonisedGasPlusRadiationTest {
     private static final double K = 1.380649e-16;          // erg/K, CODATA 2018 (exact)
     private static final double M_U = 1.66053906660e-24;   // g, CODATA 2018
     private static final double A_RAD = 4 * 5.670374419e-5 / 2.99792458e10; // erg cm^-3 K^-4, 4 sigma / c
 
-    private static final double[][] STATES = {{3e8, 500.0, 0.7}, {1e8, 18.0, 1.0}};
+    private static final double[][] STATES = {{3e8, 500.0, 0.7}, {1e8, 18.0, 1.0}, {1e9, 1e-8, 0.7}};
 
     private static ThermoResult evaluate(double[] s) {
         ThermoResult r = new ThermoResult();
@@ -59,7 +60,8 @@ class IonisedGasPlusRadiationTest {
         for (double[] s : STATES) {
             ThermoResult r = evaluate(s);
             double p = gasPressure(s) + A_RAD * Math.pow(s[0], 4) / 3;
-            assertEquals(mu(s[2]), r.mu, 1e-14, at(s));
+            // the hottest state keeps 6e-14 of its electrons bound (Saha at 1e9 K and 1e-8 g/cm^3): 1e-12
+            assertEquals(mu(s[2]), r.mu, 1e-12, at(s));
             assertEquals(p, r.pressure, 1e-11 * p, at(s));
             assertEquals(beta(s), r.beta, 1e-11, at(s));
         }
@@ -142,5 +144,21 @@ class IonisedGasPlusRadiationTest {
         IonisingGas.INSTANCE.evaluate(t, rho, 1.0, 0.0, -1, r);
         double x = r.freeElectrons;
         assertEquals(7.7e-5, x / (1 - x), 0.02 * 7.7e-5, "rho = " + rho);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void degeneracyIndicatorIsHalfTheElectronsPerThermalWavelengthCubed() {
+        // n_e lambda_e^3 / 2 with lambda_e = h / sqrt(2 pi m_e k T) (Landau & Lifshitz, Statistical Physics, §56,
+        // from memory), n_e = rho (X + Y/2) / m_u for the bare nuclei of these states
+        double h = 6.62607015e-27;      // erg s, CODATA 2018 (exact)
+        double me = 9.1093837015e-28;   // g, CODATA 2018
+        for (double[] s : STATES) {
+            ThermoResult r = evaluate(s);
+            double ne = s[1] * (s[2] + (1 - s[2]) / 2) / M_U;
+            double lambda = h / Math.sqrt(2 * Math.PI * me * K * s[0]);
+            double expected = ne * lambda * lambda * lambda / 2;
+            assertEquals(expected, r.degeneracy, 1e-10 * expected, at(s));
+        }
     }
 }
