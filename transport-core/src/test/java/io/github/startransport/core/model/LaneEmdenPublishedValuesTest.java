@@ -114,7 +114,8 @@ class LaneEmdenPublishedValuesTest {
         // (the radius of gyration of fully convective stars, e.g. in tidal-evolution papers; value from memory,
         // three figures: 0.5 %).
         double[] out = new double[3];
-        double[][] cases = {{0.0, 0.4, 1e-8}, {1.0, 2.0 / 3 * (1 - 6 / (Math.PI * Math.PI)), 1e-8}, {1.5, 0.205, 0.005}};
+        double[][] cases = {{0.0, 0.4, 1e-8}, {1.0, 2.0 / 3 * (1 - 6 / (Math.PI * Math.PI)), 1e-8},
+            {1.5, 0.205, 0.005}};
         for (double[] c : cases) {
             double n = c[0];
             LaneEmden le = LaneEmden.solve(n, 0.0);

@@ -56,7 +56,8 @@ class DiagnosisTextbookRelationsTest {
         for (int k = 0; k < PROFILE.size(); k++) {
             double t = in(ProfileColumn.TEMPERATURE, k);
             double expected = 3 * col(DiagnosisColumn.OPACITY, k) * in(ProfileColumn.LUMINOSITY, k)
-                    * in(ProfileColumn.PRESSURE, k) / (16 * Math.PI * A_C * G * in(ProfileColumn.MASS, k) * t * t * t * t);
+                    * in(ProfileColumn.PRESSURE, k)
+                    / (16 * Math.PI * A_C * G * in(ProfileColumn.MASS, k) * t * t * t * t);
             assertEquals(expected, col(DiagnosisColumn.NABLA_RAD, k), 1e-12 * Math.abs(expected), "zone " + k);
         }
     }
@@ -87,7 +88,8 @@ class DiagnosisTextbookRelationsTest {
             double r = in(ProfileColumn.RADIUS, k);
             double g = G * in(ProfileColumn.MASS, k) / (r * r);
             double a = g * g * in(ProfileColumn.DENSITY, k) / in(ProfileColumn.PRESSURE, k);
-            double bracket = col(DiagnosisColumn.DELTA, k) * (col(DiagnosisColumn.NABLA_AD, k) - col(DiagnosisColumn.NABLA, k))
+            double bracket = col(DiagnosisColumn.DELTA, k)
+                    * (col(DiagnosisColumn.NABLA_AD, k) - col(DiagnosisColumn.NABLA, k))
                     + col(DiagnosisColumn.PHI, k) * col(DiagnosisColumn.NABLA_MU, k);
             double scale = a * (col(DiagnosisColumn.DELTA, k) * col(DiagnosisColumn.NABLA_AD, k)
                     + Math.abs(col(DiagnosisColumn.PHI, k) * col(DiagnosisColumn.NABLA_MU, k)));

@@ -18,7 +18,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
  * <p>Two states where pressure ionisation has taken the last bound states, so every nucleus is bare (each
  * test first checks the electron count): T = 3e8 K, rho = 500 g cm^-3, X = 0.7, Z = 0 (beta near 1/2) and
  * T = 1e8 K, rho = 18 g cm^-3, pure hydrogen (beta near 0.54), and a radiation-dominated one, T = 1e9 K,
- * rho = 1e-8 g cm^-3, X = 0.7 (beta = 1e-11: Gamma_1 = 4/3, nabla_ad = 1/4 to that order). Constants are typed here from CODATA 2018.
+ * rho = 1e-8 g cm^-3, X = 0.7 (beta = 5e-13: Gamma_1 = 4/3, nabla_ad = 1/4 to that order). Constants are typed
+ * here from CODATA 2018.
  */
 class IonisedGasPlusRadiationTest {
     private static final double K = 1.380649e-16;          // erg/K, CODATA 2018 (exact)
