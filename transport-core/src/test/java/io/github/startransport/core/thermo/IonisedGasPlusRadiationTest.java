@@ -15,9 +15,9 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
  * forms from memory and re-derived in the comments), and hydrogen in the solar photosphere against a worked
  * textbook example.
  *
- * <p>Two states where pressure ionisation has taken the last bound states, so every nucleus is bare (each
- * test first checks the electron count): T = 3e8 K, rho = 500 g cm^-3, X = 0.7, Z = 0 (beta near 1/2) and
- * T = 1e8 K, rho = 18 g cm^-3, pure hydrogen (beta near 0.54), and a radiation-dominated one, T = 1e9 K,
+ * <p>Four states where every nucleus is bare (each test first checks the electron count to 1e-12):
+ * T = 3e8 K, rho = 500 g cm^-3 with X = 0.7, Z = 0 (beta near 1/2) and with pure helium (mu = 4/3, beta near
+ * 0.31); T = 1e8 K, rho = 18 g cm^-3, pure hydrogen (beta near 0.54); and a radiation-dominated one, T = 1e9 K,
  * rho = 1e-8 g cm^-3, X = 0.7 (beta = 5e-13: Gamma_1 = 4/3, nabla_ad = 1/4 to that order). Constants are typed
  * here from CODATA 2018.
  */
@@ -26,7 +26,7 @@ class IonisedGasPlusRadiationTest {
     private static final double M_U = 1.66053906660e-24;   // g, CODATA 2018
     private static final double A_RAD = 4 * 5.670374419e-5 / 2.99792458e10; // erg cm^-3 K^-4, 4 sigma / c
 
-    private static final double[][] STATES = {{3e8, 500.0, 0.7}, {1e8, 18.0, 1.0}, {1e9, 1e-8, 0.7}};
+    private static final double[][] STATES = {{3e8, 500.0, 0.7}, {1e8, 18.0, 1.0}, {3e8, 500.0, 0.0}, {1e9, 1e-8, 0.7}};
 
     private static ThermoResult evaluate(double[] s) {
         ThermoResult r = new ThermoResult();
