@@ -46,11 +46,14 @@ class RadiativeEnvelopeClosedFormsTest {
         double g = G * m / (r * r);
         double b = 4 * Math.PI * AC * G * m / (3 * kappa * l);
         Profile p = s.profile().orElseThrow();
+        double[] nabla = s.nabla();
         for (int k = 0; k < p.size(); k++) {
             double t = p.value(ProfileColumn.TEMPERATURE, k);
             double expected = b * Math.pow(t, 4) + A * Math.pow(teff, 4) / 6 - 2 * g / (3 * kappa);
-            assertEquals(1.0, p.value(ProfileColumn.PRESSURE, k) / expected, 1e-7,
-                    "P(T) at T = " + t + ", r = " + p.value(ProfileColumn.RADIUS, k) / r + " R");
+            String at = "T = " + t + ", r = " + p.value(ProfileColumn.RADIUS, k) / r + " R";
+            assertEquals(1.0, p.value(ProfileColumn.PRESSURE, k) / expected, 1e-7, "P(T) at " + at);
+            // and the gradient along it: nabla = d ln T / d ln P = P / (4 B T^4), 1/4 deep down
+            assertEquals(expected / (4 * b * Math.pow(t, 4)), nabla[k], 1e-7, "nabla at " + at);
         }
         assertTrue(p.size() > 50, "points: " + p.size());
     }
