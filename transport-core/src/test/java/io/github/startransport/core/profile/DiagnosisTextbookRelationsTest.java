@@ -115,6 +115,7 @@ class DiagnosisTextbookRelationsTest {
         // nabla_rad in convective zones; nabla = nabla_rad and no convective flux where stable (Kippenhahn,
         // Weigert & Weiss 2012, §7.1, from memory)
         int convective = 0;
+        int radiative = 0;
         for (int k = 0; k < PROFILE.size(); k++) {
             double nabla = col(DiagnosisColumn.NABLA, k);
             double rad = col(DiagnosisColumn.NABLA_RAD, k);
@@ -122,10 +123,11 @@ class DiagnosisTextbookRelationsTest {
                 convective++;
                 assertEquals(1 - nabla / rad, col(DiagnosisColumn.CONVECTIVE_FRACTION, k), 1e-12, "zone " + k);
             } else if (LEDOUX.regimes()[k] == Regime.RADIATIVE) {
+                radiative++;
                 assertEquals(rad, nabla, 1e-14 * Math.abs(rad), "zone " + k);
                 assertEquals(0.0, col(DiagnosisColumn.CONVECTIVE_FRACTION, k), "zone " + k);
             }
         }
-        assertTrue(convective > 20, "convective zones: " + convective);
+        assertTrue(convective > 20 && radiative > 20, "convective zones: " + convective + ", radiative: " + radiative);
     }
 }
