@@ -131,4 +131,36 @@ class CodataRelationsTest {
         assertEquals(g, Codata2018.GRAVITATIONAL_CONSTANT * Iau2015.SOLAR_MASS / (Iau2015.SOLAR_RADIUS * Iau2015.SOLAR_RADIUS),
                 1e-12 * g);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void nominalLuminosityIsTheNominalIrradianceAtOneAstronomicalUnit() {
+        // IAU 2015 B3 derives L_sun^N = 4 pi (1 au)^2 S_sun^N from the nominal total solar irradiance
+        // S_sun^N = 1361 W m^-2 (= 1.361e6 erg s^-1 cm^-2) and 1 au = 1.495 978 707e13 cm (IAU 2012 B2, exact),
+        // rounded to 3.828e26 W
+        double au = 1.495978707e13;
+        double irradiance = Iau2015.SOLAR_LUMINOSITY / (4.0 * Math.PI * au * au);
+        assertEquals(1.361e6, irradiance, 0.0005e6);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void eddingtonLuminosityOfOneSolarMass() {
+        // L_Edd = 4 pi c G M / kappa with kappa = 0.34 cm^2 g^-1 (Thomson scattering, X = 0.7): about 1.5e31 W per
+        // solar mass (Carroll & Ostlie 2007, eq. 10.6, from memory), i.e. 3.8e4 L_sun
+        double eddington = 4.0 * Math.PI * C * Iau2015.SOLAR_MASS_PARAMETER / 0.34;
+        assertEquals(1.5e38, eddington, 0.05e38);
+        assertEquals(3.8e4, eddington / Iau2015.SOLAR_LUMINOSITY, 0.1e4);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void thomsonOpacityOfIonisedHydrogen() {
+        // kappa_es = sigma_T / (mu_e m_u) with mu_e = 1 for pure ionised hydrogen: 0.40 cm^2 g^-1, and
+        // 0.20 (1 + X) in general (Kippenhahn, Weigert & Weiss 2012 §17.2; Hansen, Kawaler & Trimble 2004 §4.4; from
+        // memory); the coefficient is the commonly quoted 0.2003 (from memory)
+        double kappa = Codata2018.THOMSON_CROSS_SECTION / Codata2018.ATOMIC_MASS_UNIT;
+        assertEquals(0.40, kappa, 0.002);
+        assertEquals(0.2003, kappa / 2.0, 0.00005);
+    }
 }

@@ -316,4 +316,80 @@ class MixingLengthRegimesTest {
         assertEquals(z.nablaAd + e, out.nabla, 1e-9 * e + 1e-12 * out.nabla);
         assertEquals(z.edgeDistance, out.mixingLength, 1e-15 * z.edgeDistance);
     }
+
+    /** The root of Canuto &amp; Mazzitelli's flux equation e (1 + Phi(40.5 e / U^2)) = W, by Commons Math's Brent solver. */
+    private static double spectrumExcess(double u, double w) {
+        return new BrentSolver(1e-300, 1e-14).solve(1000, y -> {
+            double s = 40.5 * y / (u * u);
+            double phi = 24.868 * Math.pow(s, 0.14972) * Math.pow(Math.pow(1 + 0.097666 * s, 0.18931) - 1, 1.8503);
+            return y * (1 + phi) - w;
+        }, 0.0, w);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void fullSpectrumFluxInAnInefficientLayer() {
+        // the superadiabatic layer (U about 6 at alpha = 1.8, S small): Canuto & Mazzitelli's equation as above with
+        // Lambda = H_P, alpha = 1; nabla stays near nabla_rad, compared through the convective share
+        ZoneState z = superadiabaticLayer();
+        double u = textbookU(z, scaleHeight(z));
+        double w = nablaRad(z) - z.nablaAd;
+        double e = spectrumExcess(u, w);
+        ConvectionResult out = solve(new EddySpectrumConvection(1.0, Criterion.SCHWARZSCHILD, LengthScale.SCALE_HEIGHT), z);
+        double share = (w - e) / nablaRad(z);
+        assertTrue(share < 0.01, "F_conv / F = " + share);
+        assertEquals(share, out.convectiveFraction, 1e-7 * share);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void fullSpectrumFluxNearTheCentreUsesAlphaTimesTheRadius() {
+        // Lambda = alpha min(H_P, r) (the model's centre limit; common practice, no source) where H_P is about 40 r
+        ZoneState z = ConvectionOutputsTest.nearCentre();
+        double u = textbookU(z, z.radius);
+        double w = nablaRad(z) - z.nablaAd;
+        double e = spectrumExcess(u, w);
+        ConvectionResult out = solve(new EddySpectrumConvection(1.0, Criterion.SCHWARZSCHILD, LengthScale.SCALE_HEIGHT), z);
+        assertEquals(z.nablaAd + e, out.nabla, 1e-9 * e + 1e-12 * out.nabla);
+        assertEquals(z.radius, out.mixingLength, 1e-15 * z.radius);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void eddiesOfOpticalThicknessNearOne() {
+        // omega = kappa rho l about 0.5: the loss factor q = y omega^2 / (1 + y omega^2) is in the middle of Spiegel's
+        // interpolation (Henyey, Vardya & Bodenheimer 1965, form from memory), neither limit applies
+        ZoneState z = ConvectionOutputsTest.zone(R_SUN, M_SUN, 9.0e3, 2e-8, 0.3, 3.0);
+        double l = 1.8 * scaleHeight(z);
+        double u = textbookU(z, l);
+        double omega = z.opacity * z.density * l;
+        assertTrue(omega > 0.1 && omega < 10.0, "omega = " + omega);
+        double y = 3.0 / (4.0 * Math.PI * Math.PI);
+        double q = y * omega * omega / (1.0 + y * omega * omega);
+        double x = root(8.0 / 9.0, u, q * u, nablaRad(z) - z.nablaAd);
+        ConvectionResult out = solve(new TransparentEddyMixingLength(), z);
+        double share = 9.0 * x * x * x / (8.0 * u * nablaRad(z));
+        assertEquals(share, out.convectiveFraction, 1e-8 * share);
+        assertEquals(z.nablaAd + x * x + 2.0 * q * u * x, out.nabla, 1e-12 * out.nabla);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void hydrogenIonisationZoneWithLargeDeltaAndSmallNablaAd() {
+        // In a hydrogen ionisation zone delta rises to ~10, nabla_ad falls to ~0.1 and c_P grows by ~10 (Kippenhahn,
+        // Weigert & Weiss 2012 §14.1, orders of magnitude from memory): delta enters U and v, c_P enters U. The
+        // textbook cubic with these values, the zone otherwise that just below the surface.
+        ZoneState z = ConvectionOutputsTest.nearSurface();
+        z.delta = 8.0;
+        z.nablaAd = 0.1;
+        z.cp = 10.0 * z.cp;
+        double hp = scaleHeight(z);
+        double l = 1.8 * hp;
+        double u = textbookU(z, l);
+        double x = root(8.0 / 9.0, u, u, nablaRad(z) - z.nablaAd);
+        ConvectionResult out = solve(new LocalMixingLength(), z);
+        double v = l * Math.sqrt(gravity(z) * z.delta / (8.0 * hp)) * x;
+        assertEquals(v, out.velocity, 1e-9 * v);
+        assertEquals(z.nablaAd + x * x + 2.0 * u * x, out.nabla, 1e-10 * out.nabla);
+    }
 }
