@@ -18,6 +18,8 @@ class CodataRelationsTest {
     private static final double C = Codata2018.SPEED_OF_LIGHT;
     private static final double H = Codata2018.PLANCK;
     private static final double K = Codata2018.BOLTZMANN;
+    /** mu_0 / (4 pi 1e-7 H/m) = 1.000 000 000 55(15) (CODATA 2018; exactly 1 before the 2019 SI). */
+    private static final double MU_0_RATIO = 1.00000000055;
 
     @Test
     @Tag(CheckKind.EXTERNAL)
@@ -57,7 +59,7 @@ class CodataRelationsTest {
     void thomsonCrossSectionIsEightPiThirdsOfTheClassicalElectronRadiusSquared() {
         // r_e = e^2 / (m_e c^2) in Gaussian units = 2.817 940 3262(13)e-13 cm (CODATA 2018);
         // sigma_T = (8 pi / 3) r_e^2 (Rybicki & Lightman 1979, eq. 3.60, from memory)
-        double e = Codata2018.ELEMENTARY_CHARGE_ESU;
+        double e = Codata2018.ELEMENTARY_CHARGE_ESU * Math.sqrt(MU_0_RATIO); // see the Rydberg test
         double re = e * e / (Codata2018.ELECTRON_MASS * C * C);
         assertEquals(2.8179403262e-13, re, 1e-9 * 2.818e-13);
         assertEquals(8.0 * Math.PI / 3.0 * re * re, Codata2018.THOMSON_CROSS_SECTION, 2e-9 * 6.65e-25);
@@ -66,10 +68,11 @@ class CodataRelationsTest {
     @Test
     @Tag(CheckKind.EXTERNAL)
     void fineStructureConstantFromTheGaussianCharge() {
-        // alpha = e^2 / (hbar c) in Gaussian units = 7.297 352 5693(11)e-3 (CODATA 2018)
-        double e = Codata2018.ELEMENTARY_CHARGE_ESU;
+        // alpha = e^2 / (hbar c) in Gaussian units = 7.297 352 5693(11)e-3 (CODATA 2018), with the mu_0 factor of
+        // the Rydberg test below
+        double e = Codata2018.ELEMENTARY_CHARGE_ESU * Math.sqrt(MU_0_RATIO);
         double alpha = 2.0 * Math.PI * e * e / (H * C);
-        assertEquals(7.2973525693e-3, alpha, 1e-9 * 7.3e-3);
+        assertEquals(7.2973525693e-3, alpha, 3e-10 * 7.3e-3);
     }
 
     @Test
@@ -162,5 +165,24 @@ class CodataRelationsTest {
         double kappa = Codata2018.THOMSON_CROSS_SECTION / Codata2018.ATOMIC_MASS_UNIT;
         assertEquals(0.40, kappa, 0.002);
         assertEquals(0.2003, kappa / 2.0, 0.00005);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void rydbergEnergyFromTheElectronMassAndCharge() {
+        // R_inf h c = m_e e^4 / (2 hbar^2) in Gaussian units = 13.605 693 122 994(26) eV (CODATA 2018). The Gaussian
+        // charge squared is e^2 mu_0 c^2 / (4 pi) (SI to cgs); our constant takes mu_0 = 4 pi 1e-7 H/m, while since
+        // 2019 mu_0 / (4 pi 1e-7) = 1.000 000 000 55(15) (CODATA 2018), so e^4 carries that factor squared (1.1e-9)
+        double e = Codata2018.ELEMENTARY_CHARGE_ESU * Math.sqrt(MU_0_RATIO);
+        double hbar = H / (2.0 * Math.PI);
+        double rydberg = Codata2018.ELECTRON_MASS * Math.pow(e, 4) / (2.0 * hbar * hbar) / Codata2018.ELECTRON_VOLT;
+        assertEquals(13.605693122994, rydberg, 5e-10 * 13.6);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void comptonWavelengthOfTheElectron() {
+        // lambda_C = h / (m_e c) = 2.426 310 238 67(73)e-12 m (CODATA 2018) = 2.426 310 238 67e-10 cm
+        assertEquals(2.42631023867e-10, H / (Codata2018.ELECTRON_MASS * C), 1e-9 * 2.43e-10);
     }
 }

@@ -392,4 +392,51 @@ class MixingLengthRegimesTest {
         assertEquals(v, out.velocity, 1e-9 * v);
         assertEquals(z.nablaAd + x * x + 2.0 * u * x, out.nabla, 1e-10 * out.nabla);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void eddyShapeFactorOneThirdOfTheAlternativeNormalisation() {
+        // the option eddy-shape-factor = 1/3, the value some authors use instead of 3 / (4 pi^2) (from memory): the
+        // general cubic with q = (omega^2 / 3) / (1 + omega^2 / 3) at omega about 0.5
+        ZoneState z = ConvectionOutputsTest.zone(R_SUN, M_SUN, 9.0e3, 2e-8, 0.3, 3.0);
+        double l = 1.8 * scaleHeight(z);
+        double u = textbookU(z, l);
+        double omega = z.opacity * z.density * l;
+        double q = omega * omega / 3.0 / (1.0 + omega * omega / 3.0);
+        double x = root(8.0 / 9.0, u, q * u, nablaRad(z) - z.nablaAd);
+        ConvectionResult out = solve(new TransparentEddyMixingLength(1.8, Criterion.SCHWARZSCHILD,
+                MixingLengthGeometry.BOHM_VITENSE_1958, 1.0 / 3.0), z);
+        double share = 9.0 * x * x * x / (8.0 * u * nablaRad(z));
+        assertEquals(share, out.convectiveFraction, 1e-8 * share);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void convectiveMixingCoefficientAtTheBaseOfAnEnvelope() {
+        // D = v l / 3 (Langer, El Eid & Fricke 1985, from memory) with the textbook v and l from the inputs
+        ZoneState z = envelopeBase(0.6);
+        double hp = scaleHeight(z);
+        double l = 1.8 * hp;
+        double u = textbookU(z, l);
+        double x = root(8.0 / 9.0, u, u, nablaRad(z) - z.nablaAd);
+        double v = l * Math.sqrt(gravity(z) * z.delta / (8.0 * hp)) * x;
+        assertEquals(v * l / 3.0, solve(new LocalMixingLength(), z).diffusion, 1e-9 * v * l / 3.0);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void fullSpectrumShareInEfficientConvection() {
+        // At the envelope base nabla is within 1e-6 of nabla_ad, so the convective share is nearly
+        // 1 - nabla_ad / nabla_rad (radiation carries what the adiabatic gradient carries); exactly it is
+        // F_conv / F = Phi (nabla - nabla_ad) / nabla_rad = (W - e) / nabla_rad from Canuto & Mazzitelli's flux
+        // equation, solved by Brent
+        ZoneState z = envelopeBase(0.6);
+        double u = textbookU(z, scaleHeight(z));
+        double w = nablaRad(z) - z.nablaAd;
+        double e = spectrumExcess(u, w);
+        ConvectionResult out = solve(new EddySpectrumConvection(1.0, Criterion.SCHWARZSCHILD, LengthScale.SCALE_HEIGHT), z);
+        assertEquals((w - e) / nablaRad(z), out.convectiveFraction, 1e-12);
+        assertEquals(1.0 - z.nablaAd / nablaRad(z), out.convectiveFraction, 1e-5);
+        assertEquals(1.0, out.convectiveFraction + out.radiativeFraction, 1e-14);
+    }
 }

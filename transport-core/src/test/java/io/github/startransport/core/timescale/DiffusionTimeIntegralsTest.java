@@ -94,4 +94,36 @@ class DiffusionTimeIntegralsTest {
         assertTrue(Math.abs(trapezoidError) > 1e-7 * reference, "the error term is resolved");
         assertEquals(reference + trapezoidError, Timescale.thermalDiffusion(r, k, rho, t, c), 1e-9 * reference);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void heatDiffusionWithATemperatureFallingLinearly() {
+        // kappa, rho, c_P constant and T = T_c (1 - r / (2R)): integral_0^R r / (1 - r / 2R)^3 dr = 2 R^2 (substitute
+        // u = 1 - r / 2R), so t_th = kappa rho^2 c_P 2 R^2 / (4 a c T_c^3) (Kippenhahn, Weigert & Weiss 2012 §5.1 for
+        // the diffusivity, from memory). The trapezoids err by (h^2 / 12)(f'(R) - f'(0)) to order h^4 (Euler-Maclaurin),
+        // with f = A r / (1 - r / 2R)^3: f' = A / u^3 + 3 A r / (2R u^4), u = 1 - r / 2R, so f'(0) = A, f'(R) = A (8 + 24) = 32 A.
+        int n = 1000;
+        double radius = 5e10;
+        double kappa = 1.5;
+        double rho = 2.0;
+        double cp = 3.3e8;
+        double tc = 8e6;
+        double[] r = new double[n];
+        double[] k = new double[n];
+        double[] d = new double[n];
+        double[] t = new double[n];
+        double[] c = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = radius * (i + 1.0) / n;
+            k[i] = kappa;
+            d[i] = rho;
+            t[i] = tc * (1.0 - r[i] / (2.0 * radius));
+            c[i] = cp;
+        }
+        double coefficient = kappa * rho * rho * cp / (4.0 * Codata2018.RADIATION_CONSTANT * C * tc * tc * tc);
+        double exact = coefficient * 2.0 * radius * radius;
+        double h = radius / n;
+        double error = h * h / 12.0 * (32.0 * coefficient - coefficient);
+        assertEquals(exact + error, Timescale.thermalDiffusion(r, k, d, t, c), 1e-9 * exact);
+    }
 }
