@@ -123,4 +123,33 @@ class ChandrasekharExponentsTest {
         double cp = (pg + pr) * delta / (rho * t * nablaAd);
         assertEquals(cp, out.cp, 1e-12 * cp);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void pressureSlopesOfTheThermodynamicsModelAreThoseOfTheWrittenOutLaw() {
+        // P = rho k T / (mu m_u) + a T^4 / 3 differentiated numerically here: chi_rho = (d ln P / d ln rho)_T = beta and
+        // chi_T = 4 - 3 beta (Kippenhahn, Weigert & Weiss 2012 §13.1, from memory), and the model's dP/dT, dP/drho
+        double mu = 1.0 / 1.62;
+        double gas = Codata2018.BOLTZMANN / (mu * Codata2018.ATOMIC_MASS_UNIT);
+        double a = Codata2018.RADIATION_CONSTANT;
+        java.util.function.DoubleBinaryOperator pressure = (rho, t) -> rho * gas * t + a * Math.pow(t, 4) / 3.0;
+        ThermoResult out = new ThermoResult();
+        for (double[] state : new double[][] {{1e4, 1e-7}, {1e7, 100.0}, {4e7, 3.0}, {1e8, 1.0}}) {
+            double t = state[0];
+            double rho = state[1];
+            IdealGasRadiation.INSTANCE.evaluate(t, rho, 0.7, 0.02, 0, out);
+            // P is linear in rho, so a wide step is exact there and keeps the gas term above the rounding of P
+            double hRho = 1e-3;
+            double dRho = (pressure.applyAsDouble(rho * (1 + hRho), t) - pressure.applyAsDouble(rho * (1 - hRho), t))
+                    / (2 * hRho * rho);
+            double h = 1e-6;
+            double dT = (pressure.applyAsDouble(rho, t * (1 + h)) - pressure.applyAsDouble(rho, t * (1 - h))) / (2 * h * t);
+            String at = "T = " + t + ", rho = " + rho;
+            assertEquals(dRho, out.dPressure[io.github.startransport.spi.ZoneInput.RHO], 1e-8 * dRho, at);
+            assertEquals(dT, out.dPressure[io.github.startransport.spi.ZoneInput.T], 1e-8 * dT, at);
+            double p = pressure.applyAsDouble(rho, t);
+            assertEquals(dRho * rho / p, out.chiRho, 1e-8, at);
+            assertEquals(dT * t / p, out.chiT, 1e-8, at);
+        }
+    }
 }

@@ -126,4 +126,35 @@ class DiffusionTimeIntegralsTest {
         double error = h * h / 12.0 * (32.0 * coefficient - coefficient);
         assertEquals(exact + error, Timescale.thermalDiffusion(r, k, d, t, c), 1e-9 * exact);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void turnoverIntegralConvergesAtASchwarzschildBoundary() {
+        // Above a Schwarzschild boundary W = nabla_rad - nabla_ad grows linearly with height, efficient convection
+        // carries F_conv proportional to W and v^3 is proportional to F_conv (v^3 = g delta l F_conv / (4 rho c_P T),
+        // Kippenhahn, Weigert & Weiss 2012 ch. 7 with l fixed), so v = v0 ((r - r_b) / d)^(1/3) near it. Then
+        // integral_b^t dr / v = 1.5 d^(1/3) (t - b)^(2/3) / v0 (Gilliland 1985 for the definition, from memory). On
+        // zones centred in cells of width h from the boundary each zone owns its cell (the code's rule): the
+        // midpoint rule, whose first cell misses 1.5 - 2^(1/3) of c h^(2/3) (c = d^(1/3) / v0; exact integral
+        // 1.5 c h^(2/3) against h c (h/2)^(-1/3)) and whose other cells underestimate the convex integrand by
+        // between 0 and (h^2 / 24)(f'(t) - f'(b + h)) <= c h^(2/3) / 72 (the midpoint rule's error term).
+        int n = 200;
+        double bottom = 5e10;
+        double d = 2e10;
+        double v0 = 3e4;
+        double h = d / n;
+        double[] r = new double[n];
+        double[] v = new double[n];
+        for (int i = 0; i < n; i++) {
+            r[i] = bottom + (i + 0.5) * h;
+            v[i] = v0 * Math.cbrt((r[i] - bottom) / d);
+        }
+        double c = Math.cbrt(d) / v0;
+        double exact = 1.5 * c * Math.pow(d, 2.0 / 3.0);
+        double firstCell = (1.5 - Math.cbrt(2.0)) * c * Math.pow(h, 2.0 / 3.0);
+        double rest = c * Math.pow(h, 2.0 / 3.0) / 72.0;
+        double turnover = Timescale.turnoverGlobal(r, v, 0, n - 1, bottom, bottom + d);
+        assertTrue(turnover <= exact - firstCell, turnover + " vs " + (exact - firstCell));
+        assertTrue(turnover >= exact - firstCell - rest, turnover + " vs " + (exact - firstCell - rest));
+    }
 }
