@@ -117,4 +117,70 @@ class BatchTextbookRootsTest {
             assertTrue(smallest < 1e-8 && largest > 10.0, "U from " + smallest + " to " + largest);
         }
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void batchTransparentEddiesFollowTheGeneralCubicAcrossOpticalThickness() {
+        // The transparent-eddy model in batch (its cubic has no start table: a0 changes with omega) over the same
+        // column, where omega = kappa rho l runs from about 1e-2 to 1e9: the general cubic with U' = q U,
+        // q = y omega^2 / (1 + y omega^2), y = 3 / (4 pi^2) (Henyey, Vardya & Bodenheimer 1965, form from memory)
+        ZoneColumns in = columns();
+        ConvectionColumns out = new ConvectionColumns(ZONES);
+        new io.github.startransport.core.convection.TransparentEddyMixingLength().solveColumns(in, 0, ZONES, out, true);
+        double y = 3.0 / (4.0 * Math.PI * Math.PI);
+        double thinnest = Double.POSITIVE_INFINITY;
+        for (int k = 0; k < ZONES; k++) {
+            double g = G * in.mass[k] / (in.radius[k] * in.radius[k]);
+            double hp = in.pressure[k] / (in.density[k] * g);
+            double l = 1.8 * hp;
+            double u = 3.0 * A_RAD * C * Math.pow(in.temperature[k], 3)
+                    / (in.cp[k] * in.density[k] * in.density[k] * in.opacity[k] * l * l)
+                    * Math.sqrt(8.0 * hp / (g * in.delta[k]));
+            double omega = in.opacity[k] * in.density[k] * l;
+            thinnest = Math.min(thinnest, omega);
+            double q = y * omega * omega / (1.0 + y * omega * omega);
+            double kCubic = 8.0 / 9.0;
+            double[] coefficients = {-kCubic * u * (1.2 - in.nablaAd[k]), 2.0 * kCubic * u * q * u, kCubic * u, 1.0};
+            double x = Double.NaN;
+            for (Complex r : new LaguerreSolver(1e-15, 1e-300, 1e-300).solveAllComplex(coefficients, 0.0)) {
+                if (r.getReal() > 0.0 && Math.abs(r.getImaginary()) <= 1e-9 * r.getReal()) {
+                    x = r.getReal();
+                }
+            }
+            String where = "zone " + k + ", omega = " + omega;
+            assertEquals(in.nablaAd[k] + x * x + 2.0 * q * u * x, out.nabla[k], 1e-9 * out.nabla[k], where);
+            double share = x * x * x / (kCubic * u * 1.2);
+            assertEquals(share, out.convectiveFraction[k], 1e-8 * share, where);
+        }
+        assertTrue(thinnest < 0.1, "omega down to " + thinnest);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void batchFullSpectrumFollowsItsFluxEquation() {
+        // The full-spectrum model in batch over the same column (U from 1e-9 to 1e2 at Lambda = 1.8 H_P): Canuto &
+        // Mazzitelli's (1991, ApJ 370, 295; fit constants from memory) nabla_rad - nabla = Phi(S)(nabla - nabla_ad),
+        // S = 40.5 (nabla - nabla_ad) / U^2, solved by Commons Math's Brent; F_conv / F = (nabla_rad - nabla) / nabla_rad
+        ZoneColumns in = columns();
+        ConvectionColumns out = new ConvectionColumns(ZONES);
+        new io.github.startransport.core.convection.EddySpectrumConvection(1.8, Criterion.SCHWARZSCHILD,
+                io.github.startransport.core.convection.LengthScale.SCALE_HEIGHT).solveColumns(in, 0, ZONES, out, true);
+        for (int k = 0; k < ZONES; k++) {
+            double g = G * in.mass[k] / (in.radius[k] * in.radius[k]);
+            double hp = in.pressure[k] / (in.density[k] * g);
+            double l = 1.8 * hp;
+            double u = 3.0 * A_RAD * C * Math.pow(in.temperature[k], 3)
+                    / (in.cp[k] * in.density[k] * in.density[k] * in.opacity[k] * l * l)
+                    * Math.sqrt(8.0 * hp / (g * in.delta[k]));
+            double w = 1.2 - in.nablaAd[k];
+            double e = new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-300, 1e-15).solve(1000, z -> {
+                double s = 40.5 * z / (u * u);
+                double phi = 24.868 * Math.pow(s, 0.14972) * Math.pow(Math.pow(1 + 0.097666 * s, 0.18931) - 1, 1.8503);
+                return z * (1 + phi) - w;
+            }, 0.0, w);
+            String where = "zone " + k + ", U = " + u;
+            assertEquals(in.nablaAd[k] + e, out.nabla[k], 1e-9 * e + 4.0 * Math.ulp(1.2), where);
+            assertEquals((w - e) / 1.2, out.convectiveFraction[k], 1e-9, where);
+        }
+    }
 }

@@ -185,4 +185,12 @@ class CodataRelationsTest {
         // lambda_C = h / (m_e c) = 2.426 310 238 67(73)e-12 m (CODATA 2018) = 2.426 310 238 67e-10 cm
         assertEquals(2.42631023867e-10, H / (Codata2018.ELECTRON_MASS * C), 1e-9 * 2.43e-10);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void bolometricMagnitudeOfTheNominalSun() {
+        // IAU 2015 Resolution B2: M_bol = -2.5 log10(L / L_0) with L_0 = 3.0128e28 W = 3.0128e35 erg s^-1 (exact), which
+        // gives M_bol = 4.74 for the nominal solar luminosity (the resolution quotes 4.74)
+        assertEquals(4.74, -2.5 * Math.log10(Iau2015.SOLAR_LUMINOSITY / 3.0128e35), 0.005);
+    }
 }
