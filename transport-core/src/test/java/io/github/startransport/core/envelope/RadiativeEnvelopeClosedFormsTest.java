@@ -84,4 +84,30 @@ class RadiativeEnvelopeClosedFormsTest {
         // mean over [0, 2/3]: at most 4e-6 of the integral, 3e-6 of P: 1e-5
         assertEquals(expected, GreyAtmosphereEnvelope.DEFAULT.photosphericPressure(STAR, setup), 1e-5 * expected);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void photosphericPressureUnderAKramersOpacityInClosedForm() {
+        // kappa = kappa_0 rho T^-3.5 (Kramers bound-free, Carroll & Ostlie 1996: kappa_0 = 4.34e25 Z (1 + X)) in a
+        // perfect gas rho = mu m_u P / (k T) through the Eddington atmosphere T^4 = 3/4 T_eff^4 (tau + 2/3):
+        // P dP = (g / kappa_0)(k / mu m_u) T^4.5 dtau, so P(2/3)^2 = P(0)^2 + 2 (g / kappa_0)(k / mu m_u)
+        // (3/4 T_eff^4)^(9/8) (8/17) [(4/3)^(17/8) - (2/3)^(17/8)], P(0) = a T_eff^4 / 6 (the elementary integral
+        // of the same atmosphere as above, with the opacity falling instead of rising with T)
+        double kappa0 = 4.34e25 * 0.02 * 1.7;
+        double mu = 0.6;
+        double k = 1.380649e-16;             // CODATA 2018
+        double mU = 1.66053906660e-24;       // CODATA 2018
+        EnvelopeSetup setup = new EnvelopeSetup(new LocalMixingLength(),
+                new TextbookModels.PowerLawOpacity(kappa0, 1.0, -3.5), new TextbookModels.PerfectGas(mu));
+        double r = STAR.radius();
+        double teff = Math.pow(STAR.luminosity() / (Math.PI * r * r * AC), 0.25);
+        double g = G * STAR.mass() / (r * r);
+        double integral = Math.pow(0.75 * Math.pow(teff, 4), 9.0 / 8) * 8.0 / 17
+                * (Math.pow(4.0 / 3, 17.0 / 8) - Math.pow(2.0 / 3, 17.0 / 8));
+        double p0 = A * Math.pow(teff, 4) / 6;
+        double expected = Math.sqrt(p0 * p0 + 2 * g / kappa0 * k / (mu * mU) * integral);
+        // the top at tau = 1e-6 instead of 0 leaves out less than 1e-6 of the integral (the integrand is smallest
+        // there): 1e-5
+        assertEquals(expected, GreyAtmosphereEnvelope.DEFAULT.photosphericPressure(STAR, setup), 1e-5 * expected);
+    }
 }
