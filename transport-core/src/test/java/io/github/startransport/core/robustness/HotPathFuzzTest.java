@@ -21,6 +21,7 @@ import io.github.startransport.spi.OutOfRangePolicy;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
 import io.github.startransport.spi.ProfileDiagnosis;
+import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.StabilityResult;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.TransportException;
@@ -32,6 +33,7 @@ import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
+import net.jqwik.api.Tag;
 import net.jqwik.api.Tuple;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.statistics.Statistics;
@@ -48,7 +50,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * output is finite and inside its range, or one of our {@link TransportException}s with a message.
  * Any other exception fails the property by escaping; a hang would fail the build by timing out
  * (every iteration in the library is bounded). The counts of accepted and refused inputs are
- * printed with the test report.
+ * printed with the test report, and each property fails when either outcome falls below the share
+ * its inputs are built for (jqwik coverage checks), so a fuzzer that only ever hits the guards, or
+ * never hits them, is caught.
  */
 class HotPathFuzzTest {
 
@@ -117,14 +121,56 @@ class HotPathFuzzTest {
         }
     }
 
+    /** The demo star's zones, a plausible base that one random field spoils in half the tries. */
+    private static final ZoneColumns DEMO = BatchColumns.demo();
+
+    /**
+     * 0: every field random; 1: a zone of the demo star with field {@code spoiled} replaced by its random
+     * value, so that a fair share of calls is accepted and reaches the solvers' convective branch.
+     */
+    @Provide
+    Arbitrary<Integer> mode() {
+        return Arbitraries.of(0, 1);
+    }
+
+    /**
+     * Each call's outcomes in the share of calls the inputs are built for: at least 10 % accepted
+     * (the call reached its computation) and at least 10 % refused (the guards were exercised). Design
+     * targets of this test, not physics; jqwik fails the property when a share falls short.
+     */
+    private static void outcomeShares(String call) {
+        Statistics.label(call).coverage(c -> {
+            c.check("accepted").percentage(p -> p >= 10.0);
+            c.check("refused").percentage(p -> p >= 10.0);
+        });
+    }
+
+    @Tag("internal")
     @Property(tries = 3000, seed = "7101")
     void hotPathCallsGiveAFiniteResultOrOurException(
             @ForAll("extreme") double t, @ForAll("extreme") double rho, @ForAll("extreme") double p,
             @ForAll("extreme") double l, @ForAll("extreme") double m, @ForAll("extreme") double r,
             @ForAll("extreme") double kappa, @ForAll("extreme") double cp, @ForAll("fraction") double nablaAd,
             @ForAll("extreme") double delta, @ForAll("extreme") double nablaMu, @ForAll("fraction") double x,
-            @ForAll("fraction") double z) {
-        ZoneState s = zone(t, rho, p, l, m, r, kappa, cp, nablaAd, delta, nablaMu, x, z * (1.0 - Math.abs(x)));
+            @ForAll("fraction") double z, @ForAll("mode") int mode, @ForAll @IntRange(min = 0, max = 12) int spoiled,
+            @ForAll @IntRange(min = 0, max = 99) int demoZone) {
+        ZoneState s;
+        if (mode == 0) {
+            s = zone(t, rho, p, l, m, r, kappa, cp, nablaAd, delta, nablaMu, x, z * (1.0 - Math.abs(x)));
+        } else {
+            int k = demoZone % DEMO.capacity;
+            double[] v = {DEMO.temperature[k], DEMO.density[k], DEMO.pressure[k], DEMO.luminosity[k], DEMO.mass[k],
+                DEMO.radius[k], DEMO.opacity[k], DEMO.cp[k], DEMO.nablaAd[k], DEMO.delta[k], DEMO.nablaMu[k],
+                DEMO.hydrogen[k], DEMO.metals[k]};
+            v[spoiled] = new double[] {t, rho, p, l, m, r, kappa, cp, nablaAd, delta, nablaMu, x, z}[spoiled];
+            s = zone(v[0], v[1], v[2], v[3], v[4], v[5], v[6], v[7], v[8], v[9], v[10], v[11], v[12]);
+        }
+        for (String call : List.of("stability", "convection with Jacobian", "convection values", "opacity analytic",
+                "opacity table", "thermodynamics")) {
+            outcomeShares(call);
+        }
+        // the accepted convection calls include convective zones, where the cubic is solved
+        Statistics.label("convection regime").coverage(c -> c.check(Regime.CONVECTIVE).percentage(q -> q >= 5.0));
         for (Criterion criterion : Criterion.values()) {
             StabilityResult out = new StabilityResult();
             try {
@@ -150,6 +196,7 @@ class HotPathFuzzTest {
                         model.solveValues(s, out);
                     }
                     Statistics.label(call).collect("accepted");
+                    Statistics.label("convection regime").collect(out.regime);
                     Object context = model + " " + s;
                     assertNotNull(out.regime);
                     for (double v : new double[] {out.nablaRad, out.nabla, out.nablaElement, out.velocity,
@@ -198,6 +245,7 @@ class HotPathFuzzTest {
     }
 
     /** The batch call over a column of garbage zones: refused naming a zone in range, or all finite. */
+    @Tag("internal")
     @Property(tries = 200, seed = "7102")
     void batchCallsGiveFiniteColumnsOrOurException(@ForAll("extreme") double a, @ForAll("extreme") double b,
                                                    @ForAll @IntRange(min = 0, max = 11) int field,
@@ -210,6 +258,10 @@ class HotPathFuzzTest {
         fields[field][k] = a;
         in.luminosity[(k + 1) % n] *= Double.isFinite(b) ? 1.0 + Math.abs(b) % 10.0 : 1.0;
         ConvectionColumns out = new ConvectionColumns(n);
+        Statistics.coverage(c -> {
+            c.check("accepted").percentage(q -> q >= 10.0);
+            c.check("refused").percentage(q -> q >= 10.0);
+        });
         try {
             new LocalMixingLength().solveColumns(in, 0, n, out, true);
             Statistics.collect("accepted");
@@ -227,6 +279,7 @@ class HotPathFuzzTest {
     }
 
     /** Whole-profile diagnosis of the demo star with one column spoiled: a finite diagnosis or our exception. */
+    @Tag("internal")
     @Property(tries = 150, seed = "7103")
     void diagnosisGivesFiniteColumnsOrOurException(@ForAll("extreme") double a,
                                                    @ForAll @IntRange(min = 0, max = 7) int column,
@@ -248,6 +301,10 @@ class HotPathFuzzTest {
         }
         DiagnosisSetup setup = new DiagnosisSetup(new LocalMixingLength(), AnalyticOpacity.DEFAULT,
                 IdealGasRadiation.INSTANCE);
+        Statistics.coverage(c -> {
+            c.check("accepted").percentage(q -> q >= 10.0);
+            c.check("refused").percentage(q -> q >= 10.0);
+        });
         try {
             ProfileDiagnosis d = LocalDiagnosis.INSTANCE.diagnose(new Profile("spoiled demo", cols), setup);
             Statistics.collect("accepted");
