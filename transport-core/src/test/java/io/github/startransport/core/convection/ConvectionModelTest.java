@@ -12,6 +12,7 @@ import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Transport;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;
@@ -45,25 +46,41 @@ class ConvectionModelTest {
         return z;
     }
 
+    /** H_P (cm) of the synthetic envelope point, derived by {@code src/test/resources/vectors/MixingLengthVectors.java}. */
+    static final double SYNTHETIC_SCALE_HEIGHT = 6.069587591e7;
+    /** U of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_LOSS_PARAMETER = 0.0420147842;
+    /** nabla of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_NABLA = 0.635589553;
+    /** nabla_e of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_NABLA_ELEMENT = 0.437293080;
+    /** v (cm/s) of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_VELOCITY = 3.65536581e5;
+    /** F_conv / F of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_CONVECTIVE_FRACTION = 0.7881368156;
+
     /**
      * A synthetic envelope point solved with the textbook equations of Kippenhahn, Weigert &amp;
      * Weiss (2012, ch. 7): rho = 3e-7, T = 1.2e4, kappa = 10, g = 2.74e4, alpha = 1.8, nabla_rad = 3,
      * ideal gas plus radiation with mu = 0.6 (P, c_P, delta, nabla_ad rounded to 7 digits). The
-     * expected values were computed from those equations and recomputed independently in 40-digit
-     * arithmetic (xi-form of the cubic); tolerances allow for the 7-digit inputs.
+     * expected values come from those equations in 60-digit arithmetic (xi-form of the cubic, solved by
+     * bisection): {@code src/test/resources/vectors/MixingLengthVectors.java} derives them, and
+     * {@code MixingLengthVectorsTest} reruns it on every build against the constants above; tolerances
+     * allow for the 7-digit inputs.
      */
+    @Tag("external")
     @Test
     void syntheticEnvelopePoint() {
         ZoneState z = zone(1.2e4, 3e-7, 4.989201e5, 10.0, 3.467265e8, 1.000419, 0.39987430, 2.74e4, 3.0);
         ConvectionResult out = new ConvectionResult();
         new LocalMixingLength().solve(z, out);
         assertEquals(Regime.CONVECTIVE, out.regime);
-        assertEquals(6.069587591e7, out.scaleHeight, 1e-8 * 6.07e7);
-        assertEquals(0.0420147842, out.lossParameter, 1e-8 * 0.042);
-        assertEquals(0.635589553, out.nabla, 1e-8);
-        assertEquals(0.437293080, out.nablaElement, 1e-8);
-        assertEquals(3.65536581e5, out.velocity, 1e-7 * 3.66e5);
-        assertEquals(0.7881368156, out.convectiveFraction, 1e-8);
+        assertEquals(SYNTHETIC_SCALE_HEIGHT, out.scaleHeight, 1e-8 * 6.07e7);
+        assertEquals(SYNTHETIC_LOSS_PARAMETER, out.lossParameter, 1e-8 * 0.042);
+        assertEquals(SYNTHETIC_NABLA, out.nabla, 1e-8);
+        assertEquals(SYNTHETIC_NABLA_ELEMENT, out.nablaElement, 1e-8);
+        assertEquals(SYNTHETIC_VELOCITY, out.velocity, 1e-7 * 3.66e5);
+        assertEquals(SYNTHETIC_CONVECTIVE_FRACTION, out.convectiveFraction, 1e-8);
         // D = v l / 3 with l = alpha H_P (kinetic estimate, Langer, El Eid & Fricke 1985, from memory)
         assertEquals(1.8 * out.scaleHeight * out.velocity / 3.0, out.diffusion, 1e-12 * out.diffusion);
     }
@@ -94,6 +111,7 @@ class ConvectionModelTest {
      * nabla is within 1e-5 of nabla_ad, convection carries 1 - nabla_ad/nabla_rad of the flux, and v is of order 10^3-10^5 cm/s (tens of m/s in the deep
      * envelope; from memory).
      */
+    @Tag("law")
     @Test
     void deepSolarEnvelope() {
         ZoneState z = solarLike(0.85, 1.0e6, 0.05, 10.0);
@@ -112,6 +130,7 @@ class ConvectionModelTest {
      * of order km/s (peak convective velocities of a few km/s below the solar surface, from memory).
      * With optically thin eddies allowed for, losses are smaller and nabla cannot rise.
      */
+    @Tag("law")
     @Test
     void nearSolarSurface() {
         ZoneState z = solarLike(1.0, 1.0e4, 3e-7, 10.0);
@@ -127,6 +146,7 @@ class ConvectionModelTest {
     }
 
     /** A stable zone: nabla = nabla_rad, no convective flux, radiative fraction 1. */
+    @Tag("law")
     @Test
     void stableZoneCarriesNoConvectiveFlux() {
         ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.2);
@@ -144,6 +164,7 @@ class ConvectionModelTest {
      * A semiconvective zone (Ledoux) gets D_sc = alpha_sc (4acT^3 / (3 kappa rho)) / (6 c_P rho)
      * (nabla - nabla_ad) / (nabla_L - nabla) with nabla = nabla_rad (Langer, Sugimoto &amp; Fricke 1983, from memory).
      */
+    @Tag("external")
     @Test
     void semiconvectiveZoneUsesTheLangerCoefficient() {
         ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.45);
@@ -161,6 +182,7 @@ class ConvectionModelTest {
      * A thermohaline zone gets D_th = C_t (4acT^3 / (3 kappa rho^2 c_P)) (phi/delta)(-nabla_mu)/(nabla_ad - nabla)
      * (Kippenhahn, Ruschenplatt &amp; Thomas 1980; Charbonnel &amp; Zahn 2007; from memory).
      */
+    @Tag("external")
     @Test
     void thermohalineZoneUsesTheFingerCoefficient() {
         ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.3);
@@ -173,6 +195,7 @@ class ConvectionModelTest {
         assertEquals(expected, out.diffusion, 1e-12 * expected);
     }
 
+    @Tag("internal")
     @Test
     void discoveredByNameWithTextbookDefault() {
         ConvectionModel dflt = TRANSPORT.convection(null, ModelOptions.defaults());
@@ -190,6 +213,7 @@ class ConvectionModelTest {
         assertEquals(0.3333333333, t.eddyShape());
     }
 
+    @Tag("internal")
     @Test
     void unknownOrMalformedOptionsAreRefused() {
         assertThrows(InvalidOptionException.class,
@@ -200,6 +224,7 @@ class ConvectionModelTest {
                 () -> TRANSPORT.convection(LocalMixingLength.NAME, ModelOptions.parse("alpha=abc")));
     }
 
+    @Tag("internal")
     @Test
     void nonPositiveAlphaIsRefused() {
         InvalidInputException e = assertThrows(InvalidInputException.class,
@@ -210,6 +235,7 @@ class ConvectionModelTest {
                 MixingLengthGeometry.BOHM_VITENSE_1958));
     }
 
+    @Tag("internal")
     @Test
     void badZoneInputIsRefusedWithFieldValueUnitAndZone() {
         refused("temperature", "K", Double.NaN, z -> z.temperature = Double.NaN);
@@ -244,6 +270,7 @@ class ConvectionModelTest {
      * Overshoot through the SPI: D(0) = D_0 and D(f H_P / 2) = D_0 / e for D = D_0 exp(-2z/(f H_P))
      * (Freytag, Ludwig &amp; Steffen 1996; Herwig 2000; from memory).
      */
+    @Tag("external")
     @Test
     void overshootThroughTheContract() {
         ConvectionModel m = TRANSPORT.convection(LocalMixingLength.NAME, ModelOptions.parse("overshoot-f=0.02"));

@@ -7,6 +7,7 @@ import org.opentest4j.AssertionFailedError;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assertions.fail;
 
 /**
  * The Newton iteration of the mixing-length cubic a0 Gamma^3 + Gamma^2 + Gamma = S is bounded: over
@@ -28,11 +29,11 @@ class CubicIterationBoundTest {
      * positive; it satisfies the equation to rounding relative to its largest term (S).
      */
     static void assertRoot(double a0, double s, double root) {
-        String where = "a0 = " + a0 + ", S = " + s + ", Gamma = " + root;
-        assertTrue(Double.isFinite(root), "not finite: " + where);
-        assertTrue(root > 0.0, "not positive: " + where);
         double residual = MixingLengthCubic.residual(a0, s, root);
-        assertTrue(Math.abs(residual) <= 1e-12 * s, "residual " + residual + ": " + where);
+        if (!Double.isFinite(root) || !(root > 0.0) || !(Math.abs(residual) <= 1e-12 * s)) {
+            fail("not a finite positive root: a0 = " + a0 + ", S = " + s + ", Gamma = " + root + ", residual "
+                    + residual);
+        }
     }
 
     @Tag("law")

@@ -1,5 +1,6 @@
 package io.github.startransport.core.convection;
 
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -11,9 +12,12 @@ class MixingLengthCubicTest {
     /**
      * Kippenhahn, Weigert &amp; Weiss (2012, ch. 7): the cubic
      * xi^3 - (19U/9) xi^2 + 3U^2 xi - U^3 - (8U/9)(U^2 + W) = 0 with nabla = nabla_ad + xi^2 - U^2
-     * and Gamma = (xi - U)/(2U), nabla_ad = 0.4. Values computed from those equations, and recomputed
-     * independently here in 40-digit arithmetic (polynomial roots of the xi form) before use.
+     * and Gamma = (xi - U)/(2U), nabla_ad = 0.4. Values derived from those equations in 60-digit
+     * arithmetic by {@code src/test/resources/vectors/MixingLengthVectors.java} (bisection on the xi form,
+     * no code of the library); {@code MixingLengthVectorsTest} reruns it on every build and compares
+     * each value below with it.
      */
+    @Tag("external")
     @ParameterizedTest
     @CsvSource({
             "1e-6, 1,   0.00961570078658671, 0.400092461700617, 4807.35039329335",

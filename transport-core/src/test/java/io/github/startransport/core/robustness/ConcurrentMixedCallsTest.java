@@ -13,6 +13,7 @@ import io.github.startransport.spi.OutOfRangePolicy;
 import io.github.startransport.spi.StabilityResult;
 import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.Timeout;
 
@@ -85,6 +86,7 @@ class ConcurrentMixedCallsTest {
         return h * 1_000_003L + Double.doubleToRawLongBits(d);
     }
 
+    @Tag("internal")
     @Test
     @Timeout(120)
     void eightThreadsMatchASerialRunBitForBit() throws Exception {
