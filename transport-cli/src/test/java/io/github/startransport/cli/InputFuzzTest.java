@@ -30,7 +30,7 @@ import java.util.stream.Stream;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 
 /**
  * Garbage through the whole tool: profile files and {@code --columns} maps given to
@@ -332,11 +332,7 @@ class InputFuzzTest {
             ProfileFiles.ROWS[3], ProfileFiles.ROWS[4]};
         Path file = ProfileFiles.write(home, "p.csv", lines);
         assertEquals(1, diagnose(file, Expect.REFUSE_AT_CELL, 3, 4));
-        try {
-            diagnose(file, Expect.REFUSE_AT_CELL, 3, 5);
-        } catch (org.opentest4j.AssertionFailedError expected) {
-            return;
-        }
-        fail("a refusal at 3:4 passed as one at 3:5");
+        assertThrows(org.opentest4j.AssertionFailedError.class, () -> diagnose(file, Expect.REFUSE_AT_CELL, 3, 5),
+                "a refusal at 3:4 passed as one at 3:5");
     }
 }
