@@ -145,7 +145,11 @@ class ConvectionModelTest {
         assertTrue(thin.velocity > 1e4 && thin.velocity < 1e6, thin::toString);
     }
 
-    /** A stable zone: nabla = nabla_rad, no convective flux, radiative fraction 1. */
+    /**
+     * A stable zone: nabla = nabla_rad, no convective flux, radiative fraction 1 (a layer stable by the
+     * Schwarzschild criterion carries its whole flux by radiation; Kippenhahn, Weigert &amp; Weiss 2012 §6.1, from
+     * memory).
+     */
     @Tag("law")
     @Test
     void stableZoneCarriesNoConvectiveFlux() {
@@ -162,13 +166,16 @@ class ConvectionModelTest {
 
     /**
      * A semiconvective zone (Ledoux) gets D_sc = alpha_sc (4acT^3 / (3 kappa rho)) / (6 c_P rho)
-     * (nabla - nabla_ad) / (nabla_L - nabla) with nabla = nabla_rad (Langer, Sugimoto &amp; Fricke 1983, from memory).
+     * (nabla - nabla_ad) / (nabla_L - nabla) with nabla = nabla_rad (Langer, Sugimoto &amp; Fricke 1983, from memory)
+     * and nabla_L = nabla_ad + (phi/delta) nabla_mu (Kippenhahn, Weigert &amp; Weiss 2012 §6.1, from memory). phi and
+     * delta differ from 1 and from each other, so a swapped or dropped phi/delta changes nabla_L and fails.
      */
     @Tag("external")
     @Test
     void semiconvectiveZoneUsesTheLangerCoefficient() {
-        ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.45);
-        z.nablaMu = 0.1; // nabla_L = 0.5
+        ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 2.0, 0.4, 1e5, 0.45);
+        z.phi = 0.8;
+        z.nablaMu = 0.25; // nabla_L = 0.4 + (0.8 / 2.0) 0.25 = 0.5
         ConvectionModel model = LocalMixingLength.fromOptions(ModelOptions.parse("criterion=ledoux,semiconvection-efficiency=0.02"));
         ConvectionResult out = new ConvectionResult();
         model.solve(z, out);
@@ -180,18 +187,20 @@ class ConvectionModelTest {
 
     /**
      * A thermohaline zone gets D_th = C_t (4acT^3 / (3 kappa rho^2 c_P)) (phi/delta)(-nabla_mu)/(nabla_ad - nabla)
-     * (Kippenhahn, Ruschenplatt &amp; Thomas 1980; Charbonnel &amp; Zahn 2007; from memory).
+     * (Kippenhahn, Ruschenplatt &amp; Thomas 1980; Charbonnel &amp; Zahn 2007; from memory), with phi = 0.9 and
+     * delta = 1.6 so that a swapped or dropped phi/delta fails.
      */
     @Tag("external")
     @Test
     void thermohalineZoneUsesTheFingerCoefficient() {
-        ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.3);
+        ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.6, 0.4, 1e5, 0.3);
+        z.phi = 0.9;
         z.nablaMu = -1e-3;
         ConvectionResult out = new ConvectionResult();
         new LocalMixingLength().solve(z, out);
         assertEquals(Regime.THERMOHALINE, out.regime);
         double kT = 4.0 * TestZones.A_RAD * TestZones.C * 1e21 / (3.0 * 1.0 * 100.0 * 3e8);
-        double expected = 1000.0 * kT * 1e-3 / (0.4 - out.nablaRad);
+        double expected = 1000.0 * kT * (0.9 / 1.6) * 1e-3 / (0.4 - out.nablaRad);
         assertEquals(expected, out.diffusion, 1e-12 * expected);
     }
 
