@@ -4,7 +4,8 @@ import java.math.RoundingMode;
 
 /**
  * Derives, in 60-digit decimal arithmetic, the many-digit expected values of
- * {@code MixingLengthCubicTest} and of {@code ConvectionModelTest.syntheticEnvelopePoint}.
+ * {@code MixingLengthCubicTest} and of {@code ConvectionModelTest} (the synthetic envelope point and the
+ * two solar-like zones).
  *
  * <p>Run it with nothing but a JDK (11 or newer; no project class is used):
  * <pre>
@@ -113,5 +114,61 @@ public final class MixingLengthVectors {
         print("envelope", "nablaElement", nablaE);
         print("envelope", "velocity", v);
         print("envelope", "convectiveFraction", fconv);
+
+        // ConvectionModelTest.deepSolarEnvelope and nearSolarSurface: solar-like zones of ideal gas plus
+        // radiation with mu = 0.6 at r = f R_sun, m = M_sun, L = L_sun
+        solarLike("deep", d("0.85"), d("1.0e6"), d("0.05"), d("10"));
+        solarLike("surface", d("1.0"), d("1.0e4"), d("3e-7"), d("10"));
+        print("check", "pi", PI);
+    }
+
+    /** pi to 50 digits (value from memory; its digits are checked against Math.PI's 16 in the test). */
+    static final BigDecimal PI = d("3.14159265358979323846264338327950288419716939937510");
+
+    /**
+     * A zone of ideal gas plus radiation (Chandrasekhar 1939; Kippenhahn, Weigert &amp; Weiss 2012 ch. 13):
+     * beta = P_gas / P with P_gas = rho k T / (mu m_u), P_rad = a T^4 / 3;
+     * c_P = (k / (mu m_u)) (32 - 24 beta - 3 beta^2) / (2 beta^2), delta = (4 - 3 beta) / beta,
+     * nabla_ad = 2 (4 - 3 beta) / (32 - 24 beta - 3 beta^2); gravity g = G m / r^2 and the radiative
+     * gradient nabla_rad = 3 kappa L P / (16 pi a c G m T^4) (KWW eq. 5.28); then the cubic as above
+     * with l = alpha H_P, alpha = 1.8 (H_P is far below r in both zones, so min(H_P, r) = H_P).
+     * Constants: k = 1.380649e-16 erg/K (exact), m_u = 1.66053906660e-24 g, G = 6.67430e-8 (CODATA 2018);
+     * R_sun = 6.957e10 cm, L_sun = 3.828e33 erg/s, (GM)_sun = 1.3271244e26 cm^3 s^-2 (IAU 2015 B3),
+     * M_sun = (GM)_sun / G.
+     */
+    static void solarLike(String name, BigDecimal f, BigDecimal t, BigDecimal rho, BigDecimal kappa) {
+        BigDecimal c = d("2.99792458e10");
+        BigDecimal a = d("4").multiply(d("5.670374419e-5"), MC).divide(c, MC);
+        BigDecimal k = d("1.380649e-16");
+        BigDecimal mu = d("1.66053906660e-24");
+        BigDecimal g0 = d("6.67430e-8");
+        BigDecimal mass = d("1.3271244e26").divide(g0, MC);
+        BigDecimal r = f.multiply(d("6.957e10"), MC);
+        BigDecimal lum = d("3.828e33");
+        BigDecimal gasConstant = k.divide(d("0.6").multiply(mu, MC), MC);
+        BigDecimal pg = rho.multiply(gasConstant, MC).multiply(t, MC);
+        BigDecimal pr = a.multiply(t.pow(4, MC), MC).divide(d("3"), MC);
+        BigDecimal p = pg.add(pr, MC);
+        BigDecimal beta = pg.divide(p, MC);
+        BigDecimal poly = d("32").subtract(d("24").multiply(beta, MC), MC).subtract(d("3").multiply(beta.pow(2, MC), MC), MC);
+        BigDecimal cp = gasConstant.multiply(poly, MC).divide(d("2").multiply(beta.pow(2, MC), MC), MC);
+        BigDecimal delta = d("4").subtract(d("3").multiply(beta, MC), MC).divide(beta, MC);
+        BigDecimal ad = d("2").multiply(d("4").subtract(d("3").multiply(beta, MC), MC), MC).divide(poly, MC);
+        BigDecimal g = g0.multiply(mass, MC).divide(r.pow(2, MC), MC);
+        BigDecimal nablaRad = d("3").multiply(kappa, MC).multiply(lum, MC).multiply(p, MC)
+                .divide(d("16").multiply(PI, MC).multiply(a, MC).multiply(c, MC).multiply(g0, MC).multiply(mass, MC)
+                        .multiply(t.pow(4, MC), MC), MC);
+        BigDecimal hp = p.divide(rho.multiply(g, MC), MC);
+        BigDecimal l = d("1.8").multiply(hp, MC);
+        BigDecimal u = d("3").multiply(a, MC).multiply(c, MC).multiply(t.pow(3, MC), MC)
+                .divide(cp.multiply(rho.pow(2, MC), MC).multiply(kappa, MC).multiply(l.pow(2, MC), MC), MC)
+                .multiply(d("8").multiply(hp, MC).divide(g.multiply(delta, MC), MC).sqrt(MC), MC);
+        BigDecimal xi = xi(u, nablaRad.subtract(ad, MC));
+        BigDecimal nabla = ad.add(xi.pow(2, MC), MC).subtract(u.pow(2, MC), MC);
+        BigDecimal v = l.multiply(g.multiply(delta, MC).divide(d("8").multiply(hp, MC), MC).sqrt(MC), MC)
+                .multiply(xi.subtract(u, MC), MC);
+        print(name, "nablaRad", nablaRad);
+        print(name, "excess", nabla.subtract(ad, MC));
+        print(name, "velocity", v);
     }
 }

@@ -19,8 +19,8 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
- * The many-digit literals of {@link MixingLengthCubicTest} and {@link ConvectionModelTest} are what
- * their derivation gives: runs {@code src/test/resources/vectors/MixingLengthVectors.java} (60-digit
+ * The many-digit literals of {@link MixingLengthCubicTest} and {@link ConvectionModelTest} (the
+ * synthetic envelope point, the deep and the near-surface solar-like zones) are what their derivation gives: runs {@code src/test/resources/vectors/MixingLengthVectors.java} (60-digit
  * decimal arithmetic, no code of the library) in a child JVM, as a person would from the module's
  * folder, and requires each literal to lie within one unit of its own last digit of the derived value.
  * A literal retyped wrongly, or a derivation changed without the tests, fails here.
@@ -84,7 +84,20 @@ class MixingLengthVectorsTest {
         assertLiteral(Double.toString(ConvectionModelTest.SYNTHETIC_CONVECTIVE_FRACTION),
                 derived.get("envelope,convectiveFraction"), "F_conv/F");
         compared += 6;
-        assertEquals(24, compared);
+        for (String zone : new String[] {"deep", "surface"}) {
+            boolean deep = zone.equals("deep");
+            assertLiteral(Double.toString(deep ? ConvectionModelTest.DEEP_NABLA_RAD : ConvectionModelTest.SURFACE_NABLA_RAD),
+                    derived.get(zone + ",nablaRad"), zone + " nabla_rad");
+            assertLiteral(Double.toString(deep ? ConvectionModelTest.DEEP_EXCESS : ConvectionModelTest.SURFACE_EXCESS),
+                    derived.get(zone + ",excess"), zone + " nabla - nabla_ad");
+            assertLiteral(Double.toString(deep ? ConvectionModelTest.DEEP_VELOCITY : ConvectionModelTest.SURFACE_VELOCITY),
+                    derived.get(zone + ",velocity"), zone + " v");
+            compared += 3;
+        }
+        // the derivation's 50-digit pi (typed from memory) agrees with the double nearest pi
+        assertEquals(Math.PI, derived.get("check,pi").doubleValue());
+        compared++;
+        assertEquals(31, compared);
         assertEquals(derived.size(), compared, "values derived but compared with no literal: " + derived.keySet());
     }
 }
