@@ -20,6 +20,7 @@ import io.github.startransport.spi.OpacityResult;
 import io.github.startransport.spi.OutOfRangePolicy;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
+import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.ProfileDiagnosis;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.StabilityResult;
@@ -58,7 +59,8 @@ class HotPathFuzzTest {
 
     private static final List<ConvectionModel> CONVECTION = List.of(new LocalMixingLength(),
             new LocalMixingLength().withAlpha(1e-3), new TransparentEddyMixingLength(),
-            new TransparentEddyMixingLength().withAlpha(5.0));
+            new TransparentEddyMixingLength().withAlpha(5.0),
+            LocalMixingLength.fromOptions(ModelOptions.parse("criterion=ledoux")));
     private static final List<OpacityModel> OPACITY = List.of(AnalyticOpacity.DEFAULT,
             new TabulatedOpacity(DemoTable.set(), OutOfRangePolicy.REFUSE),
             new TabulatedOpacity(DemoTable.set(), OutOfRangePolicy.CLAMP),
@@ -170,7 +172,11 @@ class HotPathFuzzTest {
             outcomeShares(call);
         }
         // the accepted convection calls include convective zones, where the cubic is solved
-        Statistics.label("convection regime").coverage(c -> c.check(Regime.CONVECTIVE).percentage(q -> q >= 5.0));
+        Statistics.label("convection regime").coverage(c -> {
+            c.check(Regime.CONVECTIVE).percentage(q -> q >= 5.0);
+            c.check(Regime.SEMICONVECTIVE).count(n -> n >= 10);
+            c.check(Regime.THERMOHALINE).count(n -> n >= 10);
+        });
         for (Criterion criterion : Criterion.values()) {
             StabilityResult out = new StabilityResult();
             try {
