@@ -23,6 +23,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.function.IntSupplier;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
@@ -33,8 +34,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
 /**
- * Garbage through the whole tool: profile files and {@code --columns} maps given to
- * {@code diagnose}, whose output folder already holds a previous result. The tool's own contract
+ * Garbage through the whole tool: profile files, opacity-table files and {@code --columns} maps given
+ * to {@code diagnose}, whose output folder already holds a previous result. The tool's own contract
  * is checked on every try:
  * <ul>
  *   <li>the exit code means what the README says: 0 success, 1 a file that cannot be read or holds
@@ -72,7 +73,18 @@ class InputFuzzTest {
         Path valid = ProfileFiles.valid(home, "valid.csv");
         Runs r = Runs.run("diagnose", valid.toString(), "--out", out.toString());
         assertEquals(0, r.code(), r.toString());
+        // a small table over the demo star's range (log T 3.5-8.5, log R -9 to 1), written by the tool itself
+        Path table = home.resolve("base-table.csv");
+        Runs t = Runs.run("table", "build", "--out", table.toString(), "--log-t", "3.5:8.5:11", "--log-r", "-9:1:11",
+                "--hydrogen", "0,0.7");
+        assertEquals(0, t.code(), t.toString());
+        baseTable = Files.readAllLines(table);
+        demoZones = io.github.startransport.spi.Transport.discover()
+                .star(null, io.github.startransport.spi.ModelOptions.defaults()).profile().size();
     }
+
+    private static List<String> baseTable;
+    private static int demoZones;
 
     @AfterContainer
     static void cleanUp() throws IOException {
@@ -103,13 +115,29 @@ class InputFuzzTest {
      */
     private static int diagnose(Path file, Expect expect, int line, int column, String... options)
             throws IOException {
-        Snapshot before = Snapshot.take();
         List<String> args = new ArrayList<>(List.of("diagnose", file.toString(), "--out", out.toString()));
         args.addAll(List.of(options));
+        return tool(args, file, expect, line, column, () -> ProfileCsvReader.read(file,
+                options.length == 0 ? ColumnMap.none() : ColumnMap.parse(options[1])).profile().size());
+    }
+
+    /**
+     * Runs the tool and checks the contract (class comment).
+     *
+     * @param named  the input file a refusal must name
+     * @param line   the 1-based line a refusal must name, or 0 when any or none may be named
+     * @param column the 1-based column a refusal must name, or 0
+     * @param zones  the number of zones a successful run must write
+     * @return the exit code
+     */
+    private static int tool(List<String> args, Path named, Expect expect, int line, int column, IntSupplier zones)
+            throws IOException {
+        Snapshot before = Snapshot.take();
         Runs r = Runs.run(args.toArray(String[]::new));
         Statistics.label("exit code").collect(r.code());
         assertTrue(r.code() >= 0 && r.code() <= 2, "exit code " + r.code() + "\n" + r);
         assertTrue(!STACK.matcher(r.err()).find() && !r.err().contains("internal error"), r.toString());
+        boolean usageOption = args.contains("--columns");
         if (r.code() == 0) {
             assertTrue(expect != Expect.REFUSE_AT_CELL && expect != Expect.REFUSE_AT_LINE, "accepted:\n" + r);
             assertEquals(OutputFolderTest.expectedBeside(out.getParent(), "out"), OutputFolderTest.names(out.getParent()),
@@ -117,10 +145,8 @@ class InputFuzzTest {
             for (String f : FILES) {
                 assertTrue(Files.size(out.resolve(f)) > 0, f);
             }
-            List<String> zones = Files.readAllLines(out.resolve("zones.csv"));
-            Profile p = ProfileCsvReader.read(file, options.length == 0 ? ColumnMap.none()
-                    : ColumnMap.parse(options[1])).profile();
-            assertEquals(p.size() + 1, zones.size(), "zones.csv: a header and one row per zone");
+            List<String> written = Files.readAllLines(out.resolve("zones.csv"));
+            assertEquals(zones.getAsInt() + 1, written.size(), "zones.csv: a header and one row per zone");
             new ObjectMapper().readTree(out.resolve("summary.json").toFile());
             return 0;
         }
@@ -131,20 +157,20 @@ class InputFuzzTest {
         assertArrayEquals(before.zones(), after.zones(), "zones.csv changed by a refused run");
         assertArrayEquals(before.summary(), after.summary(), "summary.json changed by a refused run");
         if (r.code() == 2) {
-            assertTrue(options.length > 0 && r.err().contains("--columns"), "usage error without --columns:\n" + r);
+            assertTrue(usageOption && r.err().contains("--columns"), "usage error without --columns:\n" + r);
             return 2;
         }
         assertTrue(expect != Expect.ACCEPT, "refused:\n" + r);
-        Matcher m = Pattern.compile("(?m)^startransport: " + Pattern.quote(file.toString())
+        Matcher m = Pattern.compile("(?m)^startransport: " + Pattern.quote(named.toString())
                 + "(?::(\\d+))?(?::(\\d+))?: \\S").matcher(r.err());
         assertTrue(m.find(), "the refusal does not name the file as FILE[:LINE[:COLUMN]]: reason\n" + r);
-        int named = m.group(1) == null ? 0 : Integer.parseInt(m.group(1));
-        int at = m.group(2) == null ? 0 : Integer.parseInt(m.group(2));
-        Statistics.label("refusal names").collect(named > 0 && at > 0 ? "line and column" : named > 0 ? "line" : "file");
+        int at = m.group(1) == null ? 0 : Integer.parseInt(m.group(1));
+        int col = m.group(2) == null ? 0 : Integer.parseInt(m.group(2));
+        Statistics.label("refusal names").collect(at > 0 && col > 0 ? "line and column" : at > 0 ? "line" : "file");
         if (expect == Expect.REFUSE_AT_CELL) {
-            assertEquals(line + ":" + column, named + ":" + at, "place of the refused cell\n" + r);
+            assertEquals(line + ":" + column, at + ":" + col, "place of the refused cell\n" + r);
         } else if (expect == Expect.REFUSE_AT_LINE) {
-            assertEquals(line, named, "line of the refused row\n" + r);
+            assertEquals(line, at, "line of the refused row\n" + r);
         }
         return 1;
     }
@@ -284,6 +310,67 @@ class InputFuzzTest {
         Path file = home.resolve("p.csv");
         Files.writeString(file, HEADER + "\n" + String.join("\n", rows) + "\n", StandardCharsets.UTF_8);
         diagnose(file, expect, row + 2, column + 1);
+    }
+
+    @Provide
+    Arbitrary<String> tableCell() {
+        return Arbitraries.oneOf(cell(), Arbitraries.doubles().between(-3.0, 3.0).ofScale(3).map(String::valueOf));
+    }
+
+    /**
+     * What the tool must do with a table file one of whose fields is replaced (the format of the
+     * README's opacity-table section: decimal numbers, spaces around them allowed): a field that is
+     * plainly no finite decimal number is refused at its line and at the character column where the
+     * field starts; a comma adds a field, refused at its line; another number may be accepted (a new
+     * log kappa) or refused as a grid that is no longer rectangular, a duplicate or a composition out
+     * of range (somewhere); quotes aside, comment marks, blanks and line breaks are left to the
+     * general contract.
+     */
+    static Expect expectInTable(String spoil) {
+        if (spoil.chars().anyMatch(ch -> ch == '\n' || ch == '\r' || ch == '#' || Character.isWhitespace(ch)
+                || Character.isSpaceChar(ch))) {
+            return Expect.EITHER;
+        }
+        if (spoil.indexOf(',') >= 0) {
+            return Expect.REFUSE_AT_LINE;
+        }
+        if (!DECIMAL.matcher(spoil).matches() || !Double.isFinite(Double.parseDouble(spoil))) {
+            return Expect.REFUSE_AT_CELL;
+        }
+        return Expect.EITHER;
+    }
+
+    @Property(tries = 40, seed = "604")
+    void spoiledTableFilesThroughTheToolKeepItsContract(@ForAll("tableCell") String spoil,
+                                                        @ForAll @IntRange(min = 0, max = 241) int row,
+                                                        @ForAll @IntRange(min = 0, max = 5) int field)
+            throws IOException {
+        List<String> lines = new ArrayList<>(baseTable);
+        int header = lines.indexOf("X,Z,log_T,log_R,log_kappa");
+        assertTrue(header >= 0, "no header in " + lines.subList(0, 5));
+        int line = header + 1 + row % (lines.size() - header - 1); // 0-based index of a data line
+        Expect expect = Expect.ACCEPT;
+        int column = 0;
+        if (field < 5) {
+            String[] f = lines.get(line).split(",", -1);
+            for (int i = 0; i < field; i++) {
+                column += f[i].length() + 1;
+            }
+            column++;
+            f[field] = spoil;
+            lines.set(line, String.join(",", f));
+            expect = expectInTable(spoil);
+        }
+        Statistics.label("expected").collect(expect);
+        Statistics.label("exit code").coverage(c -> {
+            c.check(0).percentage(p -> p >= 15.0);
+            c.check(1).percentage(p -> p >= 40.0);
+        });
+        Statistics.label("refusal names").coverage(c -> c.check("line and column").percentage(p -> p >= 50.0));
+        Path table = home.resolve("t.csv");
+        Files.write(table, lines, StandardCharsets.UTF_8);
+        tool(List.of("diagnose", "--demo", "--opacity-table", table.toString(), "--out", out.toString()), table, expect,
+                line + 1, column, () -> demoZones);
     }
 
     /**
