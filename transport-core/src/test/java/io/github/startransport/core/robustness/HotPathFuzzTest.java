@@ -211,6 +211,19 @@ class HotPathFuzzTest {
                         finite(v, "an output", context);
                     }
                     assertTrue(out.velocity >= 0.0 && out.diffusion >= 0.0 && out.efficiency >= 0.0, "signs " + context);
+                    if (out.regime == Regime.CONVECTIVE && s.nablaMu >= 0.0) {
+                        // thermally driven convection carries part of the flux: nabla_ad <= nabla_e <= nabla <= nabla_rad
+                        // and the two flux fractions are in [0, 1] and add up to 1 (Kippenhahn, Weigert & Weiss 2012
+                        // ch. 7); the slack is rounding relative to the largest gradient. (With nabla_mu < 0 the
+                        // composition drives the motion and heat may flow inwards: nabla > nabla_rad, F_conv < 0; see
+                        // CompositionConvectionTest.)
+                        double slack = 1e-12 * Math.abs(out.nablaRad);
+                        assertTrue(s.nablaAd <= out.nablaElement + slack && out.nablaElement <= out.nabla + slack
+                                && out.nabla <= out.nablaRad + slack, "gradient order " + out + " for " + context);
+                        assertTrue(out.convectiveFraction >= 0.0 && out.convectiveFraction <= 1.0
+                                && Math.abs(out.convectiveFraction + out.radiativeFraction - 1.0) <= 1e-12,
+                                "flux fractions " + out + " for " + context);
+                    }
                     if (jacobian) {
                         finite(out.dNabla, "nabla", context);
                         finite(out.dVelocity, "v", context);
@@ -243,8 +256,12 @@ class HotPathFuzzTest {
             for (double v : new double[] {th.mu, th.beta, th.pressure, th.nablaAd, th.cp, th.delta, th.phi, th.gamma1}) {
                 finite(v, "a thermodynamic output", s);
             }
+            // beta = P_gas / P is in (0, 1]; for a fully ionised ideal gas plus radiation nabla_ad runs from 2/5
+            // (beta = 1) down to 1/4 (beta -> 0) and Gamma_1 from 5/3 to 4/3 (Chandrasekhar 1939; Kippenhahn,
+            // Weigert & Weiss 2012 ch. 13, from memory); the slack is rounding
             assertTrue(th.pressure > 0.0 && th.cp > 0.0 && th.beta > 0.0 && th.beta <= 1.0
-                    && th.nablaAd > 0.0 && th.nablaAd < 1.0, "ranges " + th + " for " + s);
+                    && th.nablaAd >= 0.25 - 1e-12 && th.nablaAd <= 0.4 + 1e-12
+                    && th.gamma1 >= 4.0 / 3.0 - 1e-12 && th.gamma1 <= 5.0 / 3.0 + 1e-12, "ranges " + th + " for " + s);
         } catch (TransportException e) {
             refused("thermodynamics", e);
         }
