@@ -51,8 +51,10 @@ class ModelChoiceTest {
     /** The name the tool marks "(default)" under "FAMILY models:". */
     private static String marked(String models, String family) {
         int from = models.indexOf("\n" + family + " models:\n");
+        int to = models.indexOf("\n\n", from + 1);
         Matcher m = Pattern.compile("(?m)^  (\\S+)  \\(provider \\S+\\)  \\(default\\)$").matcher(models);
-        assertTrue(m.find(from), "no default marked for " + family + " in\n" + models);
+        assertTrue(from >= 0 && m.find(from) && (to < 0 || m.start() < to),
+                "no default marked for " + family + " in\n" + models);
         return m.group(1);
     }
 
