@@ -184,12 +184,12 @@ class InputFuzzTest {
                 Arbitraries.strings().ofMaxLength(6));
     }
 
-    /** Random rows, or the valid rows of {@link ProfileFiles#ROWS} with about one cell in 30 replaced. */
+    /** Random rows, or the valid rows of {@link ProfileFiles#ROWS} with about one cell in 60 replaced. */
     @Provide
     Arbitrary<List<List<String>>> rows() {
         Arbitrary<List<List<String>>> random = cell().list().ofMinSize(0).ofMaxSize(10).list().ofMinSize(0).ofMaxSize(8);
         int n = ProfileFiles.ROWS.length * 8;
-        Arbitrary<List<List<String>>> spoiled = Combinators.combine(Arbitraries.integers().between(0, 29).list().ofSize(n),
+        Arbitrary<List<List<String>>> spoiled = Combinators.combine(Arbitraries.integers().between(0, 59).list().ofSize(n),
                 cell().list().ofSize(n)).as((keep, cells) -> {
                     List<List<String>> rows = new ArrayList<>();
                     for (int i = 0; i < ProfileFiles.ROWS.length; i++) {
