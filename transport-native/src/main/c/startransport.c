@@ -9,7 +9,10 @@
  *      is copied into the workspace (the Java array pinned with GetPrimitiveArrayCritical, then
  *      memcpy); one static Java method runs the SPI's batch call over the chunk; each requested
  *      output is copied back the same way. A chunk's arrays stay in cache between the Java call
- *      and the copies. No JNI crossing per zone, no allocation per call.
+ *      and the copies. No JNI crossing per zone, no allocation per call. The convection Jacobian,
+ *      four fifths of the bytes, is not copied: a direct ByteBuffer over the host's array (made
+ *      once while the host passes the same array, see host_jacobian) lets the kernel store each
+ *      entry straight into host memory (ConvectionModel.solveZoneMajorInto).
  *   3. A failure comes back as a status code from Java, with the message (zone renumbered for
  *      the host) in the workspace; a Java exception that escapes anyway is cleared here and
  *      reported as STT_JAVA_ERROR. No exception is ever left pending for the host.
@@ -71,6 +74,10 @@ struct thread_state {
     int attached_here;
     jobject workspace;     /* global reference */
     jarray arrays[A_COUNT];  /* global references */
+    /* a direct ByteBuffer over the host's last convection Jacobian array (global reference), and that array */
+    jobject host_jacobian;
+    const double *host_jacobian_data;
+    size_t host_jacobian_zones;
 };
 
 /* Process-wide state, set up by the first successful stt_open. */
@@ -79,12 +86,13 @@ static struct {
     int ready;
     JavaVM *vm;
     jclass bridge;
-    jmethodID open, workspace, arrays, create, describe, convection, stability, opacity, thermodynamics, allocated;
+    jmethodID open, workspace, arrays, create, describe, convection, convection_direct, stability, opacity,
+            thermodynamics, allocated;
     jfieldID message, family;
     int chunk;
     int sessions;
 } g = {PTHREAD_MUTEX_INITIALIZER, 0, NULL, NULL, NULL, NULL, NULL, NULL, NULL, NULL, NULL, NULL, NULL, NULL,
-       NULL, NULL, 0, 0};
+       NULL, NULL, NULL, 0, 0};
 
 static atomic_llong allocations;
 static __thread struct thread_state *current;
@@ -623,6 +631,8 @@ static int bind_bridge(JNIEnv *env, jclass bridge, char *message, size_t size) {
     g.describe = (*env)->GetStaticMethodID(env, bridge, "describe", "(Ljava/lang/Object;)Ljava/lang/String;");
     g.convection = (*env)->GetStaticMethodID(env, bridge, "convection", "(" WORKSPACE_SIG
                                              "Lio/github/startransport/spi/ConvectionModel;IIZI)I");
+    g.convection_direct = (*env)->GetStaticMethodID(env, bridge, "convectionDirect", "(" WORKSPACE_SIG
+                                                    "Lio/github/startransport/spi/ConvectionModel;IIILjava/nio/ByteBuffer;I)I");
     g.stability = (*env)->GetStaticMethodID(env, bridge, "stability", "(" WORKSPACE_SIG
                                             "Lio/github/startransport/spi/StabilityModel;IIZI)I");
     g.opacity = (*env)->GetStaticMethodID(env, bridge, "opacity", "(" WORKSPACE_SIG
@@ -672,6 +682,9 @@ static void release_thread(void *p) {
         }
         if (t->workspace != NULL) {
             (*env)->DeleteGlobalRef(env, t->workspace);
+        }
+        if (t->host_jacobian != NULL) {
+            (*env)->DeleteGlobalRef(env, t->host_jacobian);
         }
         if (t->attached_here) {
             (*g.vm)->DetachCurrentThread(g.vm);
@@ -1068,6 +1081,37 @@ static void get_codes(JNIEnv *env, struct thread_state *t, int *host, size_t sta
     }
 }
 
+/*
+ * The host's convection Jacobian array of n zones as a direct ByteBuffer (NewDirectByteBuffer: a Java
+ * object over the host's memory, no copy), so that the kernel stores each entry straight into it. Kept
+ * per thread while the host passes the same array and zone count, so a new one (about 100 bytes of Java
+ * heap) is made only when they change. NULL when the JVM makes no direct buffers or the array is too
+ * large for one (over 2 GB): the caller then copies the Jacobian out of the workspace as before.
+ */
+static jobject host_jacobian(JNIEnv *env, struct thread_state *t, const double *jacobian, size_t n) {
+    if (t->host_jacobian != NULL && t->host_jacobian_data == jacobian && t->host_jacobian_zones == n) {
+        return t->host_jacobian;
+    }
+    if (t->host_jacobian != NULL) {
+        (*env)->DeleteGlobalRef(env, t->host_jacobian);
+        t->host_jacobian = NULL;
+    }
+    size_t doubles = n * STT_CONVECTION_OUTPUTS * STT_INPUTS;
+    if (doubles > (size_t) INT_MAX / sizeof(double)) {
+        return NULL;
+    }
+    jobject local = (*env)->NewDirectByteBuffer(env, (void *) jacobian, (jlong) (doubles * sizeof(double)));
+    if (local == NULL || (*env)->ExceptionCheck(env)) {
+        (*env)->ExceptionClear(env);
+        return NULL;
+    }
+    t->host_jacobian = (*env)->NewGlobalRef(env, local);
+    (*env)->DeleteLocalRef(env, local);
+    t->host_jacobian_data = jacobian;
+    t->host_jacobian_zones = n;
+    return t->host_jacobian;
+}
+
 /* Ends a chunk: a status from Java becomes the call's, with the workspace's message. */
 static int chunk_status(JNIEnv *env, struct thread_state *t, const char *call, jint status, char *message,
                         size_t size) {
@@ -1101,11 +1145,16 @@ int stt_convection(const stt_model *model, int n, const stt_zones *in, const stt
     }
     JNIEnv *env = t->env;
     const jsize chunk = g.chunk;
+    /* the Jacobian goes straight into the host's array when the JVM can view it as a buffer */
+    jobject direct = jacobian != NULL ? host_jacobian(env, t, jacobian, (size_t) n) : NULL;
     for (size_t start = 0; start < (size_t) n; start += (size_t) chunk) {
         jsize count = (size_t) n - start < (size_t) chunk ? (jsize) ((size_t) n - start) : chunk;
         /* columns the model does not read count as present: neither copied nor filled */
         unsigned present = put_inputs(env, t, columns, CONVECTION_READS, start, count) | (ALL_INPUTS & ~CONVECTION_READS);
-        jint rc = (*env)->CallStaticIntMethod(env, g.bridge, g.convection, t->workspace, model->object, count,
+        jint rc = direct != NULL
+                ? (*env)->CallStaticIntMethod(env, g.bridge, g.convection_direct, t->workspace, model->object, count,
+                                              (jint) start + model->zone_origin, (jint) present, direct, (jint) start)
+                : (*env)->CallStaticIntMethod(env, g.bridge, g.convection, t->workspace, model->object, count,
                                               (jint) start + model->zone_origin, jacobian != NULL, (jint) present);
         status = chunk_status(env, t, "stt_convection", rc, message, message_size);
         if (status != STT_OK) {
@@ -1123,7 +1172,7 @@ int stt_convection(const stt_model *model, int n, const stt_zones *in, const stt
         get_doubles(env, t, A_CONV + 8, out->scale_height, start, count);
         get_doubles(env, t, A_CONV + 9, out->mixing_length, start, count);
         get_doubles(env, t, A_CONV + 10, out->diffusion, start, count);
-        if (jacobian != NULL) {
+        if (jacobian != NULL && direct == NULL) {
             copy_out(env, t->arrays[A_CONV_JAC], jacobian + start * STT_CONVECTION_OUTPUTS * STT_INPUTS,
                      sizeof(double), count * STT_CONVECTION_OUTPUTS * STT_INPUTS);
         }

@@ -30,7 +30,7 @@ import java.util.concurrent.TimeUnit;
 /**
  * A profile file of a million zones (the demo star resampled, eight columns, ~150 MB): reading
  * it; reading and diagnosing it on one thread; and the whole tool, {@code diagnose FILE --out
- * DIR} (read, diagnose, write zones.csv, summary.json and the three plots, replace the previous
+ * DIR} (read, diagnose, write zones.csv, summary.json and the four plots, replace the previous
  * output). Time per file in milliseconds; zones per second = zones / time. One shot per
  * iteration: each is seconds long.
  */

@@ -107,10 +107,12 @@ final class DiagnosisCharts {
      * @throws IOException when a file cannot be written
      */
     static void writeAll(ProfileDiagnosis diagnosis, Style style, Path dir) throws IOException {
-        write(gradients(diagnosis, style), dir.resolve(GRADIENTS_PNG));
-        write(velocityAndMixing(diagnosis, style), dir.resolve(MIXING_PNG));
+        // the abscissa once for the three plots along the star (two logarithms a zone on the mass axis)
+        double[] xs = style.axis().of(diagnosis);
+        write(gradients(diagnosis, style, xs), dir.resolve(GRADIENTS_PNG));
+        write(velocityAndMixing(diagnosis, style, xs), dir.resolve(MIXING_PNG));
         write(opacity(diagnosis, style), dir.resolve(OPACITY_PNG));
-        write(propagation(diagnosis, style), dir.resolve(PROPAGATION_PNG));
+        write(propagation(diagnosis, style, xs), dir.resolve(PROPAGATION_PNG));
     }
 
     /**
@@ -137,25 +139,32 @@ final class DiagnosisCharts {
      *         own d ln T / d ln P along the star, regions shaded
      */
     static JFreeChart gradients(ProfileDiagnosis d, Style style) {
-        double[] xs = style.axis().of(d);
+        return gradients(d, style, style.axis().of(d));
+    }
+
+    /** The same, with every zone's coordinate on the style's axis given. */
+    private static JFreeChart gradients(ProfileDiagnosis d, Style style, double[] xs) {
         Values x = k -> xs[k];
         XYSeriesCollection data = new XYSeriesCollection();
         int hidden = 0;
-        double[] nablaAd = d.column(DiagnosisColumn.NABLA_AD);
-        double[] nablaL = d.column(DiagnosisColumn.NABLA_LEDOUX);
+        Values nablaAd = column(d, DiagnosisColumn.NABLA_AD);
+        // NaN (not drawn) where nabla_L lies on nabla_ad
+        Values nablaL = k -> {
+            double l = d.value(DiagnosisColumn.NABLA_LEDOUX, k);
+            double ad = nablaAd.at(k);
+            return Math.abs(l - ad) > LEDOUX_DIFFERS * ad ? l : Double.NaN;
+        };
         int differs = 0;
-        for (int k = 0; k < nablaL.length; k++) {
-            if (Math.abs(nablaL[k] - nablaAd[k]) > LEDOUX_DIFFERS * nablaAd[k]) {
+        for (int k = 0; k < d.size(); k++) {
+            if (!Double.isNaN(nablaL.at(k))) {
                 differs++;
-            } else {
-                nablaL[k] = Double.NaN; // not drawn: it lies on nabla_ad
             }
         }
         hidden += add(data, "\u2207_rad (radiative)", d.size(), x, column(d, DiagnosisColumn.NABLA_RAD), true);
-        hidden += add(data, "\u2207_ad (adiabatic)", d.size(), x, k -> nablaAd[k], true);
+        hidden += add(data, "\u2207_ad (adiabatic)", d.size(), x, nablaAd, true);
         if (differs > 0) {
             hidden += add(data, "\u2207_L (Ledoux; drawn where it differs from \u2207_ad)", d.size(), x,
-                    k -> nablaL[k], true);
+                    nablaL, true);
         }
         hidden += add(data, "\u2207 (actual)", d.size(), x, column(d, DiagnosisColumn.NABLA), true);
         // NaN where the pressure does not fall outwards; the diagnosis warns about those zones
@@ -191,7 +200,11 @@ final class DiagnosisCharts {
      * @return v_conv (left axis) and D_mix (right axis) along the star, regions shaded
      */
     static JFreeChart velocityAndMixing(ProfileDiagnosis d, Style style) {
-        double[] xs = style.axis().of(d);
+        return velocityAndMixing(d, style, style.axis().of(d));
+    }
+
+    /** The same, with every zone's coordinate on the style's axis given. */
+    private static JFreeChart velocityAndMixing(ProfileDiagnosis d, Style style, double[] xs) {
         Values x = k -> xs[k];
         XYSeriesCollection velocity = new XYSeriesCollection();
         XYSeriesCollection mixing = new XYSeriesCollection();
@@ -270,18 +283,20 @@ final class DiagnosisCharts {
      * @return the propagation diagram
      */
     static JFreeChart propagation(ProfileDiagnosis d, Style style) {
-        double[] xs = style.axis().of(d);
+        return propagation(d, style, style.axis().of(d));
+    }
+
+    /** The same, with every zone's coordinate on the style's axis given. */
+    private static JFreeChart propagation(ProfileDiagnosis d, Style style, double[] xs) {
         Values x = k -> xs[k];
-        double[] n2 = d.column(DiagnosisColumn.BUOYANCY_SQUARED);
-        double[] s1 = d.column(DiagnosisColumn.LAMB_L1);
-        double[] n = new double[n2.length];
-        for (int k = 0; k < n2.length; k++) {
-            n[k] = n2[k] > 0 ? Math.sqrt(n2[k]) / (2 * Math.PI) * 1e6 : 0.0;
-            s1[k] = s1[k] / (2 * Math.PI) * 1e6;
-        }
+        Values n = k -> {
+            double n2 = d.value(DiagnosisColumn.BUOYANCY_SQUARED, k);
+            return n2 > 0 ? Math.sqrt(n2) / (2 * Math.PI) * 1e6 : 0.0;
+        };
+        Values s1 = k -> d.value(DiagnosisColumn.LAMB_L1, k) / (2 * Math.PI) * 1e6;
         XYSeriesCollection data = new XYSeriesCollection();
-        int hidden = add(data, "N / 2\u03c0 (buoyancy frequency)", d.size(), x, k -> n[k], true);
-        add(data, "S\u2081 / 2\u03c0 (Lamb frequency, l = 1)", d.size(), x, k -> s1[k], true);
+        int hidden = add(data, "N / 2\u03c0 (buoyancy frequency)", d.size(), x, n, true);
+        add(data, "S\u2081 / 2\u03c0 (Lamb frequency, l = 1)", d.size(), x, s1, true);
         ValueAxis y = logAxis("cyclic frequency (\u03bcHz)", data);
         XYPlot plot = new XYPlot(data, style.axis().axis(xs), y, new XYLineAndShapeRenderer(true, false));
         JFreeChart chart = chart("Propagation diagram of " + d.source(), plot);
@@ -336,10 +351,12 @@ final class DiagnosisCharts {
         double at(int zone);
     }
 
-    /** One column as values (a copy: a plain array is read ten times faster than through the diagnosis). */
+    /**
+     * One column as values, read through the diagnosis: a copy of each column drawn would add 8 bytes per zone
+     * to the tool's peak memory while a plot is drawn (a series reads each zone two or three times).
+     */
     private static Values column(ProfileDiagnosis d, DiagnosisColumn c) {
-        double[] v = d.column(c);
-        return k -> v[k];
+        return k -> d.value(c, k);
     }
 
     /** Up to this many zones a series draws every zone. */
@@ -361,7 +378,24 @@ final class DiagnosisCharts {
      * @return zone indices, increasing
      */
     static int[] decimate(int n, Values x, Values y) {
+        return decimate(n, x, y, new int[1]);
+    }
+
+    /**
+     * {@link #decimate(int, Values, Values)}, counting in the same pass the zones whose value a log axis
+     * cannot show (see {@link #add}).
+     *
+     * @param hidden receives that count in element 0
+     */
+    private static int[] decimate(int n, Values x, Values y, int[] hidden) {
         if (n <= MAX_POINTS) {
+            for (int k = 0; k < n; k++) {
+                double v = y.at(k);
+                double xv = x.at(k);
+                if (Double.isFinite(xv) && !Double.isNaN(v) && !drawable(xv, v)) {
+                    hidden[0]++;
+                }
+            }
             int[] all = new int[n];
             for (int k = 0; k < n; k++) {
                 all[k] = k;
@@ -377,17 +411,27 @@ final class DiagnosisCharts {
             int lo = -1;
             int hi = -1;
             int gap = -1;
+            double loV = 0.0;
+            double hiV = 0.0;
             for (int k = from; k < to; k++) {
                 double v = y.at(k);
-                if (drawable(x.at(k), v)) {
-                    if (lo < 0 || v < y.at(lo)) {
+                double xv = x.at(k);
+                if (drawable(xv, v)) {
+                    if (lo < 0 || v < loV) {
                         lo = k;
+                        loV = v;
                     }
-                    if (hi < 0 || v > y.at(hi)) {
+                    if (hi < 0 || v > hiV) {
                         hi = k;
+                        hiV = v;
                     }
-                } else if (gap < 0) {
-                    gap = k;
+                } else {
+                    if (gap < 0) {
+                        gap = k;
+                    }
+                    if (Double.isFinite(xv) && !Double.isNaN(v)) {
+                        hidden[0]++;
+                    }
                 }
             }
             int[] picks = {from, lo, hi, gap, to - 1};
@@ -416,14 +460,8 @@ final class DiagnosisCharts {
      */
     private static int add(XYSeriesCollection data, String name, int n, Values x, Values y, boolean sortByX) {
         XYSeries s = new XYSeries(name, sortByX, true);
-        int hidden = 0;
-        for (int k = 0; k < n; k++) {
-            double v = y.at(k);
-            if (Double.isFinite(x.at(k)) && !Double.isNaN(v) && !drawable(x.at(k), v)) {
-                hidden++;
-            }
-        }
-        for (int k : decimate(n, x, y)) {
+        int[] hidden = new int[1];
+        for (int k : decimate(n, x, y, hidden)) {
             double xv = x.at(k);
             double yv = y.at(k);
             if (drawable(xv, yv)) {
@@ -433,7 +471,7 @@ final class DiagnosisCharts {
             }
         }
         data.addSeries(s);
-        return hidden;
+        return hidden[0];
     }
 
     /**

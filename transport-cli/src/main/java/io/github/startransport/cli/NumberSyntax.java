@@ -2,7 +2,10 @@ package io.github.startransport.cli;
 
 import com.fasterxml.jackson.core.io.NumberInput;
 
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
 import java.math.BigInteger;
+import java.nio.ByteOrder;
 
 /**
  * The one place where the tool decides what a number in a profile cell is and turns it into a
@@ -21,7 +24,8 @@ import java.math.BigInteger;
  * w 10^q is rounded to the nearest double by Clinger's fast path (w &lt; 2^53, |q| &lt;= 22: one
  * exact operation; Clinger 1990) or else by the Eisel-Lemire algorithm (a 128-bit product with a
  * truncated power of five; Lemire 2021, "Number parsing at a gigabyte per second", Software:
- * Practice and Experience 51, 1700; as in its reference implementation {@code fast_float}).
+ * Practice and Experience 51, 1700; as in its reference implementation {@code fast_float}). Runs of eight
+ * digits after the first significant one are read eight at a time from one {@code long} (section 5 there).
  * Cells with more than 19 significant digits go to Jackson's correctly rounded parser. The tests
  * compare every path with {@link Double#parseDouble}, bit for bit. Measured need: Jackson's
  * parser alone took 75-115 ns a number on the build machine, the JDK's 400-650 ns.
@@ -65,6 +69,16 @@ final class NumberSyntax {
         int digits = 0;
         int fraction = 0;
         while (i < to && b[i] >= '0' && b[i] <= '9') {
+            if (significant > 0 && to - i >= 8) {
+                long chunk = (long) LONGS.get(b, i);
+                if (eightDigits(chunk)) {
+                    w = w * 100_000_000L + valueOfEight(chunk);
+                    significant += 8;
+                    digits += 8;
+                    i += 8;
+                    continue;
+                }
+            }
             int d = b[i++] - '0';
             if (significant > 0 || d != 0) {
                 w = w * 10 + d;
@@ -75,6 +89,17 @@ final class NumberSyntax {
         if (i < to && b[i] == '.') {
             i++;
             while (i < to && b[i] >= '0' && b[i] <= '9') {
+                if (significant > 0 && to - i >= 8) {
+                    long chunk = (long) LONGS.get(b, i);
+                    if (eightDigits(chunk)) {
+                        w = w * 100_000_000L + valueOfEight(chunk);
+                        significant += 8;
+                        digits += 8;
+                        fraction += 8;
+                        i += 8;
+                        continue;
+                    }
+                }
                 int d = b[i++] - '0';
                 if (significant > 0 || d != 0) {
                     w = w * 10 + d;
@@ -118,6 +143,29 @@ final class NumberSyntax {
         }
         double v = toDouble(w, exp - fraction);
         return negative ? -v : v;
+    }
+
+    /** Eight bytes of a byte array as one little-endian long: the first byte in the lowest 8 bits. */
+    private static final VarHandle LONGS = MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
+
+    /**
+     * Whether all eight bytes of {@code v} are ASCII digits: each byte's high half is 3 and adding 6 to
+     * it does not carry into the high half (Lemire 2021, section 5; {@code fast_float}'s test).
+     */
+    private static boolean eightDigits(long v) {
+        return ((v & 0xF0F0F0F0F0F0F0F0L) | (((v + 0x0606060606060606L) & 0xF0F0F0F0F0F0F0F0L) >>> 4))
+                == 0x3333333333333333L;
+    }
+
+    /**
+     * The value of eight ASCII digits, the first in the lowest byte: pairs, then fours, then all eight combined
+     * by three multiplications instead of eight steps of w = 10 w + d (Lemire 2021, section 5).
+     */
+    private static int valueOfEight(long v) {
+        long d = v - 0x3030303030303030L;
+        d = d * 10 + (d >>> 8);                        // each even byte: two digits
+        return (int) (((d & 0x000000FF000000FFL) * (100 + (1_000_000L << 32))
+                + ((d >>> 16 & 0x000000FF000000FFL) * (1 + (10_000L << 32)))) >>> 32);
     }
 
     /** Cells of more than 19 significant digits: Jackson's parser on a copy (a Fortran D made an E). */

@@ -194,6 +194,7 @@ final class ProfileCsvReader {
      * {@code buf[from, to)} the next line without its end-of-line bytes.
      */
     private static final class LineSource implements AutoCloseable {
+        private static final long NEWLINES = EightBytes.repeated((byte) '\n');
         final FileChannel channel;
         final long size;
         byte[] buf = new byte[BUFFER];
@@ -216,7 +217,16 @@ final class ProfileCsvReader {
         boolean next() throws IOException {
             int scan = start;
             while (true) {
-                for (int i = scan; i < end; i++) {
+                int i = scan;
+                for (; i + 8 <= end; i += 8) {
+                    long marks = EightBytes.matches(EightBytes.at(buf, i), NEWLINES);
+                    if (marks != 0) {
+                        int at = i + EightBytes.first(marks);
+                        take(at, at + 1);
+                        return true;
+                    }
+                }
+                for (; i < end; i++) {
                     if (buf[i] == '\n') {
                         take(i, i + 1);
                         return true;
@@ -515,14 +525,27 @@ final class ProfileCsvReader {
      *
      * @return {@code false} when the line holds a double quote (the slow path reads it)
      */
+    private static final long QUOTES = EightBytes.repeated((byte) '"');
+
     private static boolean row(LineSource src, byte sep, int[] slot, int width, Columns columns) {
         byte[] b = src.buf;
         int end = src.to;
         int j = 0;
         int i = src.from;
         columns.badColumn = -1;
+        long seps = EightBytes.repeated(sep);
         while (true) {
             int cellEnd = i;
+            // eight bytes at a time to the first separator or quote, then byte by byte
+            while (cellEnd + 8 <= end) {
+                long word = EightBytes.at(b, cellEnd);
+                long marks = EightBytes.matches(word, seps) | EightBytes.matches(word, QUOTES);
+                if (marks != 0) {
+                    cellEnd += EightBytes.first(marks);
+                    break;
+                }
+                cellEnd += 8;
+            }
             while (cellEnd < end && b[cellEnd] != sep) {
                 if (b[cellEnd] == '"') {
                     return false;

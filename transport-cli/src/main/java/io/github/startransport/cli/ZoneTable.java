@@ -1,8 +1,8 @@
 package io.github.startransport.cli;
 
-import com.fasterxml.jackson.core.io.NumberOutput;
 import io.github.startransport.spi.DiagnosisColumn;
 import io.github.startransport.spi.ProfileDiagnosis;
+import io.github.startransport.spi.Regime;
 
 import java.io.IOException;
 import java.io.OutputStream;
@@ -21,9 +21,9 @@ import java.util.concurrent.Future;
  * Writes {@code zones.csv}: one row per zone, centre to surface, every {@link DiagnosisColumn}
  * under its header name in the library's order (a column added to the enum appears without an
  * edit here), with the regime label after {@code nabla_ledoux}. Numbers are the shortest decimal
- * that reads back to the identical double (Jackson's Schubfach writer, the algorithm of
- * {@code Double.toString} since Java 19, about 3x faster than Java 17's; the tests read every
- * number back). No cell needs quoting: headers and regime labels are plain words. Blocks of
+ * that reads back to the identical double, as {@code Double.toString} writes them since Java 19
+ * ({@link ShortestDecimal}, straight into each block's bytes; the tests read every number back).
+ * No cell needs quoting: headers and regime labels are plain words. Blocks of
  * zones are formatted on all cores and written in order.
  */
 final class ZoneTable {
@@ -74,7 +74,8 @@ final class ZoneTable {
         int threads = Math.min(Runtime.getRuntime().availableProcessors(), blocks);
         if (threads <= 1) {
             for (int b = 0; b < blocks; b++) {
-                out.write(block(diagnosis, b * BLOCK, Math.min(n, (b + 1) * BLOCK)));
+                Rows rows = block(diagnosis, b * BLOCK, Math.min(n, (b + 1) * BLOCK));
+                out.write(rows.bytes(), 0, rows.length());
             }
             return;
         }
@@ -84,7 +85,7 @@ final class ZoneTable {
             return t;
         });
         try {
-            ArrayDeque<Future<byte[]>> inFlight = new ArrayDeque<>();
+            ArrayDeque<Future<Rows>> inFlight = new ArrayDeque<>();
             int next = 0;
             for (int b = 0; b < blocks; b++) {
                 while (next < blocks && inFlight.size() < 2 * threads) {
@@ -93,7 +94,8 @@ final class ZoneTable {
                     inFlight.add(pool.submit(() -> block(diagnosis, from, to)));
                     next++;
                 }
-                out.write(inFlight.poll().get());
+                Rows rows = inFlight.poll().get();
+                out.write(rows.bytes(), 0, rows.length());
             }
         } catch (ExecutionException e) {
             if (e.getCause() instanceof RuntimeException re) {
@@ -111,22 +113,38 @@ final class ZoneTable {
         }
     }
 
-    /** @return the rows of zones [from, to) as ASCII bytes */
-    private static byte[] block(ProfileDiagnosis diagnosis, int from, int to) {
+    /** A block's rows as ASCII bytes: {@code bytes[0, length)}. */
+    private record Rows(byte[] bytes, int length) {
+    }
+
+    /** @return the rows of zones [from, to) */
+    private static Rows block(ProfileDiagnosis diagnosis, int from, int to) {
         DiagnosisColumn[] columns = DiagnosisColumn.values();
-        StringBuilder b = new StringBuilder((to - from) * columns.length * 20);
+        Regime[] regimes = Regime.values();
+        byte[][] labels = new byte[regimes.length][];
+        int longestLabel = 0;
+        for (Regime r : regimes) {
+            labels[r.ordinal()] = r.label().getBytes(StandardCharsets.US_ASCII);
+            longestLabel = Math.max(longestLabel, labels[r.ordinal()].length);
+        }
+        // every number and its comma, the regime and its comma, the line end
+        byte[] b = new byte[(to - from) * (columns.length * (ShortestDecimal.MAX_LENGTH + 1) + longestLabel + 2)];
+        int i = 0;
         for (int k = from; k < to; k++) {
             for (int j = 0; j < columns.length; j++) {
                 if (j > 0) {
-                    b.append(',');
+                    b[i++] = ',';
                 }
-                b.append(NumberOutput.toString(diagnosis.value(columns[j], k), true));
+                i = ShortestDecimal.write(diagnosis.value(columns[j], k), b, i);
                 if (columns[j] == DiagnosisColumn.NABLA_LEDOUX) {
-                    b.append(',').append(diagnosis.regime(k).label());
+                    b[i++] = ',';
+                    byte[] label = labels[diagnosis.regime(k).ordinal()];
+                    System.arraycopy(label, 0, b, i, label.length);
+                    i += label.length;
                 }
             }
-            b.append('\n');
+            b[i++] = '\n';
         }
-        return b.toString().getBytes(StandardCharsets.US_ASCII);
+        return new Rows(b, i);
     }
 }

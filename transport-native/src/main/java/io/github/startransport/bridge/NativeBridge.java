@@ -18,9 +18,12 @@ import io.github.startransport.spi.Transport;
 import io.github.startransport.spi.TransportException;
 import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
+import io.github.startransport.spi.ZoneMajorJacobian;
 
 import java.lang.management.ManagementFactory;
 import java.lang.management.ThreadMXBean;
+import java.nio.ByteBuffer;
+import java.nio.DoubleBuffer;
 import java.util.Arrays;
 
 /**
@@ -169,6 +172,39 @@ public final class NativeBridge {
             if ((present & (1 << j)) == 0) {
                 Arrays.fill(columns[j], 0, count, columns[j] == ws.in.phi ? 1.0 : 0.0);
             }
+        }
+    }
+
+    /**
+     * Convection over the chunk with the zone-major Jacobian stored straight into the host's array:
+     * values into the workspace's columns and regimes into its codes as {@link #convection} does, the
+     * Jacobian of chunk zone k into host zone {@code start + k}'s block through
+     * {@link ConvectionModel#solveZoneMajorInto} (no copy through the workspace).
+     *
+     * @param ws        workspace holding the chunk's inputs
+     * @param model     the model
+     * @param count     zones in the chunk
+     * @param zoneShift added to a refused zone's index in the message (chunk start + host origin)
+     * @param present   bit j set when input column j was given by the host
+     * @param host      a direct buffer over the host's whole Jacobian array (JNI NewDirectByteBuffer)
+     * @param start     the chunk's first zone in the host's arrays
+     * @return a status code
+     */
+    static int convectionDirect(Workspace ws, ConvectionModel model, int count, int zoneShift, int present,
+                                ByteBuffer host, int start) {
+        try {
+            defaults(ws, count, present);
+            DoubleBuffer jacobian = ws.hostJacobian(host);
+            jacobian.position(start * ZoneMajorJacobian.PER_ZONE);
+            model.solveZoneMajorInto(ws.in, 0, count, ws.convection, jacobian);
+            Regime[] regime = ws.convection.regime;
+            int[] codes = ws.codes;
+            for (int k = 0; k < count; k++) {
+                codes[k] = code(regime[k]);
+            }
+            return OK;
+        } catch (Throwable e) {
+            return fail(ws, e, zoneShift);
         }
     }
 

@@ -8,6 +8,10 @@ import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneInput;
 
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.nio.DoubleBuffer;
+
 /**
  * One native thread's working arrays: the C side copies a chunk of up to {@link #CHUNK} host
  * zones into the input columns, calls {@link NativeBridge}, and copies the output columns back.
@@ -45,6 +49,26 @@ public final class Workspace {
     String message;
     /** Family code of the last model created on this thread. */
     int family;
+
+    /** The direct buffer over the host's Jacobian array last passed, and its view as doubles. */
+    private ByteBuffer hostBytes;
+    private DoubleBuffer hostJacobian;
+
+    /**
+     * The host's Jacobian array as native-order doubles: a new view only when the C side passes a new
+     * buffer (it keeps one per thread while the host passes the same array), so nothing is allocated
+     * in steady state.
+     *
+     * @param bytes direct buffer over the host's array
+     * @return its view as doubles in the platform's byte order
+     */
+    DoubleBuffer hostJacobian(ByteBuffer bytes) {
+        if (bytes != hostBytes) {
+            hostJacobian = bytes.order(ByteOrder.nativeOrder()).asDoubleBuffer();
+            hostBytes = bytes;
+        }
+        return hostJacobian;
+    }
 
     /** The input columns in the order of the C header's {@code stt_zones} fields. */
     final double[][] inputColumns = inputs();

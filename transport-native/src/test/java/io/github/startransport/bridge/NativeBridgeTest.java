@@ -15,6 +15,9 @@ import org.junit.jupiter.api.Test;
 
 import java.io.IOException;
 import java.lang.management.ManagementFactory;
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.nio.DoubleBuffer;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
@@ -165,6 +168,64 @@ class NativeBridgeTest {
     }
 
     @Test
+    void aChunkWritesTheJacobianStraightIntoAHostBufferBitForBit() {
+        ConvectionModel convection = (ConvectionModel) ExampleData.model(transport, 3);
+        int n = zones.capacity;
+        ConvectionColumns expected = new ConvectionColumns(n);
+        convection.solveColumns(zones, 0, n, expected, true);
+        // a host array of n zones outside the Java heap, as JNI's NewDirectByteBuffer gives it, filled
+        // with a marker so that a store outside the chunks' blocks shows
+        ByteBuffer host = ByteBuffer.allocateDirect(n * ZoneMajorJacobian.PER_ZONE * Double.BYTES);
+        DoubleBuffer view = host.order(ByteOrder.nativeOrder()).asDoubleBuffer();
+        for (int i = 0; i < view.capacity(); i++) {
+            view.put(i, -7.0);
+        }
+        Workspace ws = new Workspace();
+        // a whole chunk from zone 300, then an odd-sized last chunk ending at the array's end
+        int[][] chunks = {{300, Workspace.CHUNK}, {n - 37, 37}};
+        for (int[] chunk : chunks) {
+            int from = chunk[0];
+            int count = chunk[1];
+            load(ws, from, count);
+            assertEquals(NativeBridge.OK,
+                    NativeBridge.convectionDirect(ws, convection, count, from, (1 << 14) - 1, host, from));
+            for (int k = 0; k < count; k++) {
+                assertEquals(Double.doubleToRawLongBits(expected.nabla[from + k]),
+                        Double.doubleToRawLongBits(ws.convection.nabla[k]));
+                assertEquals(expected.regime[from + k].ordinal(), ws.codes[k]);
+                for (int i = 0; i < ZoneInput.COUNT; i++) {
+                    int at = ZoneMajorJacobian.index(from + k, 0, i);
+                    assertEquals(Double.doubleToRawLongBits(expected.dNabla[i][from + k]),
+                            Double.doubleToRawLongBits(view.get(at)));
+                    assertEquals(Double.doubleToRawLongBits(expected.dVelocity[i][from + k]),
+                            Double.doubleToRawLongBits(view.get(at + ZoneInput.COUNT)));
+                    assertEquals(Double.doubleToRawLongBits(expected.dConvectiveFraction[i][from + k]),
+                            Double.doubleToRawLongBits(view.get(at + 2 * ZoneInput.COUNT)));
+                    assertEquals(Double.doubleToRawLongBits(expected.dDiffusion[i][from + k]),
+                            Double.doubleToRawLongBits(view.get(at + 3 * ZoneInput.COUNT)));
+                }
+            }
+        }
+        // nothing outside the two chunks' blocks was touched
+        int untouched = 0;
+        for (int i = 0; i < view.capacity(); i++) {
+            int zone = i / ZoneMajorJacobian.PER_ZONE;
+            boolean inChunk = (zone >= 300 && zone < 300 + Workspace.CHUNK) || zone >= n - 37;
+            if (!inChunk) {
+                assertEquals(-7.0, view.get(i), "entry " + i + " (zone " + zone + ") outside the chunks");
+                untouched++;
+            }
+        }
+        assertEquals((n - Workspace.CHUNK - 37) * ZoneMajorJacobian.PER_ZONE, untouched);
+        // a refused zone in a direct call is renumbered like any other
+        load(ws, 0, 20);
+        ws.in.density[7] = -3.0;
+        assertEquals(NativeBridge.INVALID_INPUT,
+                NativeBridge.convectionDirect(ws, convection, 20, 513 + 1, (1 << 14) - 1, host, 0));
+        assertEquals("invalid input density = -3.0 g cm^-3 in zone 521: must be finite and > 0", ws.message);
+    }
+
+    @Test
     void absentColumnsTakeTheirDefaults() {
         ConvectionModel convection = (ConvectionModel) ExampleData.model(transport, 3);
         Workspace ws = new Workspace();
@@ -220,7 +281,8 @@ class NativeBridgeTest {
         load(ws, 100, count);
         int all = (1 << 14) - 1;
         int some = all & ~(1 << 12) & ~(1 << 13);
-        // rounds of 8000 chunk calls until one allocates nothing: the first rounds may see the JIT
+        ByteBuffer host = ByteBuffer.allocateDirect(count * ZoneMajorJacobian.PER_ZONE * Double.BYTES);
+        // rounds of 10000 chunk calls until one allocates nothing: the first rounds may see the JIT
         // recompile (and reallocate what it had scalar-replaced), a steady state allocates 0 bytes
         java.util.List<Long> rounds = new java.util.ArrayList<>();
         for (int round = 0; round < 12; round++) {
@@ -230,12 +292,13 @@ class NativeBridgeTest {
                 NativeBridge.opacity(ws, opacity, count, 0);
                 NativeBridge.stability(ws, stability, count, 0, true, all);
                 NativeBridge.convection(ws, convection, count, 0, true, some);
+                NativeBridge.convectionDirect(ws, convection, count, 0, some, host, 0);
             }
             rounds.add(threads.getCurrentThreadAllocatedBytes() - before);
             if (round > 0 && rounds.get(round) == 0) {
                 break;
             }
         }
-        assertEquals(0L, rounds.get(rounds.size() - 1), "bytes allocated per round of 8000 chunk calls: " + rounds);
+        assertEquals(0L, rounds.get(rounds.size() - 1), "bytes allocated per round of 10000 chunk calls: " + rounds);
     }
 }

@@ -6,8 +6,8 @@ package io.github.startransport.spi;
  * {@code dNabla[i][k]} = d nabla / d (input i) in zone k, with i a {@link ZoneInput} index, so that
  * a host reads one input's column of the Jacobian as one contiguous array.
  *
- * <p>{@link #workZone} and {@link #workResult} are working space for the solver (caller-owned, so
- * that batch calls allocate nothing); their contents after a call are unspecified. Not
+ * <p>{@link #workZone}, {@link #workResult} and {@link #work} are working space for the solver
+ * (caller-owned, so that batch calls allocate nothing); their contents after a call are unspecified. Not
  * thread-safe: threads that split one profile write disjoint zone ranges of one instance, each
  * with its own working space, or use one instance each.
  */
@@ -50,6 +50,13 @@ public final class ConvectionColumns {
     public final ZoneState workZone = new ZoneState();
     /** Working space: one zone's result. */
     public final ConvectionResult workResult = new ConvectionResult();
+    /** Length of {@link #work}: room for 64 zones of {@link ZoneMajorJacobian#PER_ZONE} doubles. */
+    public static final int WORK_LENGTH = 64 * ZoneMajorJacobian.PER_ZONE;
+    /**
+     * Working space: room for a provider's intermediate values of a chunk of zones, so that a batch call
+     * can run its stages over several zones at a time without allocating ({@link #WORK_LENGTH} doubles).
+     */
+    public final double[] work = new double[WORK_LENGTH];
 
     /**
      * @param capacity number of zones, &gt;= 0

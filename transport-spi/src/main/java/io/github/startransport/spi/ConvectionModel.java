@@ -135,6 +135,42 @@ public interface ConvectionModel {
     }
 
     /**
+     * {@link #solveZoneMajor(ZoneColumns, int, int, ConvectionColumns, double[])} with the Jacobian
+     * written into a buffer instead of an array, in the same layout from the buffer's position: entry
+     * {@code ZoneMajorJacobian.index(k, o, i)} goes to index {@code position() + index(k, o, i)} (the
+     * position, limit and mark are not changed). This is how memory outside the Java heap is written directly:
+     * a direct buffer over a native host's array ({@code ByteBuffer.allocateDirect} or JNI's
+     * {@code NewDirectByteBuffer}, then {@code order(ByteOrder.nativeOrder()).asDoubleBuffer()}), with no
+     * copy through a Java array. Every store goes through the buffer's own bounds check, so a buffer
+     * that is too short is refused before anything is written and no store can land outside it.
+     *
+     * <p>The default loops over {@link #solve} with the output's working space and copies each zone's
+     * arrays into the buffer; it allocates nothing. Implementations override it with their kernel.
+     *
+     * @param in       input columns (read only)
+     * @param from     first zone, inclusive
+     * @param to       last zone, exclusive
+     * @param out      output columns: the values of zones [from, to) are overwritten
+     * @param jacobian writable buffer whose limit is at least {@code position() + to * ZoneMajorJacobian.PER_ZONE},
+     *                 overwritten for zones [from, to) in its own byte order
+     * @throws InvalidInputException naming the zone (column index) of the first bad input, a bad range,
+     *                               or a buffer that is null, read-only or too short; zones before a bad
+     *                               zone have been written
+     */
+    default void solveZoneMajorInto(ZoneColumns in, int from, int to, ConvectionColumns out,
+                                    java.nio.DoubleBuffer jacobian) {
+        in.checkRange(from, to, out.capacity);
+        ZoneMajorJacobian.checkCapacity(jacobian, to);
+        ZoneState zone = out.workZone;
+        ConvectionResult r = out.workResult;
+        for (int k = from; k < to; k++) {
+            solve(in.load(k, zone), r);
+            ZoneMajorJacobian.store(jacobian, k, r);
+            out.store(k, r, false);
+        }
+    }
+
+    /**
      * The efficiency parameter of exponentially decaying overshoot beyond a convective
      * boundary: the velocity scale height is f H_P.
      *

@@ -53,10 +53,7 @@ public final class Profile {
         }
         this.size = n;
         for (Map.Entry<ProfileColumn, double[]> e : copy.entrySet()) {
-            double[] v = e.getValue();
-            for (int k = 0; k < n; k++) {
-                checkDomain(e.getKey(), v[k], k);
-            }
+            checkDomain(e.getKey(), e.getValue());
         }
         double[] x = copy.get(ProfileColumn.HYDROGEN);
         double[] z = copy.get(ProfileColumn.METALS);
@@ -78,30 +75,43 @@ public final class Profile {
         this.columns = copy;
     }
 
-    private void checkDomain(ProfileColumn c, double v, int k) {
-        String where = " (" + source + ")";
+    /** Every value of column c inside its domain; the first one outside is refused (a loop per domain: millions of zones). */
+    private void checkDomain(ProfileColumn c, double[] v) {
+        int n = v.length;
         switch (c) {
             case LUMINOSITY, NABLA_MU -> {
-                if (!Double.isFinite(v)) {
-                    throw new InvalidInputException(c.header(), v, c.unit(), k, "finite" + where);
+                for (int k = 0; k < n; k++) {
+                    if (!Double.isFinite(v[k])) {
+                        throw new InvalidInputException(c.header(), v[k], c.unit(), k, "finite" + where());
+                    }
                 }
             }
             case HYDROGEN, METALS -> {
-                if (!(v >= 0.0 && v <= 1.0)) {
-                    throw new InvalidInputException(c.header(), v, c.unit(), k, "inside [0, 1]" + where);
+                for (int k = 0; k < n; k++) {
+                    if (!(v[k] >= 0.0 && v[k] <= 1.0)) {
+                        throw new InvalidInputException(c.header(), v[k], c.unit(), k, "inside [0, 1]" + where());
+                    }
                 }
             }
             case NABLA_AD -> {
-                if (!(v > 0.0 && v < 1.0)) {
-                    throw new InvalidInputException(c.header(), v, c.unit(), k, "inside (0, 1)" + where);
+                for (int k = 0; k < n; k++) {
+                    if (!(v[k] > 0.0 && v[k] < 1.0)) {
+                        throw new InvalidInputException(c.header(), v[k], c.unit(), k, "inside (0, 1)" + where());
+                    }
                 }
             }
             default -> {
-                if (!(v > 0.0) || v == Double.POSITIVE_INFINITY) {
-                    throw new InvalidInputException(c.header(), v, c.unit(), k, "finite and > 0" + where);
+                for (int k = 0; k < n; k++) {
+                    if (!(v[k] > 0.0) || v[k] == Double.POSITIVE_INFINITY) {
+                        throw new InvalidInputException(c.header(), v[k], c.unit(), k, "finite and > 0" + where());
+                    }
                 }
             }
         }
+    }
+
+    private String where() {
+        return " (" + source + ")";
     }
 
     private void checkIncreasing(double[] v, ProfileColumn c) {

@@ -3,7 +3,9 @@ package io.github.startransport.spi;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
+import java.util.function.IntToDoubleFunction;
 
 /**
  * The diagnosis of one profile: per-zone columns (centre to surface), regimes, regions,
@@ -14,6 +16,8 @@ public final class ProfileDiagnosis {
     private final Criterion criterion;
     private final double alpha;
     private final EnumMap<DiagnosisColumn, double[]> columns;
+    /** Columns not stored but computed per zone from stored ones (only through ColumnSharing). */
+    private final EnumMap<DiagnosisColumn, IntToDoubleFunction> derived;
     private final Regime[] regimes;
     private final List<Region> regions;
     private final Timescales timescales;
@@ -44,12 +48,30 @@ public final class ProfileDiagnosis {
     ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
                      Regime[] regimes, List<Region> regions, Timescales timescales, List<String> warnings,
                      boolean copy) {
+        this(source, criterion, alpha, columns, Map.of(), regimes, regions, timescales, warnings, copy);
+    }
+
+    /**
+     * @param derived columns computed per zone from stored ones rather than stored (only through
+     *                {@link io.github.startransport.spi.sharing.ColumnSharing}): each a pure function
+     *                of the zone index over arrays nobody writes, so that a profile of millions of
+     *                zones needs no array for them
+     */
+    ProfileDiagnosis(String source, Criterion criterion, double alpha, Map<DiagnosisColumn, double[]> columns,
+                     Map<DiagnosisColumn, IntToDoubleFunction> derived, Regime[] regimes, List<Region> regions,
+                     Timescales timescales, List<String> warnings, boolean copy) {
         this.source = source;
         this.criterion = criterion;
         this.alpha = alpha;
         this.columns = new EnumMap<>(DiagnosisColumn.class);
+        this.derived = new EnumMap<>(DiagnosisColumn.class);
         for (DiagnosisColumn c : DiagnosisColumn.values()) {
             double[] v = columns.get(c);
+            IntToDoubleFunction f = derived.get(c);
+            if (v == null && f != null) {
+                this.derived.put(c, f);
+                continue;
+            }
             if (v == null || v.length != regimes.length) {
                 throw new IllegalArgumentException("column " + c.header() + " missing or of the wrong length");
             }
@@ -86,6 +108,7 @@ public final class ProfileDiagnosis {
         this.criterion = d.criterion;
         this.alpha = d.alpha;
         this.columns = d.columns;
+        this.derived = d.derived;
         this.regimes = d.regimes;
         this.regions = d.regions;
         this.timescales = d.timescales;
@@ -131,7 +154,16 @@ public final class ProfileDiagnosis {
      * @return a copy of its values, centre to surface
      */
     public double[] column(DiagnosisColumn column) {
-        return columns.get(column).clone();
+        double[] v = columns.get(column);
+        if (v != null) {
+            return v.clone();
+        }
+        IntToDoubleFunction f = derived.get(column);
+        double[] a = new double[regimes.length];
+        for (int k = 0; k < a.length; k++) {
+            a[k] = f.applyAsDouble(k);
+        }
+        return a;
     }
 
     /**
@@ -140,7 +172,11 @@ public final class ProfileDiagnosis {
      * @return the value
      */
     public double value(DiagnosisColumn column, int zone) {
-        return columns.get(column)[zone];
+        double[] v = columns.get(column);
+        if (v != null) {
+            return v[zone];
+        }
+        return derived.get(column).applyAsDouble(Objects.checkIndex(zone, regimes.length));
     }
 
     /**
@@ -185,11 +221,11 @@ public final class ProfileDiagnosis {
      * @return the largest {@link DiagnosisColumn#NABLA_MISMATCH} over those zones, NaN when none has one
      */
     public double maxNablaMismatch(int firstZone, int lastZone) {
-        double[] m = columns.get(DiagnosisColumn.NABLA_MISMATCH);
         double max = Double.NaN;
         for (int k = firstZone; k <= lastZone; k++) {
-            if (!Double.isNaN(m[k]) && !(m[k] <= max)) {
-                max = m[k];
+            double m = value(DiagnosisColumn.NABLA_MISMATCH, k);
+            if (!Double.isNaN(m) && !(m <= max)) {
+                max = m;
             }
         }
         return max;

@@ -4,6 +4,7 @@ import io.github.startransport.spi.sharing.ColumnSharing;
 
 import java.util.List;
 import java.util.Map;
+import java.util.function.IntToDoubleFunction;
 
 /** Lets {@link ColumnSharing} reach the package-private, copy-free members of this package. */
 final class SharingBridge extends ColumnSharing.Access {
@@ -21,8 +22,10 @@ final class SharingBridge extends ColumnSharing.Access {
 
     @Override
     protected ProfileDiagnosis diagnosis(String source, Criterion criterion, double alpha,
-                                         Map<DiagnosisColumn, double[]> columns, Regime[] regimes,
+                                         Map<DiagnosisColumn, double[]> columns,
+                                         Map<DiagnosisColumn, IntToDoubleFunction> derived, Regime[] regimes,
                                          List<Region> regions, Timescales timescales, List<String> warnings) {
-        return new ProfileDiagnosis(source, criterion, alpha, columns, regimes, regions, timescales, warnings, false);
+        return new ProfileDiagnosis(source, criterion, alpha, columns, derived, regimes, regions, timescales, warnings,
+                false);
     }
 }

@@ -69,6 +69,47 @@ public final class ZoneMajorJacobian {
     }
 
     /**
+     * Copies one zone's four derivative arrays into its block in a buffer, from index
+     * {@code position() + zone * PER_ZONE} (no allocation; the position is not changed).
+     *
+     * @param block the zone-major blocks, limit at least {@code position() + (zone + 1) * PER_ZONE}
+     * @param zone  column index k
+     * @param r     the zone's result (read only)
+     */
+    public static void store(java.nio.DoubleBuffer block, int zone, ConvectionResult r) {
+        final int base = block.position() + zone * PER_ZONE;
+        block.put(base, r.dNabla);
+        block.put(base + ZoneInput.COUNT, r.dVelocity);
+        block.put(base + 2 * ZoneInput.COUNT, r.dConvectiveFraction);
+        block.put(base + 3 * ZoneInput.COUNT, r.dDiffusion);
+    }
+
+    /**
+     * Checks that a buffer can take the blocks of zones up to {@code to} (exclusive) from its position.
+     *
+     * @param block the buffer
+     * @param to    last zone, exclusive
+     * @throws InvalidInputException when the buffer is null, read-only, or its limit is below
+     *                               {@code position() + to * PER_ZONE}
+     */
+    public static void checkCapacity(java.nio.DoubleBuffer block, int to) {
+        if (block == null) {
+            throw new InvalidInputException("jacobian", Double.NaN, "buffer", InvalidInputException.NO_ZONE,
+                    "a writable buffer (use solveZoneMajor with a null array for the values only)");
+        }
+        if (block.isReadOnly()) {
+            throw new InvalidInputException("jacobian.readOnly", 1, "buffer", InvalidInputException.NO_ZONE,
+                    "a writable buffer");
+        }
+        final long needed = block.position() + (long) to * PER_ZONE;
+        if (needed > block.limit()) {
+            throw new InvalidInputException("jacobian.limit", block.limit(), "doubles", InvalidInputException.NO_ZONE,
+                    "at least position + " + PER_ZONE + " per zone, " + needed + " for zones up to " + to
+                            + " from position " + block.position());
+        }
+    }
+
+    /**
      * Checks that a block holds zones up to {@code to} (exclusive).
      *
      * @param block the block, or null (no Jacobian wanted)

@@ -84,7 +84,7 @@ public final class MixingLengthCubic {
      *
      * @param a0 cubic coefficient 2U'/(kU) (dimensionless), &gt; 0
      * @param s  right-hand side W / (4 U'^2) (dimensionless)
-     * @return the efficiency Gamma (dimensionless), 0 when s &lt;= 0
+     * @return the efficiency Gamma (dimensionless), 0 when s &lt;= 0, +infinity when s is +infinity
      */
     public static double efficiency(double a0, double s) {
         return efficiency(a0, s, MAX_STEPS);
@@ -109,10 +109,16 @@ public final class MixingLengthCubic {
             }
             return g;
         }
-        double g = Math.min(s, Math.min(Math.sqrt(s), Math.cbrt(s / a0)));
+        if (s == Double.POSITIVE_INFINITY) {
+            return s; // the root of an infinite right-hand side; Newton would turn it into NaN
+        }
+        // cbrt(S) / cbrt(a0), not cbrt(S / a0): the quotient overflows for a tiny a0 and a huge S, and a start
+        // at sqrt(S) instead leaves Newton (2/3 per step from far above) short of the root after MAX_STEPS
+        double g = Math.min(s, Math.min(Math.sqrt(s), Math.cbrt(s) / Math.cbrt(a0)));
         for (int i = 0; i < maxSteps; i++) {
-            double f = ((a0 * g + 1.0) * g + 1.0) * g - s;
-            double step = f / ((3.0 * a0 * g + 2.0) * g + 1.0);
+            // f / f' with f written relative to S, so that S near the largest double does not overflow
+            double relative = ((a0 * g + 1.0) * g + 1.0) * (g / s) - 1.0;
+            double step = relative * (s / ((3.0 * a0 * g + 2.0) * g + 1.0));
             g -= step;
             if (!(step > 1e-15 * g)) {
                 break;

@@ -5,8 +5,9 @@ import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.ZoneColumns;
-import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
+
+import java.nio.DoubleBuffer;
 
 /**
  * What the mixing-length models share: their options and the calls into {@link MixingLengthZone}.
@@ -74,25 +75,18 @@ public abstract sealed class MixingLengthModel implements ConvectionModel
     }
 
     /**
-     * The per-zone kernel in a loop (no per-zone dispatch), each zone's Jacobian copied into its
+     * The batch kernel of {@link #solveColumns} with each zone's Jacobian written straight into its
      * contiguous block: one stream of stores per zone instead of the column layout's 52.
      */
     @Override
     public void solveZoneMajor(ZoneColumns in, int from, int to, ConvectionColumns out, double[] jacobian) {
-        in.checkRange(from, to, out.capacity);
-        ZoneMajorJacobian.checkCapacity(jacobian, to);
-        final ZoneState zone = out.workZone;
-        final ConvectionResult r = out.workResult;
-        final boolean wanted = jacobian != null;
-        for (int k = from; k < to; k++) {
-            MixingLengthZone.solve(in.load(k, zone), settings.alpha(), settings.geometry(), eddyShape,
-                    settings.centreLimit(), settings.criterion(), settings.semiconvection(), settings.thermohaline(),
-                    r, wanted);
-            if (wanted) {
-                ZoneMajorJacobian.store(jacobian, k, r);
-            }
-            out.store(k, r, false);
-        }
+        MixingLengthZone.solveZoneMajor(settings, eddyShape, in, from, to, out, jacobian);
+    }
+
+    /** The batch kernel of {@link #solveZoneMajor}, each chunk's Jacobian put into the buffer in one bulk put. */
+    @Override
+    public void solveZoneMajorInto(ZoneColumns in, int from, int to, ConvectionColumns out, DoubleBuffer jacobian) {
+        MixingLengthZone.solveZoneMajor(settings, eddyShape, in, from, to, out, jacobian);
     }
 
     @Override

@@ -13,8 +13,10 @@ import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
+import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
 
+import java.nio.DoubleBuffer;
 import java.util.Arrays;
 
 /**
@@ -108,9 +110,63 @@ public final class MixingLengthZone {
     private static final int ORDINARY_SHIFT = 61;
 
     /**
-     * The batch call of both convection models: a loop over the per-zone kernel with the output's
-     * working space (no allocation, no per-zone dispatch); a convective zone's Jacobian is written
-     * straight into the output columns, by the same arithmetic as the per-zone call.
+     * Doubles of working space per zone: three sections of {@link ZoneInput#COUNT} (the intermediate
+     * values that pass from {@link #front} to the cubic and to {@link #back}). In a per-zone call the
+     * sections are the result's {@code dVelocity}, {@code dConvectiveFraction} and {@code dDiffusion},
+     * read before they are overwritten; in a batch call a chunk of zones shares the columns' work array.
+     */
+    static final int SCRATCH = 3 * ZoneInput.COUNT;
+    /** Zones per chunk of a batch call: the stages run over a chunk at a time (see {@link #solveBatch}). */
+    static final int CHUNK = 16;
+
+    // section A
+    private static final int INV_T = 0;
+    private static final int INV_RHO = 1;
+    private static final int INV_P = 2;
+    private static final int INV_M = 3;
+    private static final int INV_R = 4;
+    private static final int INV_KAPPA = 5;
+    private static final int INV_CP = 6;
+    private static final int INV_DELTA = 7;
+    private static final int INV_ALPHA = 8;
+    private static final int LENGTH_HP = 9;
+    private static final int LOSS_ELASTICITY = 10;
+    private static final int PER_L = 11;
+    private static final int NABLA_AD = 12;
+    // section B
+    private static final int NABLA_RAD = 0;
+    private static final int INV_NABLA_RAD = 1;
+    private static final int EXCESS = 2;
+    private static final int INV_EXCESS = 3;
+    private static final int A0 = 4;
+    private static final int INV_FOUR_U_LOSS2 = 5;
+    private static final int RHS = 6;
+    private static final int BETA = 7;
+    private static final int B = 8;
+    private static final int U_LOSS = 9;
+    private static final int VELOCITY_SCALE = 10;
+    private static final int LENGTH = 11;
+    private static final int U = 12;
+    // section C
+    private static final int SCALE_HEIGHT = 0;
+    private static final int PHI = 1;
+    private static final int NABLA_MU = 2;
+    /** Batch calls only: the zone's {@link #front} code and its efficiency Gamma. */
+    private static final int CODE = 3;
+    private static final int GAMMA = 4;
+
+    /** {@link #front} codes below 0: the zone is refused (by the caller, which holds the zone for the message). */
+    private static final int INVALID = -1;
+    private static final int OUT_OF_RANGE = -2;
+    private static final int NO_FRACTION = -3;
+    /** {@link #front} codes of a convective zone: the cubic's fast path, or the equation with composition. */
+    private static final int CUBIC = 4;
+    private static final int COMPOSITION = 5;
+    // codes 0 to 3 are the Regime ordinals of stable zones (never CONVECTIVE's)
+    private static final Regime[] REGIMES = Regime.values();
+
+    /**
+     * The batch call of both convection models with the Jacobian in the column layout, or values only.
      *
      * @param settings  the model's options
      * @param eddyShape y of the transparency correction, or 0 for none
@@ -123,18 +179,179 @@ public final class MixingLengthZone {
     static void solveColumns(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
                              ConvectionColumns out, boolean jacobian) {
         in.checkRange(from, to, out.capacity);
-        final ZoneState zone = out.workZone;
-        final ConvectionResult r = out.workResult;
+        solveBatch(settings, eddyShape, in, from, to, out, jacobian, null, null, 0);
+    }
+
+    /**
+     * The batch call of both convection models with the Jacobian zone-major (or values only).
+     *
+     * @param settings  the model's options
+     * @param eddyShape y of the transparency correction, or 0 for none
+     * @param in        input columns
+     * @param from      first zone (inclusive)
+     * @param to        last zone (exclusive)
+     * @param out       output columns (values)
+     * @param block     the zone-major Jacobian ({@link ZoneMajorJacobian}), or null for values only
+     */
+    static void solveZoneMajor(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
+                               ConvectionColumns out, double[] block) {
+        in.checkRange(from, to, out.capacity);
+        ZoneMajorJacobian.checkCapacity(block, to);
+        solveBatch(settings, eddyShape, in, from, to, out, block != null, block, null, 0);
+    }
+
+    /**
+     * The batch call of both convection models with the Jacobian zone-major in a buffer (for example
+     * over a native host's memory), zone k's block from index {@code position() + k * PER_ZONE}: each
+     * chunk's blocks are staged in the columns' work array (the same stores as into a block) and go
+     * into the buffer with one bulk put per chunk.
+     *
+     * @param settings  the model's options
+     * @param eddyShape y of the transparency correction, or 0 for none
+     * @param in        input columns
+     * @param from      first zone (inclusive)
+     * @param to        last zone (exclusive)
+     * @param out       output columns (values)
+     * @param jacobian  the zone-major Jacobian ({@link ZoneMajorJacobian}), writable, limit at least
+     *                  {@code position() + to * PER_ZONE}
+     */
+    static void solveZoneMajor(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
+                               ConvectionColumns out, DoubleBuffer jacobian) {
+        in.checkRange(from, to, out.capacity);
+        ZoneMajorJacobian.checkCapacity(jacobian, to);
+        solveBatch(settings, eddyShape, in, from, to, out, true, null, jacobian, jacobian.position());
+    }
+
+    /**
+     * The batch calls. Chunks of {@link #CHUNK} zones go through the per-zone stages one stage at a
+     * time: {@link #front} for every zone of the chunk, then the cubic, then {@link #back}, which writes
+     * the values straight into the columns and the Jacobian straight into the zone-major block (or into
+     * a zone-major staging area that is copied into the columns, or into the buffer, once per chunk).
+     * A zone's dependent chain of divisions, roots and Halley steps then overlaps with its neighbours'
+     * instead of running alone, and no zone goes through the per-zone result. The stages are those of the per-zone call,
+     * so every value is bit for bit the same; zones that are not convective go through the per-zone
+     * finish. Zones are finished, and refused, in order: a refused zone leaves every zone before it
+     * written.
+     */
+    private static void solveBatch(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
+                                   ConvectionColumns out, boolean jacobian, double[] block, DoubleBuffer buffer,
+                                   int origin) {
         final double alpha = settings.alpha();
         final MixingLengthGeometry geometry = settings.geometry();
         final CentreLimit limit = settings.centreLimit();
         final Criterion criterion = settings.criterion();
-        final double semiconvection = settings.semiconvection();
-        final double thermohaline = settings.thermohaline();
-        for (int k = from; k < to; k++) {
-            boolean written = solve(in.load(k, zone), alpha, geometry, eddyShape, limit, criterion,
-                    semiconvection, thermohaline, r, jacobian, out, k);
-            out.store(k, r, jacobian && !written);
+        final boolean transparent = eddyShape > 0.0;
+        final double[] starts = geometry.cubicStarts();
+        final double[] work = out.work;
+        // zone j of a chunk: scratch at j * SCRATCH; its staged Jacobian from STAGE, entry (o, i) at
+        // STAGE + (o * COUNT + i) * CHUNK + j for the column layout (each column's run of the chunk's zones
+        // contiguous) and at STAGE + j * PER_ZONE + o * COUNT + i for a buffer (zone-major)
+        final boolean staged = jacobian && block == null;
+        final boolean columnLayout = staged && buffer == null;
+        final double[] jac = staged ? work : block;
+        final int stride = columnLayout ? CHUNK : 1;
+        final double[] t = in.temperature;
+        final double[] rho = in.density;
+        final double[] p = in.pressure;
+        final double[] lum = in.luminosity;
+        final double[] m = in.mass;
+        final double[] r = in.radius;
+        final double[] kappa = in.opacity;
+        final double[] cp = in.cp;
+        final double[] nablaAd = in.nablaAd;
+        final double[] delta = in.delta;
+        final double[] nablaMu = in.nablaMu;
+        final double[] phi = in.phi;
+        for (int c0 = from; c0 < to; c0 += CHUNK) {
+            final int c1 = Math.min(to, c0 + CHUNK);
+            for (int k = c0; k < c1; k++) {
+                final int o = (k - c0) * SCRATCH;
+                work[o + 2 * ZoneInput.COUNT + CODE] = front(t[k], rho[k], p[k], lum[k], m[k], r[k], kappa[k], cp[k],
+                        nablaAd[k], delta[k], nablaMu[k], phi[k], alpha, geometry, eddyShape, limit, criterion,
+                        work, o, null);
+            }
+            for (int k = c0; k < c1; k++) {
+                final int o = (k - c0) * SCRATCH;
+                final int c = o + 2 * ZoneInput.COUNT;
+                final int code = (int) work[c + CODE];
+                if (code >= CUBIC) {
+                    final int b = o + ZoneInput.COUNT;
+                    work[c + GAMMA] = efficiency(code, work[b + A0], work[b + RHS], work[b + BETA], transparent, starts);
+                }
+            }
+            for (int k = c0; k < c1; k++) {
+                final int o = (k - c0) * SCRATCH;
+                final int c = o + 2 * ZoneInput.COUNT;
+                final int code = (int) work[c + CODE];
+                // zone-major: output o of zone k at base + o * COUNT, in the block or in the chunk's staging
+                final int base = columnLayout ? STAGE + (k - c0)
+                        : staged ? STAGE + (k - c0) * ZoneMajorJacobian.PER_ZONE
+                        : origin + k * ZoneMajorJacobian.PER_ZONE;
+                try {
+                    if (code >= CUBIC) {
+                        final double probe = back(code, work[c + GAMMA], jacobian, work, o, null, out, k, jac, base,
+                                stride);
+                        if (probe != 0.0) {
+                            ZoneChecks.finiteOutputs("nabla", out.nabla[k], probe, in.load(k, out.workZone));
+                        }
+                    } else {
+                        final ConvectionResult res = out.workResult;
+                        finish(code, in.load(k, out.workZone), settings.semiconvection(), settings.thermohaline(),
+                                work, o, res);
+                        out.store(k, res, false);
+                        if (jacobian) {
+                            stage(res, jac, base, stride);
+                        }
+                    }
+                } catch (RuntimeException e) {
+                    // the zones before the refused one keep their whole result
+                    if (staged) {
+                        unstage(work, k - c0, out, c0, buffer, origin);
+                    }
+                    throw e;
+                }
+            }
+            if (staged) {
+                unstage(work, c1 - c0, out, c0, buffer, origin);
+            }
+        }
+    }
+
+    /** Start of the staged Jacobians in the columns' work array: after a chunk's scratch. */
+    private static final int STAGE = CHUNK * SCRATCH;
+
+    static {
+        if (STAGE + CHUNK * ZoneMajorJacobian.PER_ZONE > ConvectionColumns.WORK_LENGTH) {
+            throw new AssertionError("ConvectionColumns.work is too short for a chunk");
+        }
+    }
+
+    /** Copies one zone's Jacobian from a result into its block or staging, entry (o, i) at base + (o * COUNT + i) * stride. */
+    private static void stage(ConvectionResult r, double[] jac, int base, int stride) {
+        for (int i = 0; i < ZoneInput.COUNT; i++) {
+            jac[base + i * stride] = r.dNabla[i];
+            jac[base + (ZoneInput.COUNT + i) * stride] = r.dVelocity[i];
+            jac[base + (2 * ZoneInput.COUNT + i) * stride] = r.dConvectiveFraction[i];
+            jac[base + (3 * ZoneInput.COUNT + i) * stride] = r.dDiffusion[i];
+        }
+    }
+
+    /**
+     * Copies a chunk's staged Jacobians into the buffer (one bulk put) or, for the column layout, each
+     * derivative column's run of the chunk's zones with one array copy.
+     */
+    private static void unstage(double[] work, int zones, ConvectionColumns out, int first, DoubleBuffer buffer,
+                                int origin) {
+        if (buffer != null) {
+            buffer.put(origin + first * ZoneMajorJacobian.PER_ZONE, work, STAGE, zones * ZoneMajorJacobian.PER_ZONE);
+            return;
+        }
+        for (int i = 0; i < ZoneInput.COUNT; i++) {
+            System.arraycopy(work, STAGE + i * CHUNK, out.dNabla[i], first, zones);
+            System.arraycopy(work, STAGE + (ZoneInput.COUNT + i) * CHUNK, out.dVelocity[i], first, zones);
+            System.arraycopy(work, STAGE + (2 * ZoneInput.COUNT + i) * CHUNK, out.dConvectiveFraction[i], first,
+                    zones);
+            System.arraycopy(work, STAGE + (3 * ZoneInput.COUNT + i) * CHUNK, out.dDiffusion[i], first, zones);
         }
     }
 
@@ -146,26 +363,33 @@ public final class MixingLengthZone {
      * @throws io.github.startransport.spi.InvalidInputException naming the first bad field
      */
     public static void check(ZoneState z) {
-        // one combined test on the normal path; the detailed checks (which name the first bad field)
-        // only when it fails, so the refusal is exactly theirs
-        final double inf = Double.POSITIVE_INFINITY;
-        final boolean ok = (z.temperature > 0.0) & (z.temperature < inf)
-                & (z.density > 0.0) & (z.density < inf)
-                & (z.pressure > 0.0) & (z.pressure < inf)
-                & (Math.abs(z.luminosity) < inf)
-                & (z.mass > 0.0) & (z.mass < inf)
-                & (z.opacity > 0.0) & (z.opacity < inf)
-                & (z.nablaAd > 0.0) & (z.nablaAd < 1.0)
-                & (z.delta > 0.0) & (z.delta < inf)
-                & (z.phi > 0.0) & (z.phi < inf)
-                & (Math.abs(z.nablaMu) < inf)
-                & (z.radius > 0.0) & (z.radius < inf)
-                & (z.cp > 0.0) & (z.cp < inf);
-        if (!ok) {
+        if (!valid(z.temperature, z.density, z.pressure, z.luminosity, z.mass, z.radius, z.opacity, z.cp, z.nablaAd,
+                z.delta, z.nablaMu, z.phi)) {
             ZoneChecks.forStability(z);
             Checks.positive("radius", z.radius, "cm", z.zone);
             Checks.positive("cp", z.cp, "erg g^-1 K^-1", z.zone);
         }
+    }
+
+    /**
+     * One combined test of every field {@link #check} checks, for the normal path; the detailed checks
+     * (which name the first bad field) run only when it fails, so the refusal is exactly theirs.
+     */
+    private static boolean valid(double t, double rho, double p, double lum, double m, double r, double kappa,
+                                 double cp, double nablaAd, double delta, double nablaMu, double phi) {
+        final double inf = Double.POSITIVE_INFINITY;
+        return (t > 0.0) & (t < inf)
+                & (rho > 0.0) & (rho < inf)
+                & (p > 0.0) & (p < inf)
+                & (Math.abs(lum) < inf)
+                & (m > 0.0) & (m < inf)
+                & (kappa > 0.0) & (kappa < inf)
+                & (nablaAd > 0.0) & (nablaAd < 1.0)
+                & (delta > 0.0) & (delta < inf)
+                & (phi > 0.0) & (phi < inf)
+                & (Math.abs(nablaMu) < inf)
+                & (r > 0.0) & (r < inf)
+                & (cp > 0.0) & (cp < inf);
     }
 
     /**
@@ -206,46 +430,88 @@ public final class MixingLengthZone {
     public static void solve(ZoneState z, double alpha, MixingLengthGeometry geometry, double eddyShape,
                              CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
                              ConvectionResult out, boolean jacobian) {
-        solve(z, alpha, geometry, eddyShape, limit, criterion, semiconvection, thermohaline, out, jacobian, null, 0);
+        // the scratch of the stages is the result's own last three derivative arrays (written last)
+        final int code = front(z.temperature, z.density, z.pressure, z.luminosity, z.mass, z.radius, z.opacity, z.cp,
+                z.nablaAd, z.delta, z.nablaMu, z.phi, alpha, geometry, eddyShape, limit, criterion, null, 0, out);
+        if (code >= CUBIC) {
+            final double[] b = out.dConvectiveFraction;
+            final double gamma = efficiency(code, b[A0], b[RHS], b[BETA], eddyShape > 0.0, geometry.cubicStarts());
+            final double probe = back(code, gamma, jacobian, null, 0, out, null, 0, null, 0, 1);
+            ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
+        } else {
+            finish(code, z, semiconvection, thermohaline, null, 0, out);
+        }
     }
 
     /**
-     * {@link #solve(ZoneState, double, MixingLengthGeometry, double, CentreLimit, Criterion, double, double,
-     * ConvectionResult, boolean)} for a batch call: the Jacobian of a convective zone goes straight into zone
-     * k of {@code columns} (by the same arithmetic, so bit for bit the per-zone values); everything else
-     * goes into {@code out} as in the per-zone call.
-     *
-     * @param columns the batch output whose derivative columns receive a convective zone's Jacobian, or
-     *                null to write it into {@code out}
-     * @param k       the zone's column index
-     * @return true when the Jacobian went into {@code columns} (a convective zone with {@code jacobian});
-     *         false when {@code out} holds the whole result
+     * The efficiency Gamma of a convective zone: the cubic (from the geometry's start table where a0 is
+     * its constant), or the equation with composition.
      */
-    static boolean solve(ZoneState z, double alpha, MixingLengthGeometry geometry, double eddyShape,
-                         CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
-                         ConvectionResult out, boolean jacobian, ConvectionColumns columns, int k) {
-        final double t = z.temperature;
-        final double rho = z.density;
-        final double p = z.pressure;
-        final double m = z.mass;
-        final double r = z.radius;
-        final double kappa = z.opacity;
-        final double cp = z.cp;
-        final double nablaAd = z.nablaAd;
-        final double delta = z.delta;
-        final double nablaMu = z.nablaMu;
-        final double phi = z.phi;
+    private static double efficiency(int code, double a0, double s, double beta, boolean transparent,
+                                     double[] starts) {
+        // without the transparency correction a0 is the geometry's constant, whose start table applies
+        return code == COMPOSITION ? MixingLengthCubic.efficiency(a0, s, beta)
+                : transparent ? MixingLengthCubic.efficiency(a0, s)
+                : MixingLengthCubic.efficiency(a0, s, starts);
+    }
 
+    /**
+     * A zone that {@link #back} does not finish: a stable one (its result written into {@code out}), or
+     * one that is refused.
+     */
+    private static void finish(int code, ZoneState z, double semiconvection, double thermohaline,
+                               double[] scratch, int o, ConvectionResult out) {
+        final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
+        final double[] c = scratch != null ? scratch : out.dDiffusion;
+        final int bo = scratch != null ? o + ZoneInput.COUNT : 0;
+        final int co = scratch != null ? o + 2 * ZoneInput.COUNT : 0;
+        if (code == INVALID) {
+            check(z);
+            throw new IllegalStateException("zone " + z.zone + " failed the combined check but none of the detailed ones");
+        }
+        if (code == OUT_OF_RANGE) {
+            throw lossOutOfRange(z, b[bo + U], b[bo + U_LOSS], b[bo + EXCESS], b[bo + B]);
+        }
+        if (code == NO_FRACTION) {
+            throw undefinedFraction(z);
+        }
+        final double nablaRad = b[bo + NABLA_RAD];
+        final double u = b[bo + U];
+        final double length = b[bo + LENGTH];
+        final double scaleHeight = c[co + SCALE_HEIGHT];
+        out.regime = REGIMES[code];
+        out.nablaRad = nablaRad;
+        out.lossParameter = u;
+        out.scaleHeight = scaleHeight;
+        out.mixingLength = length;
+        RadiativeGradient.valueAndDerivatives(z.opacity, z.luminosity, z.pressure, z.mass, z.temperature, out.dNabla);
+        stable(z, out.regime, nablaRad, semiconvection, thermohaline, out);
+    }
+
+    /**
+     * The first stage of a zone: validation, the reciprocals of the inputs, nabla_rad, H_P, l, U, the
+     * regime and the right-hand side of the cubic, written into three scratch sections of
+     * {@link ZoneInput#COUNT} doubles (A, B and C). Refuses nothing itself: the code says what the
+     * caller must do.
+     *
+     * @return {@link #CUBIC} or {@link #COMPOSITION} for a convective zone; the ordinal of the
+     *         {@link Regime} of a stable zone; {@link #INVALID}, {@link #OUT_OF_RANGE} or
+     *         {@link #NO_FRACTION} for a zone to refuse
+     */
+    private static int front(double t, double rho, double p, double lum, double m, double r, double kappa,
+                             double cp, double nablaAd, double delta, double nablaMu, double phi, double alpha,
+                             MixingLengthGeometry geometry, double eddyShape, CentreLimit limit, Criterion criterion,
+                             double[] scratch, int o, ConvectionResult out) {
         // Normal path: every input that is inverted lies in [2^-256, 2^256) (one test on the bit
         // patterns, which also proves it finite and > 0) and the other fields are valid. Otherwise the
         // detailed checks run, which refuse naming the first bad field.
         final long spread = offset(t) | offset(rho) | offset(p) | offset(m) | offset(r) | offset(kappa)
                 | offset(cp) | offset(delta) | offset(alpha);
         final double inf = Double.POSITIVE_INFINITY;
-        final boolean ordinary = ((spread >>> ORDINARY_SHIFT) == 0L) & (Math.abs(z.luminosity) < inf)
+        final boolean ordinary = ((spread >>> ORDINARY_SHIFT) == 0L) & (Math.abs(lum) < inf)
                 & (nablaAd > 0.0) & (nablaAd < 1.0) & (phi > 0.0) & (phi < inf) & (Math.abs(nablaMu) < inf);
-        if (!ordinary) {
-            check(z);
+        if (!ordinary && !valid(t, rho, p, lum, m, r, kappa, cp, nablaAd, delta, nablaMu, phi)) {
+            return INVALID;
         }
 
         // The reciprocals of the inputs first, independent of the value chain, which is then products
@@ -290,7 +556,7 @@ public final class MixingLengthZone {
 
         // nabla_rad per unit L, then nabla_rad: the same arithmetic as RadiativeGradient.valueAndDerivatives
         final double perL = RadiativeGradient.value(kappa, 1.0, p, m, t);
-        final double nablaRad = perL * z.luminosity;
+        final double nablaRad = perL * lum;
         // g = G m / r^2 and 1/g; H_P = (P / rho) / g and 1/H_P
         final double gravity = (G * m) * (invR * invR);
         final double invGravity = (r * r) * (invM * INV_G);
@@ -312,12 +578,6 @@ public final class MixingLengthZone {
         final double invU = uDenominator / uNumerator;
         final double nablaL = LedouxGradient.value(nablaAd, phi, delta, nablaMu);
         final Regime regime = StabilityClassifier.classify(criterion, nablaRad, nablaAd, nablaL, nablaMu);
-
-        out.regime = regime;
-        out.nablaRad = nablaRad;
-        out.lossParameter = u;
-        out.scaleHeight = scaleHeight;
-        out.mixingLength = length;
 
         final double w = nablaRad - nablaAd;
         final boolean transparent = eddyShape > 0.0;
@@ -344,34 +604,141 @@ public final class MixingLengthZone {
             invW = 1.0 / w;
             invNablaRad = 1.0 / nablaRad;
         }
-        if (regime != Regime.CONVECTIVE) {
-            RadiativeGradient.valueAndDerivatives(kappa, z.luminosity, p, m, t, out.dNabla);
-            stable(z, regime, nablaRad, semiconvection, thermohaline, out);
-            return false;
-        }
         // the composition term of the buoyancy, b = -(phi/delta) nabla_mu, where it destabilises
-        final double b = nablaMu < 0.0 ? (phi * invDelta) * -nablaMu : 0.0;
-        final boolean driven = b > 0.0;
-        final double beta = driven ? b * invFourULoss2 : 0.0;
+        final double buoyancy = nablaMu < 0.0 ? (phi * invDelta) * -nablaMu : 0.0;
+        final boolean driven = buoyancy > 0.0;
+        final double beta = driven ? buoyancy * invFourULoss2 : 0.0;
+
+        // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
+        final double[] a = scratch != null ? scratch : out.dVelocity;
+        final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
+        final double[] c = scratch != null ? scratch : out.dDiffusion;
+        final int ao = scratch != null ? o : 0;
+        final int bo = scratch != null ? o + ZoneInput.COUNT : 0;
+        final int co = scratch != null ? o + 2 * ZoneInput.COUNT : 0;
+        // each section's highest slot first: its bounds check covers the others
+        a[ao + NABLA_AD] = nablaAd;
+        b[bo + U] = u;
+        c[co + NABLA_MU] = nablaMu;
+        a[ao + INV_T] = invT;
+        a[ao + INV_RHO] = invRho;
+        a[ao + INV_P] = invP;
+        a[ao + INV_M] = invM;
+        a[ao + INV_R] = invR;
+        a[ao + INV_KAPPA] = invKappa;
+        a[ao + INV_CP] = invCp;
+        a[ao + INV_DELTA] = invDelta;
+        a[ao + INV_ALPHA] = invAlpha;
+        // d ln l / d ln H_P (0 when l = alpha r), and the loss elasticity 2 (1 - q) of d ln q = 2 (1 - q) d ln omega
+        a[ao + LENGTH_HP] = capped ? 0.0 : 1.0;
+        a[ao + LOSS_ELASTICITY] = 2.0 * thin;
+        a[ao + PER_L] = perL;
+        b[bo + NABLA_RAD] = nablaRad;
+        b[bo + INV_NABLA_RAD] = invNablaRad;
+        b[bo + EXCESS] = w;
+        b[bo + INV_EXCESS] = invW;
+        b[bo + A0] = a0;
+        b[bo + INV_FOUR_U_LOSS2] = invFourULoss2;
+        b[bo + RHS] = s;
+        b[bo + BETA] = beta;
+        b[bo + B] = buoyancy;
+        b[bo + U_LOSS] = uLoss;
+        b[bo + VELOCITY_SCALE] = velocityScale;
+        b[bo + LENGTH] = length;
+        c[co + SCALE_HEIGHT] = scaleHeight;
+        c[co + PHI] = phi;
+
+        if (regime != Regime.CONVECTIVE) {
+            return regime.ordinal();
+        }
         // the cubic's right-hand side S (with composition, the scale |S| + beta of the equation) must be a
         // normal double: outside it U' is beyond ~1e+-154 and S or Gamma do not fit. (W + b > 0 is not
         // required of the rounded terms: the composition solver also takes a W + b that rounding made <= 0.)
         final double drive = driven ? Math.abs(s) + beta : s;
         if (!(drive >= Double.MIN_NORMAL && drive <= Double.MAX_VALUE && beta <= Double.MAX_VALUE)) {
-            throw lossOutOfRange(z, u, uLoss, w, b);
+            return OUT_OF_RANGE;
         }
         if (nablaRad == 0.0) {
-            throw undefinedFraction(z);
+            return NO_FRACTION;
         }
+        return driven ? COMPOSITION : CUBIC;
+    }
 
-        // without the transparency correction a0 is the geometry's constant, whose start table applies
-        final double gamma = driven ? MixingLengthCubic.efficiency(a0, s, beta)
-                : transparent ? MixingLengthCubic.efficiency(a0, s)
-                : MixingLengthCubic.efficiency(a0, s, geometry.cubicStarts());
+    /**
+     * The last stage of a convective zone: from Gamma and the scratch of {@link #front}, the values
+     * (into {@code out}, or into zone k of {@code columns} when that is not null) and, with
+     * {@code jacobian}, the Jacobian, one output's 13 entries at a time into {@code dn}, {@code dv},
+     * {@code df}, {@code dd} from the given offsets in {@link ZoneInput} order. Reads all of its scratch
+     * before it writes anything, so the scratch may be the result's own derivative arrays.
+     *
+     * <p>The Jacobian is written as a few coefficients per output times the derivatives of the "base"
+     * quantities each input moves: nabla_rad (R), nabla_ad (A), ln U' (mu), ln a0 (nu), ln l (lambda)
+     * and ln sqrt(a g delta / H_P) (sigma), and, with composition, the term b (B). From the chain rule
+     * through the cubic (see the class comment):
+     * <pre>
+     *   dS     = (dR - dA) / (4 U'^2) - 2 S mu,   d a0 = a0 nu,   dGamma = (dS - Gamma^3 d a0) / (3 a0 Gamma^2 + 2 Gamma + 1)
+     *   d(a0 Gamma^2 / D) = (d a0 Gamma^2 (Gamma + 1) + a0 Gamma (Gamma + 2) dGamma) / D^2
+     *   d nabla = (Gamma + 1)/D dR + a0 Gamma^2/D dA - W d(a0 Gamma^2 / D)
+     *   d ln v  = lambda + sigma + mu + dGamma / Gamma,   d ln D_conv = d ln v + lambda
+     *   d(F_conv/F) = (dW a0 Gamma^2/D + W d(a0 Gamma^2 / D) - (F_conv/F) dR) / nabla_rad
+     * </pre>
+     * with dGamma = gR (dR - dA) + gB dB + gMu mu + gNu nu and d ln v - lambda - sigma = vR (dR - dA) +
+     * vB dB + vMu mu + vNu nu, from the cubic or from the equation with composition
+     * ({@link MixingLengthCubic#compositionSlope}). Each input moves only some of these
+     * (H_P = P r^2 / (G m rho), g = G m / r^2, U proportional to T^3 sqrt(H_P / (g delta)) /
+     * (c_P kappa rho^2 l^2), omega = kappa rho l, ln q = ln (y omega^2 / (1 + y omega^2))), so each
+     * entry is written with its nonzero terms only. The composition term's share goes in last: each
+     * output's coefficient of dB times d b / d nabla_mu = -phi/delta, d b / d phi = -nabla_mu/delta
+     * and d b / d delta = -b/delta, written for nabla_mu and phi and added to the delta entries.
+     *
+     * @return 0, or NaN when a value or a derivative is not finite (the caller refuses the zone)
+     */
+    private static double back(int code, double gamma, boolean jacobian, double[] scratch, int o,
+                               ConvectionResult out, ConvectionColumns columns, int k, double[] jac, int base,
+                               int stride) {
+        // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
+        final double[] a = scratch != null ? scratch : out.dVelocity;
+        final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
+        final double[] c = scratch != null ? scratch : out.dDiffusion;
+        final int ao = scratch != null ? o : 0;
+        final int bo = scratch != null ? o + ZoneInput.COUNT : 0;
+        final int co = scratch != null ? o + 2 * ZoneInput.COUNT : 0;
+        // each section's highest slot first: its bounds check covers the others
+        final double nablaAd = a[ao + NABLA_AD];
+        final double u = b[bo + U];
+        final double nablaMu = c[co + NABLA_MU];
+        final double invT = a[ao + INV_T];
+        final double invRho = a[ao + INV_RHO];
+        final double invP = a[ao + INV_P];
+        final double invM = a[ao + INV_M];
+        final double invR = a[ao + INV_R];
+        final double invKappa = a[ao + INV_KAPPA];
+        final double invCp = a[ao + INV_CP];
+        final double invDelta = a[ao + INV_DELTA];
+        final double invAlpha = a[ao + INV_ALPHA];
+        final double lengthHp = a[ao + LENGTH_HP];
+        final double le = a[ao + LOSS_ELASTICITY];
+        final double perL = a[ao + PER_L];
+        final double nablaRad = b[bo + NABLA_RAD];
+        final double invNablaRad = b[bo + INV_NABLA_RAD];
+        final double w = b[bo + EXCESS];
+        final double invW = b[bo + INV_EXCESS];
+        final double a0 = b[bo + A0];
+        final double invFourULoss2 = b[bo + INV_FOUR_U_LOSS2];
+        final double s = b[bo + RHS];
+        final double beta = b[bo + BETA];
+        final double buoyancy = b[bo + B];
+        final double uLoss = b[bo + U_LOSS];
+        final double velocityScale = b[bo + VELOCITY_SCALE];
+        final double length = b[bo + LENGTH];
+        final double scaleHeight = c[co + SCALE_HEIGHT];
+        final double phi = c[co + PHI];
+        final boolean driven = code == COMPOSITION;
+
         final double den = MixingLengthCubic.denominator(a0, gamma);
         final double invDen;
         // d Gamma = gR (dR - dA) + gB dB + gMu mu + gNu nu and d ln v = vR (dR - dA) + vB dB + vMu mu + vNu nu
-        // + lambda + sigma (see convectiveJacobian), with B = b
+        // + lambda + sigma, with B = b
         final double gR;
         final double gB;
         final double gMu;
@@ -422,6 +789,7 @@ public final class MixingLengthZone {
         final double shareRad = a0Gamma2 * invDen;               // (nabla_rad - nabla) / W
         final double shareSuper = (gamma + 1.0) * invDen;        // (nabla - nabla_ad) / W
         final double nabla = nablaAd + w * shareSuper;
+        final double nablaElement = nablaAd + w * invDen;
         final double x = 2.0 * uLoss * gamma;
         final double velocity = length * velocityScale * x;
         // F_conv / F = (W / nabla_rad) (a0 Gamma^2 / D): for W > 0 both factors lie in [0, 1), but their
@@ -429,60 +797,45 @@ public final class MixingLengthZone {
         // W <= 0 (convection driven by composition alone) it is the signed fraction, <= 0 for L > 0.
         final double product = w * shareRad * invNablaRad;
         final double convective = w > 0.0 ? Math.min(product, 1.0) : product;
+        final double radiative = nabla * invNablaRad;
         final double diffusion = MixingCoefficients.convective(velocity, length);
-
-        out.nabla = nabla;
-        out.nablaElement = nablaAd + w * invDen;
-        out.velocity = velocity;
-        out.convectiveFraction = convective;
-        out.radiativeFraction = nabla * invNablaRad;
-        out.efficiency = gamma;
-        out.diffusion = diffusion;
-        double probe = 0.0;
-        if (jacobian) {
-            probe = convectiveJacobian(invT, invRho, invP, invM, invR, invKappa, invCp, invDelta, invAlpha, capped,
-                    2.0 * thin, nablaRad, invNablaRad, perL, w, a0, gamma, a0Gamma2, invDen, gR, gMu, gNu, vR, vMu,
-                    vNu, shareRad, shareSuper, velocity, convective, diffusion, out, columns, k);
-            if (driven) {
-                probe += compositionJacobian(phi, invDelta, nablaMu, b, w, a0, gamma, invDen, invNablaRad, gB, vB,
-                        velocity, diffusion, out, columns, k);
+        if (columns == null) {
+            out.regime = Regime.CONVECTIVE;
+            out.nablaRad = nablaRad;
+            out.lossParameter = u;
+            out.scaleHeight = scaleHeight;
+            out.mixingLength = length;
+            out.nabla = nabla;
+            out.nablaElement = nablaElement;
+            out.velocity = velocity;
+            out.convectiveFraction = convective;
+            out.radiativeFraction = radiative;
+            out.efficiency = gamma;
+            out.diffusion = diffusion;
+        } else {
+            if (columns.regime[k] != Regime.CONVECTIVE) {
+                // a reference store costs a garbage-collector barrier: skipped when the regime is unchanged
+                columns.regime[k] = Regime.CONVECTIVE;
             }
+            columns.nablaRad[k] = nablaRad;
+            columns.lossParameter[k] = u;
+            columns.scaleHeight[k] = scaleHeight;
+            columns.mixingLength[k] = length;
+            columns.nabla[k] = nabla;
+            columns.nablaElement[k] = nablaElement;
+            columns.velocity[k] = velocity;
+            columns.convectiveFraction[k] = convective;
+            columns.radiativeFraction[k] = radiative;
+            columns.efficiency[k] = gamma;
+            columns.diffusion[k] = diffusion;
         }
-        guard(z, out, probe);
-        return jacobian && columns != null;
-    }
+        // a short tree of sums (any non-finite term makes it NaN)
+        final double values = ((((nablaRad + nabla) + (nablaElement + velocity))
+                + ((convective + radiative) + (gamma + u))) + ((scaleHeight + length) + diffusion)) * 0.0;
+        if (!jacobian) {
+            return values;
+        }
 
-    /**
-     * The Jacobian of a convective zone, written as a few coefficients per output times the
-     * derivatives of the "base" quantities each input moves: nabla_rad (R), nabla_ad (A),
-     * ln U' (mu), ln a0 (nu), ln l (lambda) and ln sqrt(a g delta / H_P) (sigma); the composition
-     * term b (B) is added by {@link #compositionJacobian}. From the chain rule through the cubic
-     * (see the class comment):
-     * <pre>
-     *   dS     = (dR - dA) / (4 U'^2) - 2 S mu,   d a0 = a0 nu,   dGamma = (dS - Gamma^3 d a0) / (3 a0 Gamma^2 + 2 Gamma + 1)
-     *   d(a0 Gamma^2 / D) = (d a0 Gamma^2 (Gamma + 1) + a0 Gamma (Gamma + 2) dGamma) / D^2
-     *   d nabla = (Gamma + 1)/D dR + a0 Gamma^2/D dA - W d(a0 Gamma^2 / D)
-     *   d ln v  = lambda + sigma + mu + dGamma / Gamma,   d ln D_conv = d ln v + lambda
-     *   d(F_conv/F) = (dW a0 Gamma^2/D + W d(a0 Gamma^2 / D) - (F_conv/F) dR) / nabla_rad
-     * </pre>
-     * The caller passes dGamma as gR (dR - dA) + gMu mu + gNu nu and d ln v - lambda - sigma as
-     * vR (dR - dA) + vMu mu + vNu nu, from the cubic or from the equation with composition
-     * ({@link MixingLengthCubic#compositionSlope}). Each input moves only some of these
-     * (H_P = P r^2 / (G m rho), g = G m / r^2, U proportional to T^3 sqrt(H_P / (g delta)) /
-     * (c_P kappa rho^2 l^2), omega = kappa rho l, ln q = ln (y omega^2 / (1 + y omega^2))), so each
-     * entry is written with its nonzero terms only. The values go to {@code out}'s arrays, or to
-     * zone k of {@code columns} when that is not null, by the same arithmetic (bit-identical either
-     * way).
-     */
-    private static double convectiveJacobian(double invT, double invRho, double invP, double invM, double invR,
-                                           double invKappa, double invCp, double invDelta, double invAlpha,
-                                           boolean capped, double lossElasticity, double nablaRad,
-                                           double invNablaRad, double perL, double w, double a0,
-                                           double gamma, double a0Gamma2, double invDen,
-                                           double gR, double gMu, double gNu, double vR, double vMu, double vNu,
-                                           double shareRad, double shareSuper, double velocity, double convective,
-                                           double diffusion, ConvectionResult out, ConvectionColumns columns,
-                                           int k) {
         // d(shareRad) = sR (dR - dA) + sMu mu + sNu nu
         final double invDen2 = invDen * invDen;
         final double shareSlope = (a0 * gamma * (gamma + 2.0)) * invDen2;
@@ -501,28 +854,37 @@ public final class MixingLengthZone {
         final double cNu = w * sNu * invNablaRad;
 
         // per input: base derivatives per unit of the input
-        // d ln l / d ln q for H_P's inputs (0 when l = alpha r), and d ln q' of q = omega's share
-        final double lengthHp = capped ? 0.0 : 1.0;
-        final double le = lossElasticity;
-        // the 44 entries that can be nonzero, input by input: d nabla, d v, d(F_conv/F), d D
-        final double nablaT;
-        final double velT;
-        final double fracT;
-        final double diffT;
+        // lengthHp: d ln l / d ln H_P for H_P's inputs (0 when l = alpha r); le: d ln q / d ln omega
+        // the 44 entries that can be nonzero, input by input: d nabla, d v, d(F_conv/F), d D, each stored as soon
+        // as it is known (few values live at a time). Every entry finite? Their plain sum is finite only if
+        // each one is (an infinity or NaN carries through); in the rare case that it is not, the exact test,
+        // the sum of (entry * 0), which is NaN exactly when one entry is not finite.
+        double sum;
+        // alpha: l ~ alpha, U ~ l^-2, omega ~ l
+        {
+            double lambda = invAlpha;
+            double nu = le * lambda;
+            double mu = -2.0 * lambda + nu;
+            double lnV = vMu * mu + vNu * nu + lambda;
+            final double nablaAlpha = nMu * mu + nNu * nu;
+            final double velAlpha = velocity * lnV;
+            final double fracAlpha = cMu * mu + cNu * nu;
+            final double diffAlpha = diffusion * (lnV + lambda);
+            put(out, jac, base, stride, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
+            sum = (nablaAlpha + velAlpha) + (fracAlpha + diffAlpha);
+        }
         // T: nabla_rad ~ T^-4, U ~ T^3
         {
             double dR = -4.0 * nablaRad * invT;
             double mu = 3.0 * invT;
             double lnV = vR * dR + vMu * mu;
-            nablaT = nR * dR + nMu * mu;
-            velT = velocity * lnV;
-            fracT = cR * dR + cMu * mu;
-            diffT = diffusion * lnV;
+            final double nablaT = nR * dR + nMu * mu;
+            final double velT = velocity * lnV;
+            final double fracT = cR * dR + cMu * mu;
+            final double diffT = diffusion * lnV;
+            put(out, jac, base, stride, ZoneInput.T, nablaT, velT, fracT, diffT);
+            sum += (nablaT + velT) + (fracT + diffT);
         }
-        final double nablaRho;
-        final double velRho;
-        final double fracRho;
-        final double diffRho;
         // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
         {
             double lambda = -lengthHp * invRho;
@@ -530,15 +892,13 @@ public final class MixingLengthZone {
             double mu = -2.5 * invRho - 2.0 * lambda + nu;
             double sigma = 0.5 * invRho;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            nablaRho = nMu * mu + nNu * nu;
-            velRho = velocity * lnV;
-            fracRho = cMu * mu + cNu * nu;
-            diffRho = diffusion * (lnV + lambda);
+            final double nablaRho = nMu * mu + nNu * nu;
+            final double velRho = velocity * lnV;
+            final double fracRho = cMu * mu + cNu * nu;
+            final double diffRho = diffusion * (lnV + lambda);
+            put(out, jac, base, stride, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
+            sum += (nablaRho + velRho) + (fracRho + diffRho);
         }
-        final double nablaP;
-        final double velP;
-        final double fracP;
-        final double diffP;
         // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
         {
             double dR = nablaRad * invP;
@@ -547,28 +907,24 @@ public final class MixingLengthZone {
             double mu = 0.5 * invP - 2.0 * lambda + nu;
             double sigma = -0.5 * invP;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            nablaP = nR * dR + nMu * mu + nNu * nu;
-            velP = velocity * lnV;
-            fracP = cR * dR + cMu * mu + cNu * nu;
-            diffP = diffusion * (lnV + lambda);
+            final double nablaP = nR * dR + nMu * mu + nNu * nu;
+            final double velP = velocity * lnV;
+            final double fracP = cR * dR + cMu * mu + cNu * nu;
+            final double diffP = diffusion * (lnV + lambda);
+            put(out, jac, base, stride, ZoneInput.P, nablaP, velP, fracP, diffP);
+            sum += (nablaP + velP) + (fracP + diffP);
         }
-        final double nablaL;
-        final double velL;
-        final double fracL;
-        final double diffL;
         // L: nabla_rad only
         {
             double dR = perL;
             double lnV = vR * dR;
-            nablaL = nR * dR;
-            velL = velocity * lnV;
-            fracL = cR * dR;
-            diffL = diffusion * lnV;
+            final double nablaL = nR * dR;
+            final double velL = velocity * lnV;
+            final double fracL = cR * dR;
+            final double diffL = diffusion * lnV;
+            put(out, jac, base, stride, ZoneInput.L, nablaL, velL, fracL, diffL);
+            sum += (nablaL + velL) + (fracL + diffL);
         }
-        final double nablaM;
-        final double velM;
-        final double fracM;
-        final double diffM;
         // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
         {
             double dR = -nablaRad * invM;
@@ -577,15 +933,13 @@ public final class MixingLengthZone {
             double mu = -invM - 2.0 * lambda + nu;
             double sigma = invM;
             double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            nablaM = nR * dR + nMu * mu + nNu * nu;
-            velM = velocity * lnV;
-            fracM = cR * dR + cMu * mu + cNu * nu;
-            diffM = diffusion * (lnV + lambda);
+            final double nablaM = nR * dR + nMu * mu + nNu * nu;
+            final double velM = velocity * lnV;
+            final double fracM = cR * dR + cMu * mu + cNu * nu;
+            final double diffM = diffusion * (lnV + lambda);
+            put(out, jac, base, stride, ZoneInput.M, nablaM, velM, fracM, diffM);
+            sum += (nablaM + velM) + (fracM + diffM);
         }
-        final double nablaRadius;
-        final double velRadius;
-        final double fracRadius;
-        final double diffRadius;
         // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
         {
             double lambda = (1.0 + lengthHp) * invR;
@@ -593,163 +947,147 @@ public final class MixingLengthZone {
             double mu = 2.0 * invR - 2.0 * lambda + nu;
             double sigma = -2.0 * invR;
             double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            nablaRadius = nMu * mu + nNu * nu;
-            velRadius = velocity * lnV;
-            fracRadius = cMu * mu + cNu * nu;
-            diffRadius = diffusion * (lnV + lambda);
+            final double nablaRadius = nMu * mu + nNu * nu;
+            final double velRadius = velocity * lnV;
+            final double fracRadius = cMu * mu + cNu * nu;
+            final double diffRadius = diffusion * (lnV + lambda);
+            put(out, jac, base, stride, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
+            sum += (nablaRadius + velRadius) + (fracRadius + diffRadius);
         }
-        final double nablaKappa;
-        final double velKappa;
-        final double fracKappa;
-        final double diffKappa;
         // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
         {
             double dR = nablaRad * invKappa;
             double nu = le * invKappa;
             double mu = -invKappa + nu;
             double lnV = vR * dR + vMu * mu + vNu * nu;
-            nablaKappa = nR * dR + nMu * mu + nNu * nu;
-            velKappa = velocity * lnV;
-            fracKappa = cR * dR + cMu * mu + cNu * nu;
-            diffKappa = diffusion * lnV;
+            final double nablaKappa = nR * dR + nMu * mu + nNu * nu;
+            final double velKappa = velocity * lnV;
+            final double fracKappa = cR * dR + cMu * mu + cNu * nu;
+            final double diffKappa = diffusion * lnV;
+            put(out, jac, base, stride, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
+            sum += (nablaKappa + velKappa) + (fracKappa + diffKappa);
         }
-        final double nablaCp;
-        final double velCp;
-        final double fracCp;
-        final double diffCp;
         // c_P: U ~ 1/c_P
         {
             double mu = -invCp;
             double lnV = vMu * mu;
-            nablaCp = nMu * mu;
-            velCp = velocity * lnV;
-            fracCp = cMu * mu;
-            diffCp = diffusion * lnV;
+            final double nablaCp = nMu * mu;
+            final double velCp = velocity * lnV;
+            final double fracCp = cMu * mu;
+            final double diffCp = diffusion * lnV;
+            put(out, jac, base, stride, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
+            sum += (nablaCp + velCp) + (fracCp + diffCp);
         }
-        final double nablaNablaAd;
-        final double velNablaAd;
-        final double fracNablaAd;
-        final double diffNablaAd;
         // nabla_ad: dA = 1
         {
             double lnV = -vR;
-            nablaNablaAd = nA;
-            velNablaAd = velocity * lnV;
-            fracNablaAd = cA;
-            diffNablaAd = diffusion * lnV;
+            final double nablaNablaAd = nA;
+            final double velNablaAd = velocity * lnV;
+            final double fracNablaAd = cA;
+            final double diffNablaAd = diffusion * lnV;
+            put(out, jac, base, stride, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
+            sum += (nablaNablaAd + velNablaAd) + (fracNablaAd + diffNablaAd);
         }
-        final double nablaDelta;
-        final double velDelta;
-        final double fracDelta;
-        final double diffDelta;
         // delta: U ~ delta^-1/2, sigma = +1/2
         {
             double mu = -0.5 * invDelta;
             double lnV = vMu * mu + 0.5 * invDelta;
-            nablaDelta = nMu * mu;
-            velDelta = velocity * lnV;
-            fracDelta = cMu * mu;
-            diffDelta = diffusion * lnV;
+            final double nablaDelta = nMu * mu;
+            final double velDelta = velocity * lnV;
+            final double fracDelta = cMu * mu;
+            final double diffDelta = diffusion * lnV;
+            put(out, jac, base, stride, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
+            sum += (nablaDelta + velDelta) + (fracDelta + diffDelta);
         }
-        final double nablaAlpha;
-        final double velAlpha;
-        final double fracAlpha;
-        final double diffAlpha;
-        // alpha: l ~ alpha, U ~ l^-2, omega ~ l
-        {
-            double lambda = invAlpha;
-            double nu = le * lambda;
-            double mu = -2.0 * lambda + nu;
-            double lnV = vMu * mu + vNu * nu + lambda;
-            nablaAlpha = nMu * mu + nNu * nu;
-            velAlpha = velocity * lnV;
-            fracAlpha = cMu * mu + cNu * nu;
-            diffAlpha = diffusion * (lnV + lambda);
+        // nabla_mu and phi enter only through the composition term, added below
+        put(out, jac, base, stride, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
+        put(out, jac, base, stride, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
+        double probe = values;
+        if (!(Math.abs(sum) <= Double.MAX_VALUE)) {
+            for (int output = 0; output < ZoneMajorJacobian.OUTPUTS; output++) {
+                for (int i = 0; i < ZoneInput.COUNT; i++) {
+                    probe += entry(out, jac, base, stride, output, i) * 0.0;
+                }
+            }
         }
-        // nabla_mu and phi enter only through the composition term (written by compositionJacobian).
-        // The stores follow in one straight run per destination, so that nothing branches between them.
-        if (columns == null) {
-            write(out.dNabla, nablaT, nablaRho, nablaP, nablaL, nablaM, nablaRadius, nablaKappa, nablaCp, nablaNablaAd,
-                    nablaDelta, nablaAlpha);
-            write(out.dVelocity, velT, velRho, velP, velL, velM, velRadius, velKappa, velCp, velNablaAd, velDelta,
-                    velAlpha);
-            write(out.dConvectiveFraction, fracT, fracRho, fracP, fracL, fracM, fracRadius, fracKappa, fracCp,
-                    fracNablaAd, fracDelta, fracAlpha);
-            write(out.dDiffusion, diffT, diffRho, diffP, diffL, diffM, diffRadius, diffKappa, diffCp, diffNablaAd,
-                    diffDelta, diffAlpha);
-        } else {
-            write(columns.dNabla, k, nablaT, nablaRho, nablaP, nablaL, nablaM, nablaRadius, nablaKappa, nablaCp,
-                    nablaNablaAd, nablaDelta, nablaAlpha);
-            write(columns.dVelocity, k, velT, velRho, velP, velL, velM, velRadius, velKappa, velCp, velNablaAd,
-                    velDelta, velAlpha);
-            write(columns.dConvectiveFraction, k, fracT, fracRho, fracP, fracL, fracM, fracRadius, fracKappa, fracCp,
-                    fracNablaAd, fracDelta, fracAlpha);
-            write(columns.dDiffusion, k, diffT, diffRho, diffP, diffL, diffM, diffRadius, diffKappa, diffCp,
-                    diffNablaAd, diffDelta, diffAlpha);
+        if (driven) {
+            // the composition term, after the entries it adds to (d/d delta)
+            final double shareSlopeB = shareSlope * gB;
+            final double bMu = -(phi * invDelta);
+            final double bPhi = -nablaMu * invDelta;
+            final double bDelta = -buoyancy * invDelta;
+            probe += composition(out, jac, base, stride, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
+                    + composition(out, jac, base, stride, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
+                    + composition(out, jac, base, stride, ZoneMajorJacobian.CONVECTIVE_FRACTION,
+                            w * shareSlopeB * invNablaRad, bMu, bPhi, bDelta)
+                    + composition(out, jac, base, stride, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
+                            bDelta);
         }
-        // sum of (entry * 0): NaN exactly when one entry is not finite; a short tree of sums
-        final double zeroT = (nablaT * 0.0 + velT * 0.0) + (fracT * 0.0 + diffT * 0.0);
-        final double zeroRho = (nablaRho * 0.0 + velRho * 0.0) + (fracRho * 0.0 + diffRho * 0.0);
-        final double zeroP = (nablaP * 0.0 + velP * 0.0) + (fracP * 0.0 + diffP * 0.0);
-        final double zeroL = (nablaL * 0.0 + velL * 0.0) + (fracL * 0.0 + diffL * 0.0);
-        final double zeroM = (nablaM * 0.0 + velM * 0.0) + (fracM * 0.0 + diffM * 0.0);
-        final double zeroRadius = (nablaRadius * 0.0 + velRadius * 0.0) + (fracRadius * 0.0 + diffRadius * 0.0);
-        final double zeroKappa = (nablaKappa * 0.0 + velKappa * 0.0) + (fracKappa * 0.0 + diffKappa * 0.0);
-        final double zeroCp = (nablaCp * 0.0 + velCp * 0.0) + (fracCp * 0.0 + diffCp * 0.0);
-        final double zeroNablaAd = (nablaNablaAd * 0.0 + velNablaAd * 0.0) + (fracNablaAd * 0.0 + diffNablaAd * 0.0);
-        final double zeroDelta = (nablaDelta * 0.0 + velDelta * 0.0) + (fracDelta * 0.0 + diffDelta * 0.0);
-        final double zeroAlpha = (nablaAlpha * 0.0 + velAlpha * 0.0) + (fracAlpha * 0.0 + diffAlpha * 0.0);
-        return ((((zeroT + zeroRho) + (zeroP + zeroL)) + ((zeroM + zeroRadius) + (zeroKappa + zeroCp)))
-                + ((zeroNablaAd + zeroDelta) + zeroAlpha));
+        return probe;
     }
 
     /**
-     * The composition term's share of a convective zone's Jacobian, where b = -(phi/delta) nabla_mu &gt; 0
-     * enters the buoyancy: each output's coefficient of dB (from d Gamma = ... + gB dB and
-     * d ln v = ... + vB dB), times d b / d nabla_mu = -phi/delta, d b / d phi = -nabla_mu/delta and
-     * d b / d delta = -b/delta. Writes the nabla_mu and phi entries and adds to the delta entries
-     * that {@link #convectiveJacobian} wrote, in {@code out} or in zone k of {@code columns}.
-     *
-     * @return sum of (entry * 0) over the entries written: NaN exactly when one is not finite
+     * Stores the four entries of one input i into the zone-major block or the chunk's staging, entry
+     * (o, i) at {@code base + (o * COUNT + i) * stride} (the highest offset first), or into the result's
+     * arrays when there is neither. The stride is 1 or {@link #CHUNK}, each written out so that every
+     * offset is a constant.
      */
-    private static double compositionJacobian(double phi, double invDelta, double nablaMu, double b, double w,
-                                              double a0, double gamma, double invDen, double invNablaRad,
-                                              double gB, double vB, double velocity, double diffusion,
-                                              ConvectionResult out, ConvectionColumns columns, int k) {
-        final double shareSlope = (a0 * gamma * (gamma + 2.0)) * (invDen * invDen);
-        final double sB = shareSlope * gB;
-        final double nablaB = -w * sB;
-        final double velB = velocity * vB;
-        final double fracB = w * sB * invNablaRad;
-        final double diffB = diffusion * vB;
-        final double bMu = -(phi * invDelta);
-        final double bPhi = -nablaMu * invDelta;
-        final double bDelta = -b * invDelta;
-        if (columns == null) {
-            return composition(out.dNabla, nablaB, bMu, bPhi, bDelta) + composition(out.dVelocity, velB, bMu, bPhi, bDelta)
-                    + composition(out.dConvectiveFraction, fracB, bMu, bPhi, bDelta)
-                    + composition(out.dDiffusion, diffB, bMu, bPhi, bDelta);
+    private static void put(ConvectionResult out, double[] jac, int base, int stride, int i,
+                            double nabla, double velocity, double fraction, double diffusion) {
+        if (jac != null) {
+            if (stride == 1) {
+                jac[base + 3 * ZoneInput.COUNT + i] = diffusion;
+                jac[base + 2 * ZoneInput.COUNT + i] = fraction;
+                jac[base + ZoneInput.COUNT + i] = velocity;
+                jac[base + i] = nabla;
+            } else {
+                jac[base + (3 * ZoneInput.COUNT + i) * CHUNK] = diffusion;
+                jac[base + (2 * ZoneInput.COUNT + i) * CHUNK] = fraction;
+                jac[base + (ZoneInput.COUNT + i) * CHUNK] = velocity;
+                jac[base + i * CHUNK] = nabla;
+            }
+        } else {
+            out.dDiffusion[i] = diffusion;
+            out.dConvectiveFraction[i] = fraction;
+            out.dVelocity[i] = velocity;
+            out.dNabla[i] = nabla;
         }
-        return composition(columns.dNabla, k, nablaB, bMu, bPhi, bDelta)
-                + composition(columns.dVelocity, k, velB, bMu, bPhi, bDelta)
-                + composition(columns.dConvectiveFraction, k, fracB, bMu, bPhi, bDelta)
-                + composition(columns.dDiffusion, k, diffB, bMu, bPhi, bDelta);
     }
 
-    /** One output's composition entries: d/d nabla_mu and d/d phi written, d/d delta added to. */
-    private static double composition(double[] d, double perB, double bMu, double bPhi, double bDelta) {
-        d[ZoneInput.NABLA_MU] = perB * bMu;
-        d[ZoneInput.PHI] = perB * bPhi;
-        d[ZoneInput.DELTA] += perB * bDelta;
-        return (d[ZoneInput.NABLA_MU] * 0.0 + d[ZoneInput.PHI] * 0.0) + d[ZoneInput.DELTA] * 0.0;
+    /** Entry (o, i) of a Jacobian written by {@link #put}. */
+    private static double entry(ConvectionResult out, double[] jac, int base, int stride, int o, int i) {
+        return jac != null ? jac[base + (o * ZoneInput.COUNT + i) * stride] : row(out, o)[i];
     }
 
-    /** {@link #composition(double[], double, double, double, double)} for zone k of an output's columns. */
-    private static double composition(double[][] c, int k, double perB, double bMu, double bPhi, double bDelta) {
-        c[ZoneInput.NABLA_MU][k] = perB * bMu;
-        c[ZoneInput.PHI][k] = perB * bPhi;
-        c[ZoneInput.DELTA][k] += perB * bDelta;
-        return (c[ZoneInput.NABLA_MU][k] * 0.0 + c[ZoneInput.PHI][k] * 0.0) + c[ZoneInput.DELTA][k] * 0.0;
+    /** Sets entry (o, i) of a Jacobian written by {@link #put}. */
+    private static void setEntry(ConvectionResult out, double[] jac, int base, int stride, int o, int i,
+                                 double value) {
+        if (jac != null) {
+            jac[base + (o * ZoneInput.COUNT + i) * stride] = value;
+        } else {
+            row(out, o)[i] = value;
+        }
+    }
+
+    private static double[] row(ConvectionResult out, int o) {
+        return o == ZoneMajorJacobian.NABLA ? out.dNabla : o == ZoneMajorJacobian.VELOCITY ? out.dVelocity
+                : o == ZoneMajorJacobian.CONVECTIVE_FRACTION ? out.dConvectiveFraction : out.dDiffusion;
+    }
+
+    /**
+     * One output's composition entries: d/d nabla_mu and d/d phi written, d/d delta added to.
+     *
+     * @return the sum of (entry * 0) over the three: NaN exactly when one is not finite
+     */
+    private static double composition(ConvectionResult out, double[] jac, int base, int stride, int o,
+                                      double perB, double bMu, double bPhi, double bDelta) {
+        final double mu = perB * bMu;
+        final double phi = perB * bPhi;
+        final double delta = entry(out, jac, base, stride, o, ZoneInput.DELTA) + perB * bDelta;
+        setEntry(out, jac, base, stride, o, ZoneInput.NABLA_MU, mu);
+        setEntry(out, jac, base, stride, o, ZoneInput.PHI, phi);
+        setEntry(out, jac, base, stride, o, ZoneInput.DELTA, delta);
+        return (mu * 0.0 + phi * 0.0) + delta * 0.0;
     }
 
     /**
@@ -781,41 +1119,6 @@ public final class MixingLengthZone {
         return Double.doubleToRawLongBits(x) - ORDINARY_LOW;
     }
 
-    /** Writes one output's Jacobian row in {@link ZoneInput} order, with 0 for nabla_mu and phi. */
-    private static void write(double[] d, double t, double rho, double p, double l, double m, double r,
-                              double kappa, double cp, double nablaAd, double delta, double alpha) {
-        d[ZoneInput.ALPHA] = alpha;
-        d[ZoneInput.T] = t;
-        d[ZoneInput.RHO] = rho;
-        d[ZoneInput.P] = p;
-        d[ZoneInput.L] = l;
-        d[ZoneInput.M] = m;
-        d[ZoneInput.R] = r;
-        d[ZoneInput.KAPPA] = kappa;
-        d[ZoneInput.CP] = cp;
-        d[ZoneInput.NABLA_AD] = nablaAd;
-        d[ZoneInput.DELTA] = delta;
-        d[ZoneInput.NABLA_MU] = 0.0;
-        d[ZoneInput.PHI] = 0.0;
-    }
-
-    /** Writes one output's Jacobian entries into zone k of its columns, with 0 for nabla_mu and phi. */
-    private static void write(double[][] c, int k, double t, double rho, double p, double l, double m, double r,
-                              double kappa, double cp, double nablaAd, double delta, double alpha) {
-        c[ZoneInput.T][k] = t;
-        c[ZoneInput.RHO][k] = rho;
-        c[ZoneInput.P][k] = p;
-        c[ZoneInput.L][k] = l;
-        c[ZoneInput.M][k] = m;
-        c[ZoneInput.R][k] = r;
-        c[ZoneInput.KAPPA][k] = kappa;
-        c[ZoneInput.CP][k] = cp;
-        c[ZoneInput.NABLA_AD][k] = nablaAd;
-        c[ZoneInput.DELTA][k] = delta;
-        c[ZoneInput.NABLA_MU][k] = 0.0;
-        c[ZoneInput.PHI][k] = 0.0;
-        c[ZoneInput.ALPHA][k] = alpha;
-    }
 
     /**
      * Refuses a zone whose valid inputs overflow double precision somewhere on the way (see

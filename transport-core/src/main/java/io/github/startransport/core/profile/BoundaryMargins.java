@@ -1,5 +1,7 @@
 package io.github.startransport.core.profile;
 
+import java.util.function.IntToDoubleFunction;
+
 /**
  * Self-consistency of a convective edge, after Gabriel et al. (2014, A&amp;A 569, A63): at a convective
  * boundary the criterion must be marginal when the boundary is approached from the convective side,
@@ -44,11 +46,27 @@ public final class BoundaryMargins {
      * @return (nabla_rad - nabla_crit) / nabla_ad at the edge, seen from the convective side (dimensionless)
      */
     public static double inside(double[] r, double[] margin, double[] nablaAd, int inner, int next, double edge) {
-        double m1 = margin[inner] / nablaAd[inner];
+        return inside(r, k -> margin[k], nablaAd, inner, next, edge);
+    }
+
+    /**
+     * {@link #inside(double[], double[], double[], int, int, double)} with the margin computed per zone.
+     *
+     * @param r       radius per zone (cm), increasing
+     * @param margin  the criterion's convective margin of a zone (dimensionless)
+     * @param nablaAd nabla_ad per zone (dimensionless)
+     * @param inner   the convective zone nearest the edge
+     * @param next    the convective zone next to it, away from the edge, or -1 when the region has only one zone
+     * @param edge    radius of the edge (cm)
+     * @return (nabla_rad - nabla_crit) / nabla_ad at the edge, seen from the convective side (dimensionless)
+     */
+    public static double inside(double[] r, IntToDoubleFunction margin, double[] nablaAd, int inner, int next,
+                                double edge) {
+        double m1 = margin.applyAsDouble(inner) / nablaAd[inner];
         if (next < 0) {
             return m1;
         }
-        double m2 = margin[next] / nablaAd[next];
+        double m2 = margin.applyAsDouble(next) / nablaAd[next];
         double slope = (m1 - m2) / (r[inner] - r[next]);
         return m1 + slope * (edge - r[inner]);
     }

@@ -37,6 +37,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
+import java.util.function.IntToDoubleFunction;
 
 /**
  * Zone-by-zone diagnosis of a whole profile with local models: per-zone gradients and
@@ -202,7 +203,6 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
 
         // the computed columns; the profile's own (and the filled-in ones) join them below
         EnumMap<DiagnosisColumn, double[]> out = new EnumMap<>(DiagnosisColumn.class);
-        double[] g = computed(out, DiagnosisColumn.GRAVITY, n);
         double[] hp = computed(out, DiagnosisColumn.SCALE_HEIGHT, n);
         double[] nablaRad = computed(out, DiagnosisColumn.NABLA_RAD, n);
         double[] nablaL = computed(out, DiagnosisColumn.NABLA_LEDOUX, n);
@@ -213,12 +213,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         double[] dmix = computed(out, DiagnosisColumn.DIFFUSION, n);
         double[] soundSpeed = computed(out, DiagnosisColumn.SOUND_SPEED, n);
         double[] n2 = computed(out, DiagnosisColumn.BUOYANCY_SQUARED, n);
-        double[] lamb1 = computed(out, DiagnosisColumn.LAMB_L1, n);
         ThermoChecks thermoChecks = new ThermoChecks();
         double[] ell = new double[n];
-        double[] marginS = new double[n];
-        double[] marginL = new double[n];
-        double[] marginC = new double[n];
         Regime[] regimes = new Regime[n];
 
         ZoneState zone = new ZoneState();
@@ -284,9 +280,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 zone.delta = delta[k];
                 zone.phi = phi[k];
                 zone.nablaMu = nablaMu[k];
-                convection.solve(zone, conv);
-                g[k] = Codata2018.GRAVITATIONAL_CONSTANT * m[k] / (r[k] * r[k]);
-                hp[k] = pres[k] / (rho[k] * g[k]);
+                convection.solveValues(zone, conv);   // the diagnosis reads no derivative
+                hp[k] = pres[k] / (rho[k] * gravity(r, m, k));
                 nablaRad[k] = conv.nablaRad;
                 nablaL[k] = LedouxGradient.value(nablaAd[k], phi[k], delta[k], nablaMu[k]);
                 nabla[k] = conv.nabla;
@@ -299,10 +294,6 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 soundSpeed[k] = LocalFrequencies.soundSpeed(gamma1[k], pres[k], rho[k]);
                 n2[k] = LocalFrequencies.buoyancySquared(r[k], m[k], rho[k], pres[k], delta[k], nablaAd[k], phi[k],
                         nablaMu[k], nabla[k]);
-                lamb1[k] = LocalFrequencies.lamb(1, soundSpeed[k], r[k]);
-                marginS[k] = nablaRad[k] - nablaAd[k];
-                marginL[k] = nablaRad[k] - nablaL[k];
-                marginC[k] = StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k], nablaL[k]);
             }
             if (pass == 0) {
                 edgeDistance = EdgeDistances.of(criterion, r, m, t, pres, lum, kappa, nablaAd, delta, phi, nablaMu);
@@ -359,8 +350,23 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         ModelConsistency.mismatch(nablaModel, nabla, nablaRad, nablaAd, regimes, mismatch);
         warnings.addAll(ModelConsistency.warnings(mismatch, regimes, k -> zoneAsGiven(p, k)));
 
-        List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, marginC, nablaMu);
-        double[] dov = computed(out, DiagnosisColumn.OVERSHOOT_DIFFUSION, n);
+        // the stability margins are computed where they are needed, not stored (a profile of millions of zones)
+        IntToDoubleFunction marginS = k -> nablaRad[k] - nablaAd[k];
+        IntToDoubleFunction marginL = k -> nablaRad[k] - nablaL[k];
+        IntToDoubleFunction marginC = k -> StabilityClassifier.convectiveMargin(criterion, nablaRad[k], nablaAd[k],
+                nablaL[k]);
+        List<Region> regions = regions(r, m, pres, hp, ell, v, regimes, marginS, marginL, marginC, k -> nablaMu[k]);
+        // columns as cheap as a division or two from stored ones are computed when read, not stored
+        EnumMap<DiagnosisColumn, IntToDoubleFunction> derived = new EnumMap<>(DiagnosisColumn.class);
+        derived.put(DiagnosisColumn.GRAVITY, k -> gravity(r, m, k));
+        derived.put(DiagnosisColumn.LAMB_L1, k -> LocalFrequencies.lamb(1, soundSpeed[k], r[k]));
+        double[] dov;
+        if (appliesOvershoot()) {
+            dov = computed(out, DiagnosisColumn.OVERSHOOT_DIFFUSION, n);
+        } else {
+            dov = ell;                         // no longer needed: the overshoot model fills it with zeros
+            derived.put(DiagnosisColumn.OVERSHOOT_DIFFUSION, k -> 0.0);
+        }
         regions = edges(r, hp, nablaAd, marginC, dmix, dov, regions, criterion, warnings);
         if (!(lum[n - 1] > 0.0)) {
             warnings.add("the surface luminosity is L = " + lum[n - 1] + " erg/s, not > 0: the Kelvin-Helmholtz time"
@@ -371,8 +377,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 Timescale.thermalDiffusion(r, kappa, rho, t, cp),
                 Timescale.kelvinHelmholtz(m[n - 1], r[n - 1], lum[n - 1]));
         // the diagnosis shares the profile's columns and takes the computed ones: no copy of millions of zones
-        return ColumnSharing.adopt(p.source(), criterion, convection.alpha(), out, regimes, regions, times, warnings)
-                .withSeismic(seismic(r, soundSpeed, n2, regions));
+        return ColumnSharing.adopt(p.source(), criterion, convection.alpha(), out, derived, regimes, regions, times,
+                        warnings).withSeismic(seismic(r, soundSpeed, n2, regions));
     }
 
     /** The asymptotic integrals of the whole model and the acoustic depths of each convective region's edges. */
@@ -456,7 +462,7 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
      * D_mix raised to it where it is larger; each edge's margin on the convective side
      * ({@link BoundaryMargins}), with a warning where it is not ~0. Returns the regions with both recorded.
      */
-    private List<Region> edges(double[] r, double[] hp, double[] nablaAd, double[] marginC, double[] dmix,
+    private List<Region> edges(double[] r, double[] hp, double[] nablaAd, IntToDoubleFunction marginC, double[] dmix,
                                double[] dov, List<Region> regions, Criterion criterion, List<String> warnings) {
         int n = r.length;
         List<Region> convective = regions.stream().filter(g -> g.regime() == Regime.CONVECTIVE).toList();
@@ -525,6 +531,11 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
         return p.wasReversed() ? p.size() - 1 - k : k;
     }
 
+    /** g = G m / r^2 (cm s^-2) of zone k: the {@link DiagnosisColumn#GRAVITY} column, computed when read. */
+    private static double gravity(double[] r, double[] m, int k) {
+        return Codata2018.GRAVITATIONAL_CONSTANT * m[k] / (r[k] * r[k]);
+    }
+
     /** A new column of n zones, entered in {@code out} under {@code c}. */
     private static double[] computed(Map<DiagnosisColumn, double[]> out, DiagnosisColumn c, int n) {
         double[] a = new double[n];
@@ -551,8 +562,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
      * convective region, the Schwarzschild margin at the edge of a semiconvective one, nabla_mu between
      * thermohaline and radiative zones.
      */
-    private static double[] separator(Regime inside, Regime outside, double[] marginS, double[] marginC,
-                                      double[] nablaMu) {
+    private static IntToDoubleFunction separator(Regime inside, Regime outside, IntToDoubleFunction marginS,
+                                                 IntToDoubleFunction marginC, IntToDoubleFunction nablaMu) {
         if (inside == Regime.CONVECTIVE || outside == Regime.CONVECTIVE) {
             return marginC;
         }
@@ -565,6 +576,15 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
     static List<Region> regions(double[] r, double[] m, double[] pres, double[] hp, double[] ell, double[] v,
                                 Regime[] regimes, double[] marginS, double[] marginL, double[] marginC,
                                 double[] nablaMu) {
+        return regions(r, m, pres, hp, ell, v, regimes, k -> marginS[k], k -> marginL[k], k -> marginC[k],
+                k -> nablaMu[k]);
+    }
+
+    /** {@link #regions(double[], double[], double[], double[], double[], double[], Regime[], double[], double[],
+     * double[], double[])} with each margin and nabla_mu given per zone. */
+    private static List<Region> regions(double[] r, double[] m, double[] pres, double[] hp, double[] ell, double[] v,
+                                        Regime[] regimes, IntToDoubleFunction marginS, IntToDoubleFunction marginL,
+                                        IntToDoubleFunction marginC, IntToDoubleFunction nablaMu) {
         int n = r.length;
         double radius = r[n - 1];
         double mass = m[n - 1];
@@ -621,8 +641,8 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
      * r, m and P where {@code f} changes sign between zones a and b = a + 1: r by
      * {@link BoundaryFinder#root}, m linear in r, ln P linear in r.
      */
-    private static double[] edgeBetween(int a, int b, double[] f, double[] r, double[] m, double[] pres) {
-        double at = BoundaryFinder.root(r[a], f[a], r[b], f[b]);
+    private static double[] edgeBetween(int a, int b, IntToDoubleFunction f, double[] r, double[] m, double[] pres) {
+        double at = BoundaryFinder.root(r[a], f.applyAsDouble(a), r[b], f.applyAsDouble(b));
         double w = (at - r[a]) / (r[b] - r[a]);
         double lnP = Math.log(pres[a]) + w * (Math.log(pres[b]) - Math.log(pres[a]));
         return new double[] {at, m[a] + w * (m[b] - m[a]), Math.exp(lnP)};
@@ -633,14 +653,14 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
      * inwards by up to {@value #EDGE_SEARCH} zones, since the two criteria's boundaries need not
      * fall in the same interval.
      */
-    private static OptionalDouble edge(double[] r, double[] f, int a, int b) {
+    private static OptionalDouble edge(double[] r, IntToDoubleFunction f, int a, int b) {
         int n = r.length;
         for (int d = 0; d <= EDGE_SEARCH; d++) {
             for (int s : new int[] {-d, d}) {
                 int i = a + s;
                 int j = b + s;
-                if (i >= 0 && j < n && j > i && BoundaryFinder.changesSign(f[i], f[j])) {
-                    return OptionalDouble.of(BoundaryFinder.root(r[i], f[i], r[j], f[j]));
+                if (i >= 0 && j < n && j > i && BoundaryFinder.changesSign(f.applyAsDouble(i), f.applyAsDouble(j))) {
+                    return OptionalDouble.of(BoundaryFinder.root(r[i], f.applyAsDouble(i), r[j], f.applyAsDouble(j)));
                 }
             }
         }

@@ -51,12 +51,14 @@ public final class IonisingGas implements ThermodynamicsModel {
         Checks.positive("density", density, "g cm^-3", zone);
         ZoneChecks.composition(hydrogen, metals, zone);
         SahaIonisation.evaluate(temperature, density, hydrogen, metals, out);
-        double probe = (out.pressure + out.nablaAd + out.cp + out.cv + out.delta + out.gamma1 + out.chiT + out.chiRho
-                + out.phi + out.mu + out.dPressure[ZoneInput.T] + out.dPressure[ZoneInput.RHO]
-                + out.dNablaAd[ZoneInput.T] + out.dNablaAd[ZoneInput.RHO] + out.dCp[ZoneInput.T]
-                + out.dCp[ZoneInput.RHO] + out.dDelta[ZoneInput.T] + out.dDelta[ZoneInput.RHO]
-                + out.dGamma1[ZoneInput.T] + out.dGamma1[ZoneInput.RHO] + out.dPhi[ZoneInput.T]
-                + out.dPhi[ZoneInput.RHO] + out.dMu[ZoneInput.T] + out.dMu[ZoneInput.RHO]) * 0.0;
+        // zero unless some output is infinite or NaN; summed as a tree, not as one long chain of additions
+        double probe = ((((out.pressure + out.nablaAd) + (out.cp + out.cv)) + ((out.delta + out.gamma1)
+                + (out.chiT + out.chiRho))) + (((out.phi + out.mu) + (out.dPressure[ZoneInput.T]
+                + out.dPressure[ZoneInput.RHO])) + ((out.dNablaAd[ZoneInput.T] + out.dNablaAd[ZoneInput.RHO])
+                + (out.dCp[ZoneInput.T] + out.dCp[ZoneInput.RHO]))) + ((((out.dDelta[ZoneInput.T]
+                + out.dDelta[ZoneInput.RHO]) + (out.dGamma1[ZoneInput.T] + out.dGamma1[ZoneInput.RHO]))
+                + ((out.dPhi[ZoneInput.T] + out.dPhi[ZoneInput.RHO]) + (out.dMu[ZoneInput.T]
+                + out.dMu[ZoneInput.RHO]))))) * 0.0;
         if (!(out.beta > 0.0) || probe != 0.0) {
             throw new InvalidInputException("density", density, "g cm^-3", zone,
                     "such that pressure and its derivatives are representable in double precision at T = "

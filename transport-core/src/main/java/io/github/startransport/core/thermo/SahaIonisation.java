@@ -88,6 +88,8 @@ public final class SahaIonisation {
     /** Donor electrons per metal nucleus, A/2 - 1, so that fully ionised metals count Z/2 particles per m_u. */
     public static final double DONOR_ELECTRONS = METAL_MASS_NUMBER / 2.0 - 1.0;
 
+    /** The solve takes Halley steps where the charge balance's relative residual rhs / x - 1 is below this. */
+    static final double HALLEY_REGION = 0.25;
     /** Bounds of the solve: iterations at most. */
     static final int MAX_ITERATIONS = 200;
     /** Lower limit of ln q (see the class comment). */
@@ -179,6 +181,7 @@ public final class SahaIonisation {
         double t = temperature;
         double rho = density;
         double invT = 1.0 / t;
+        double invRho = 1.0 / rho;
         double helium = Math.max(0.0, 1.0 - hydrogen - metals);
         double metalNuclei = metals / METAL_MASS_NUMBER;
         double nuN = hydrogen + 0.25 * helium + metalNuclei;   // nuclei per m_u
@@ -186,19 +189,16 @@ public final class SahaIonisation {
         double aH = negligible(hydrogen * invNu);
         double aHe = negligible(0.25 * helium * invNu);
         double aD = negligible(DONOR_ELECTRONS * metalNuclei * invNu);
-        double xMax = aH + 2.0 * aHe + aD;
 
-        // ln of the Saha ratios q = S / n_N, with the occupation-probability terms
-        double rhoNu = rho * nuN;
-        double excluded = exclusion * rhoNu;
+        // the occupation-probability terms -ln w = V rho nu_N of each bound state
+        double excluded = exclusion * rho * nuN;
         double lH0 = V_H0 * excluded;
         double lHe0 = V_HE0 * excluded;
         double lHe1 = V_HE1 * excluded;
         double lD0 = V_D0 * excluded;
         // the Saha ratios q = exp(base - theta / T + dL), base = ln(C T^(3/2) / n_N): from
         // C T^(3/2) / n_N itself where that is a normal double, else through logarithms
-        double ratio = t * Math.sqrt(t) / rhoNu;
-        boolean normal = ratio > 1e-250 && ratio < 1e250;
+        double ratio = t * Math.sqrt(t) * (invRho * invNu);
         double argH = -THETA_H * invT + lH0;
         double arg1 = -THETA_HE1 * invT + (lHe0 - lHe1);
         double arg2 = -THETA_HE2 * invT + lHe1;
@@ -208,12 +208,12 @@ public final class SahaIonisation {
         double q2;
         double qD;
         double nLambda3;                       // n_N lambda_e^3 = exp(-base), for the degeneracy indicator
-        if (normal) {
+        if (ratio > 1e-250 && ratio < 1e250) {
             double b0 = C_MU * ratio;
-            qH = b0 * Math.exp(argH);
-            q1 = 4.0 * b0 * Math.exp(arg1);
-            q2 = b0 * Math.exp(arg2);
-            qD = b0 * Math.exp(argD);
+            qH = b0 * Exponential.exp(argH);
+            q1 = 4.0 * b0 * Exponential.exp(arg1);
+            q2 = b0 * Exponential.exp(arg2);
+            qD = b0 * Exponential.exp(argD);
             nLambda3 = 1.0 / b0;
         } else {
             double base = LN_C + LN_MU + 1.5 * Math.log(t) - Math.log(rho) - Math.log(nuN);
@@ -228,39 +228,28 @@ public final class SahaIonisation {
         boolean in1 = q1 > Q_MIN && q1 < Q_MAX;
         boolean in2 = q2 > Q_MIN && q2 < Q_MAX;
         boolean inD = qD > Q_MIN && qD < Q_MAX;
-        qH = Math.max(Q_MIN, Math.min(Q_MAX, qH));
-        q1 = Math.max(Q_MIN, Math.min(Q_MAX, q1));
-        q2 = Math.max(Q_MIN, Math.min(Q_MAX, q2));
-        qD = Math.max(Q_MIN, Math.min(Q_MAX, qD));
-
-        // d ln q / d tau (h), d2 / d tau2 (hp), d / d ln rho (k), d2 / d ln rho2 (kp); 0 where limited
-        double hH = inH ? 1.5 + THETA_H * invT : 0.0;
-        double h1 = in1 ? 1.5 + THETA_HE1 * invT : 0.0;
-        double h2 = in2 ? 1.5 + THETA_HE2 * invT : 0.0;
-        double hD = inD ? 1.5 + THETA_D * invT : 0.0;
-        double hpH = inH ? -THETA_H * invT : 0.0;
-        double hp1 = in1 ? -THETA_HE1 * invT : 0.0;
-        double hp2 = in2 ? -THETA_HE2 * invT : 0.0;
-        double hpD = inD ? -THETA_D * invT : 0.0;
-        double kpH = inH ? lH0 : 0.0;
-        double kp1 = in1 ? lHe0 - lHe1 : 0.0;
-        double kp2 = in2 ? lHe1 : 0.0;
-        double kpD = inD ? lD0 : 0.0;
-        double kH = inH ? kpH - 1.0 : 0.0;
-        double k1 = in1 ? kp1 - 1.0 : 0.0;
-        double k2 = in2 ? kp2 - 1.0 : 0.0;
-        double kD = inD ? kpD - 1.0 : 0.0;
+        boolean limited = !(inH && in1 && in2 && inD);
         // a bound state below a stage limited from above is empty to double precision: no -ln w weight
-        double bH0 = qH >= Q_MAX ? 0.0 : lH0;
-        double bHe0 = q1 >= Q_MAX ? 0.0 : lHe0;
-        double bHe1 = q2 >= Q_MAX ? 0.0 : lHe1;
-        double bD0 = qD >= Q_MAX ? 0.0 : lD0;
+        boolean emptyH0 = false;
+        boolean emptyHe0 = false;
+        boolean emptyHe1 = false;
+        boolean emptyD0 = false;
+        if (limited) {
+            emptyH0 = qH >= Q_MAX;
+            emptyHe0 = q1 >= Q_MAX;
+            emptyHe1 = q2 >= Q_MAX;
+            emptyD0 = qD >= Q_MAX;
+            qH = Math.max(Q_MIN, Math.min(Q_MAX, qH));
+            q1 = Math.max(Q_MIN, Math.min(Q_MAX, q1));
+            q2 = Math.max(Q_MIN, Math.min(Q_MAX, q2));
+            qD = Math.max(Q_MIN, Math.min(Q_MAX, qD));
+        }
 
         double x;
         if (aH * qH + aHe * q1 + aD * qD < NEUTRAL_X2 && aHe * q1 * q2 < NEUTRAL_X2 * 1e-60) {
             x = 0.0;
         } else {
-            x = solve(aH, aHe, aD, qH, q1, q2, qD, xMax);
+            x = solve(aH, aHe, aD, qH, q1, q2, qD, aH + 2.0 * aHe + aD);
         }
 
         // stage populations at the root
@@ -292,117 +281,137 @@ public final class SahaIonisation {
             y2 = q1 * q2 * dHe;
         }
 
-        // moments: single-stage variance c and third cumulant kappa; helium covariances C and cumulants K
+        // d ln q / d tau (h), d2 / d tau2 (hp), d / d ln rho (k), d2 / d ln rho2 (kp), and the -ln w weight of
+        // each bound state in b
+        double hpH = -THETA_H * invT;
+        double hp1 = -THETA_HE1 * invT;
+        double hp2 = -THETA_HE2 * invT;
+        double hpD = -THETA_D * invT;
+        double kpH = lH0;
+        double kp1 = lHe0 - lHe1;
+        double kp2 = lHe1;
+        double kpD = lD0;
+        double bH0 = lH0;
+        double bHe0 = lHe0;
+        double bHe1 = lHe1;
+        double bD0 = lD0;
+        double hH = 1.5 - hpH;
+        double h1 = 1.5 - hp1;
+        double h2 = 1.5 - hp2;
+        double hD = 1.5 - hpD;
+        double kH = kpH - 1.0;
+        double k1 = kp1 - 1.0;
+        double k2 = kp2 - 1.0;
+        double kD = kpD - 1.0;
+        if (limited) {
+            if (!inH) {
+                hH = hpH = kH = kpH = 0.0;
+            }
+            if (!in1) {
+                h1 = hp1 = k1 = kp1 = 0.0;
+            }
+            if (!in2) {
+                h2 = hp2 = k2 = kp2 = 0.0;
+            }
+            if (!inD) {
+                hD = hpD = kD = kpD = 0.0;
+            }
+            bH0 = emptyH0 ? 0.0 : lH0;
+            bHe0 = emptyHe0 ? 0.0 : lHe0;
+            bHe1 = emptyHe1 ? 0.0 : lHe1;
+            bD0 = emptyD0 ? 0.0 : lD0;
+        }
+
+        // Three per-nucleus sums are linear in the populations (yH, p1 = P(He ionised at least once),
+        // p2 = P(He twice), yD): the free electrons x, the ionisation energy E / k (weights e), and the
+        // excluded-volume term b (weights f). The stage distribution is an exponential family in the stage
+        // logs l = ln q - u, u = ln x: a population's first derivative is its covariance C with the stages
+        // times the derivatives of l, its second one adds the third cumulants K times products of them.
+        // With l_T = h - u_T, each sum S has S_T = S[C h] - u_T S[C1] (C1: covariance with the charge), and
+        // S_TT = S[K l_T l_T + C hp] - u_TT S[C1]; the charge balance x = X gives the derivatives of u.
+        // single-stage variance c and third cumulant kappa; helium covariances C and cumulants K of (I1, I2)
         double cH = yH * nH;
         double kapH = cH * (nH - yH);
         double cD = yD * nD;
         double kapD = cD * (nD - yD);
         double p1 = y1 + y2;
-        double p2 = y2;
-        double q2c = y0 + y1;                  // 1 - P2
+        double q2c = y0 + y1;                  // 1 - p2
         double c11 = p1 * y0;
-        double c12 = p2 * y0;
-        double c22 = p2 * q2c;
-        double k111 = c11 * (y0 - p1);
-        double k112 = c12 * (y0 - p1);
-        double k122 = c12 * (q2c - p2);
-        double k222 = c22 * (q2c - p2);
-        // charge: f = (1, 1) on (I1, I2)
-        double ce1 = c11 + c12;
+        double c12 = y2 * y0;
+        double c22 = y2 * q2c;
+        double ce1 = c11 + c12;                // covariances of I1 and I2 with the charge I1 + I2
         double ce2 = c12 + c22;
-        double ke11 = k111 + k112;
-        double ke12 = k112 + k122;
-        double ke22 = k122 + k222;
-
-        // derivatives of u = ln x
-        double w = x + aH * cH + aHe * (ce1 + ce2) + aD * cD;
-        double uT = 0.0;
-        double uR = 0.0;
-        double uTT = 0.0;
-        double uTR = 0.0;
-        double uRR = 0.0;
-        if (x > 0.0) {
-            double invW = 1.0 / w;
-            uT = (aH * cH * hH + aHe * (ce1 * h1 + ce2 * h2) + aD * cD * hD) * invW;
-            uR = (aH * cH * kH + aHe * (ce1 * k1 + ce2 * k2) + aD * cD * kD) * invW;
-            double hTH = hH - uT;
-            double hT1 = h1 - uT;
-            double hT2 = h2 - uT;
-            double hTD = hD - uT;
-            double hRH = kH - uR;
-            double hR1 = k1 - uR;
-            double hR2 = k2 - uR;
-            double hRD = kD - uR;
-            uTT = (aH * kapH * hTH * hTH + aHe * (ke11 * hT1 * hT1 + 2.0 * ke12 * hT1 * hT2 + ke22 * hT2 * hT2)
-                    + aD * kapD * hTD * hTD
-                    + aH * cH * hpH + aHe * (ce1 * hp1 + ce2 * hp2) + aD * cD * hpD - x * uT * uT) * invW;
-            uTR = (aH * kapH * hTH * hRH + aHe * (ke11 * hT1 * hR1 + ke12 * (hT1 * hR2 + hT2 * hR1) + ke22 * hT2 * hR2)
-                    + aD * kapD * hTD * hRD - x * uT * uR) * invW;
-            uRR = (aH * kapH * hRH * hRH + aHe * (ke11 * hR1 * hR1 + 2.0 * ke12 * hR1 * hR2 + ke22 * hR2 * hR2)
-                    + aD * kapD * hRD * hRD
-                    + aH * cH * kpH + aHe * (ce1 * kp1 + ce2 * kp2) + aD * cD * kpD - x * uR * uR) * invW;
-        }
-        // derivatives of the stage logs l = ln q - u
-        double lTH = hH - uT;
-        double lT1 = h1 - uT;
-        double lT2 = h2 - uT;
-        double lTD = hD - uT;
-        double lRH = kH - uR;
-        double lR1 = k1 - uR;
-        double lR2 = k2 - uR;
-        double lRD = kD - uR;
-        double lTTH = hpH - uTT;
-        double lTT1 = hp1 - uTT;
-        double lTT2 = hp2 - uTT;
-        double lTTD = hpD - uTT;
-        double lTR = -uTR;
-        double lRRH = kpH - uRR;
-        double lRR1 = kp1 - uRR;
-        double lRR2 = kp2 - uRR;
-        double lRRD = kpD - uRR;
-
-        // ionisation energy per nucleus over k (K): f_H = theta_H, He f = (theta_1, theta_2), f_D = theta_D
-        double qe = aH * THETA_H * yH + aHe * (THETA_HE1 * p1 + THETA_HE2 * p2) + aD * THETA_D * yD;
-        double gH = aH * THETA_H * cH;
-        double gD = aD * THETA_D * cD;
-        double g1 = aHe * (THETA_HE1 * c11 + THETA_HE2 * c12);
-        double g2 = aHe * (THETA_HE1 * c12 + THETA_HE2 * c22);
-        double sH = aH * THETA_H * kapH;
-        double sD = aD * THETA_D * kapD;
-        double s11 = aHe * (THETA_HE1 * k111 + THETA_HE2 * k112);
-        double s12 = aHe * (THETA_HE1 * k112 + THETA_HE2 * k122);
-        double s22 = aHe * (THETA_HE1 * k122 + THETA_HE2 * k222);
-        double qeT = gH * lTH + g1 * lT1 + g2 * lT2 + gD * lTD;
-        double qeTT = sH * lTH * lTH + s11 * lT1 * lT1 + 2.0 * s12 * lT1 * lT2 + s22 * lT2 * lT2 + sD * lTD * lTD
-                + gH * lTTH + g1 * lTT1 + g2 * lTT2 + gD * lTTD;
-        double qeTR = sH * lTH * lRH + s11 * lT1 * lR1 + s12 * (lT1 * lR2 + lT2 * lR1) + s22 * lT2 * lR2
-                + sD * lTD * lRD + (gH + g1 + g2 + gD) * lTR;
-
-        // excluded-volume term b per nucleus: f_H = -a_H l_H0, He f = a_He (l_He1 - l_He0, -l_He1), f_D = -a_D l_D0
-        double b = aH * bH0 * nH + aHe * (bHe0 * y0 + bHe1 * y1) + aD * bD0 * nD;
+        // weights of the ionisation energy (K) and of b on (yH, p1, p2, yD)
+        double eH = aH * THETA_H;
+        double e1 = aHe * THETA_HE1;
+        double e2 = aHe * THETA_HE2;
+        double eD = aD * THETA_D;
         double fH = -aH * bH0;
-        double fD = -aD * bD0;
         double f1 = aHe * (bHe1 - bHe0);
         double f2 = -aHe * bHe1;
-        double bgH = fH * cH;
-        double bgD = fD * cD;
-        double bg1 = f1 * c11 + f2 * c12;
-        double bg2 = f1 * c12 + f2 * c22;
-        double bsH = fH * kapH;
-        double bsD = fD * kapD;
-        double bs11 = f1 * k111 + f2 * k112;
-        double bs12 = f1 * k112 + f2 * k122;
-        double bs22 = f1 * k122 + f2 * k222;
-        double bgT = bgH * lTH + bg1 * lT1 + bg2 * lT2 + bgD * lTD;
-        double bgR = bgH * lRH + bg1 * lR1 + bg2 * lR2 + bgD * lRD;
-        double bT = bgT;
+        double fD = -aD * bD0;
+        // first order: S[C1], S[C h], S[C k]
+        double chH = cH * hH;
+        double ckH = cH * kH;
+        double chD = cD * hD;
+        double ckD = cD * kD;
+        double ch1 = c11 * h1 + c12 * h2;
+        double ch2 = c12 * h1 + c22 * h2;
+        double ck1 = c11 * k1 + c12 * k2;
+        double ck2 = c12 * k1 + c22 * k2;
+        double invW = x > 0.0 ? 1.0 / (x + aH * cH + aHe * (ce1 + ce2) + aD * cD) : 0.0;
+        double uT = (aH * chH + aHe * (ch1 + ch2) + aD * chD) * invW;
+        double uR = (aH * ckH + aHe * (ck1 + ck2) + aD * ckD) * invW;
+        double eC = eH * cH + e1 * ce1 + e2 * ce2 + eD * cD;
+        double bC = fH * cH + f1 * ce1 + f2 * ce2 + fD * cD;
+        double qeT = eH * chH + e1 * ch1 + e2 * ch2 + eD * chD - uT * eC;
+        double bT = fH * chH + f1 * ch1 + f2 * ch2 + fD * chD - uT * bC;
+        double bgR = fH * ckH + f1 * ck1 + f2 * ck2 + fD * ckD - uR * bC;
+        // second order: S[K l l + C hp] (TT), S[K l l] (TR), S[K l l + C kp] (RR)
+        double lTH = hH - uT;
+        double lRH = kH - uR;
+        double sTTH = kapH * lTH * lTH + cH * hpH;
+        double sTRH = kapH * lTH * lRH;
+        double sRRH = kapH * lRH * lRH + cH * kpH;
+        double lTD = hD - uT;
+        double lRD = kD - uR;
+        double sTTD = kapD * lTD * lTD + cD * hpD;
+        double sTRD = kapD * lTD * lRD;
+        double sRRD = kapD * lRD * lRD + cD * kpD;
+        double lT1 = h1 - uT;
+        double lT2 = h2 - uT;
+        double lR1 = k1 - uR;
+        double lR2 = k2 - uR;
+        double k111 = c11 * (y0 - p1);
+        double k112 = c12 * (y0 - p1);
+        double k122 = c12 * (q2c - y2);
+        double k222 = c22 * (q2c - y2);
+        double tt11 = lT1 * lT1;
+        double tt12 = 2.0 * lT1 * lT2;
+        double tt22 = lT2 * lT2;
+        double tr11 = lT1 * lR1;
+        double tr12 = lT1 * lR2 + lT2 * lR1;
+        double tr22 = lT2 * lR2;
+        double rr11 = lR1 * lR1;
+        double rr12 = 2.0 * lR1 * lR2;
+        double rr22 = lR2 * lR2;
+        double sTT1 = k111 * tt11 + k112 * tt12 + k122 * tt22 + c11 * hp1 + c12 * hp2;
+        double sTT2 = k112 * tt11 + k122 * tt12 + k222 * tt22 + c12 * hp1 + c22 * hp2;
+        double sTR1 = k111 * tr11 + k112 * tr12 + k122 * tr22;
+        double sTR2 = k112 * tr11 + k122 * tr12 + k222 * tr22;
+        double sRR1 = k111 * rr11 + k112 * rr12 + k122 * rr22 + c11 * kp1 + c12 * kp2;
+        double sRR2 = k112 * rr11 + k122 * rr12 + k222 * rr22 + c12 * kp1 + c22 * kp2;
+        double uTT = (aH * sTTH + aHe * (sTT1 + sTT2) + aD * sTTD - x * uT * uT) * invW;
+        double uTR = (aH * sTRH + aHe * (sTR1 + sTR2) + aD * sTRD - x * uT * uR) * invW;
+        double uRR = (aH * sRRH + aHe * (sRR1 + sRR2) + aD * sRRD - x * uR * uR) * invW;
+        double qeTT = eH * sTTH + e1 * sTT1 + e2 * sTT2 + eD * sTTD - uTT * eC;
+        double qeTR = eH * sTRH + e1 * sTR1 + e2 * sTR2 + eD * sTRD - uTR * eC;
+        double b = aH * bH0 * nH + aHe * (bHe0 * y0 + bHe1 * y1) + aD * bD0 * nD;
         double bR = b + bgR;
-        double bTT = bsH * lTH * lTH + bs11 * lT1 * lT1 + 2.0 * bs12 * lT1 * lT2 + bs22 * lT2 * lT2 + bsD * lTD * lTD
-                + bgH * lTTH + bg1 * lTT1 + bg2 * lTT2 + bgD * lTTD;
-        double bTR = bgT + bsH * lTH * lRH + bs11 * lT1 * lR1 + bs12 * (lT1 * lR2 + lT2 * lR1) + bs22 * lT2 * lR2
-                + bsD * lTD * lRD + (bgH + bg1 + bg2 + bgD) * lTR;
-        double bRR = b + 2.0 * bgR + bsH * lRH * lRH + bs11 * lR1 * lR1 + 2.0 * bs12 * lR1 * lR2 + bs22 * lR2 * lR2
-                + bsD * lRD * lRD + bgH * lRRH + bg1 * lRR1 + bg2 * lRR2 + bgD * lRRD;
+        double bTT = fH * sTTH + f1 * sTT1 + f2 * sTT2 + fD * sTTD - uTT * bC;
+        double bTR = bT + fH * sTRH + f1 * sTR1 + f2 * sTR2 + fD * sTRD - uTR * bC;
+        double bRR = b + 2.0 * bgR + fH * sRRH + f1 * sRR1 + f2 * sRR2 + fD * sRRD - uRR * bC;
+        double qe = eH * yH + e1 * p1 + e2 * y2 + eD * yD;
 
         // gas pressure: ln P_g = const + ln rho + ln T + ln Pi, Pi = 1 + x + b
         double pi = 1.0 + x + b;
@@ -422,7 +431,7 @@ public final class SahaIonisation {
         double pg = kOverMu * rho * t * pi;
         double t2 = t * t;
         double aRad = radiation * A_RAD;
-        double pr = aRad * t2 * t2 / 3.0;
+        double pr = aRad * t2 * t2 * (1.0 / 3.0);
         double p = pg + pr;
         double invP = 1.0 / p;
         double beta = pg * invP;
@@ -437,7 +446,7 @@ public final class SahaIonisation {
         double chiRR = betaR * gR + beta * gRR;
 
         // c_V = (k nu_N / m_u) A + 4 a T^3 / rho
-        double radCv = 12.0 * pr * invT / rho;               // 4 a T^3 / rho
+        double radCv = 12.0 * pr * invT * invRho;            // 4 a T^3 / rho
         double aCv = 1.5 * (1.0 + x) + 1.5 * x * uT + qeT * invT;
         double aCvT = 1.5 * x * uT + 1.5 * x * (uT * uT + uTT) + (qeTT - qeT) * invT;
         double aCvR = 1.5 * x * uR + 1.5 * x * (uT * uR + uTR) + qeTR * invT;
@@ -445,7 +454,6 @@ public final class SahaIonisation {
         double cvT = kOverMu * aCvT + 3.0 * radCv;
         double cvR = kOverMu * aCvR - radCv;
 
-        double invRho = 1.0 / rho;
         double invCv = 1.0 / cv;
         double invChiTR = 1.0 / (chiT * chiR);
         double invChiT = chiR * invChiTR;
@@ -518,9 +526,22 @@ public final class SahaIonisation {
             return neutral * l;
         }
         // the Saha ratio without the occupation probability, q e^(-l), where q is not at a limit
-        double qIdeal = inH ? qH * Math.exp(-l) : 0.0;
+        double w = Exponential.exp(-l);
+        double qIdeal = inH ? qH * w : 0.0;
         double ideal = x == 0.0 ? 1.0 : x / (qIdeal + x);
-        return Math.max(ideal - neutral, neutral * -Math.expm1(-l));
+        double oneMinusW;
+        if (l >= 0.5) {
+            oneMinusW = 1.0 - w;
+        } else {
+            // 1 - e^(-l) = 2 e^(-l/2) sinh(l/2) without cancellation, sinh by its Taylor series to the 13th power
+            // (truncation below 1e-17 relative for l < 1/2)
+            double y = 0.5 * l;
+            double y2 = y * y;
+            double sinh = y * (1.0 + y2 * (1.0 / 6.0 + y2 * (1.0 / 120.0 + y2 * (1.0 / 5040.0 + y2 * (1.0 / 362880.0
+                    + y2 * (1.0 / 39916800.0 + y2 * (1.0 / 6227020800.0)))))));
+            oneMinusW = 2.0 * Math.sqrt(w) * sinh;
+        }
+        return Math.max(ideal - neutral, neutral * oneMinusW);
     }
 
     private static double negligible(double abundance) {
@@ -587,55 +608,46 @@ public final class SahaIonisation {
     }
 
     /**
-     * Free electrons per nucleus x from the charge balance x = sum alpha_i e_i(x), by Newton steps in
-     * ln x inside a bracket, with bisection whenever a step would leave it.
+     * Free electrons per nucleus x from the charge balance x = sum alpha_i e_i(x): Halley steps where
+     * the balance is within {@value #HALLEY_REGION} of closing, Newton steps in ln x farther out, both
+     * inside a bracket, with bisection in ln x whenever a step would leave it. (Kept small, so that the
+     * compiler inlines it into {@link #evaluate}.)
      *
      * @return x, in (0, xMax]
      */
     static double solve(double aH, double aHe, double aD, double qH, double q1, double q2, double qD,
                         double xMax) {
-        // lower bound: the largest root of a single species alone (helium's first stage alone is below its e)
-        double lo = Math.max(Math.max(single(aH, qH), single(aHe, q1)), single(aD, qD));
+        double lo = lowerBound(aH, aHe, aD, qH, q1, qD);
         double hi = xMax;
         double x = lo;
         for (int i = 0; i < MAX_ITERATIONS; i++) {
             double dH = 1.0 / (qH + x);
-            double yH = qH * dH;
             double dD = 1.0 / (qD + x);
-            double yD = qD * dD;
             double dHe = 1.0 / (x * x + x * q1 + q1 * q2);
+            double yH = qH * dH;
+            double nH = x * dH;
+            double yD = qD * dD;
+            double nD = x * dD;
             double y0 = x * x * dHe;
             double y1 = x * q1 * dHe;
             double y2 = q1 * q2 * dHe;
             double rhs = aH * yH + aHe * (y1 + 2.0 * y2) + aD * yD;
-            double var = aH * yH * x * dH + aHe * (y0 * y1 + y1 * y2 + 4.0 * y0 * y2) + aD * yD * x * dD;
-            double z = rhs / x - 1.0;
-            if (z > 0.0) {
+            double var = aH * yH * nH + aHe * (y0 * y1 + y1 * y2 + 4.0 * y0 * y2) + aD * yD * nD;
+            double f = rhs - x;
+            if (f > 0.0) {
                 lo = x;
             } else {
                 hi = x;
             }
             double next;
-            if (Math.abs(z) < 0.0625) {
-                // near the root: Halley on F = x - rhs(x), F' = 1 + var / x, F'' = -(var + k3) / x^2, with
-                // k3 = sum alpha E[(K - e)^3] (d var / d ln x = -k3); the error after a step s is O(s^3)
-                double eHe = y1 + 2.0 * y2;
-                double d0 = -eHe;
-                double d1 = 1.0 - eHe;
-                double d2 = 2.0 - eHe;
-                double k3 = aH * yH * x * dH * (x * dH - yH) + aD * yD * x * dD * (x * dD - yD)
-                        + aHe * (y0 * d0 * d0 * d0 + y1 * d1 * d1 * d1 + y2 * d2 * d2 * d2);
-                double invX = 1.0 / x;
-                double f1 = 1.0 + var * invX;
-                double step = 2.0 * z * f1 / (2.0 * f1 * f1 - z * (var + k3) * invX);
-                next = x * (1.0 + step);
-                if (Math.abs(step) < 1e-6) {
+            if (Math.abs(f) < HALLEY_REGION * x) {
+                double dx = halleyStep(x, f, var, aH * yH * nH * (nH - yH) + aD * yD * nD * (nD - yD), aHe, y0, y1, y2);
+                next = x + dx;
+                if (Math.abs(dx) < 1e-6 * x) {
                     return next;
                 }
             } else {
-                // far from it: Newton in ln x on G = ln(rhs / x), G' = -1 - var / rhs, exact in the
-                // low-ionisation limit where rhs ~ 1 / x
-                next = x * Math.exp(Math.log1p(z) * rhs / (rhs + var));
+                next = newtonInLnX(x, rhs, var);
             }
             if (!(next > lo && next < hi)) {
                 next = Math.sqrt(lo * hi);             // bisection in ln x
@@ -643,6 +655,37 @@ public final class SahaIonisation {
             x = next;
         }
         return x;
+    }
+
+    /**
+     * Near the root: a Halley step on F = x - rhs(x), F' = (x + var) / x, F'' = -(var + k3) / x^2, with
+     * k3 = sum alpha E[(K - e)^3] (d var / d ln x = -k3); the error after a step s is O(s^3).
+     *
+     * @param k3H the hydrogen and donor part of k3
+     * @return the step in x
+     */
+    private static double halleyStep(double x, double f, double var, double k3H, double aHe, double y0, double y1,
+                                     double y2) {
+        double eHe = y1 + 2.0 * y2;
+        double d0 = -eHe;
+        double d1 = 1.0 - eHe;
+        double d2 = 2.0 - eHe;
+        double k3 = k3H + aHe * (y0 * d0 * d0 * d0 + y1 * d1 * d1 * d1 + y2 * d2 * d2 * d2);
+        double xv = x + var;
+        return 2.0 * f * xv * x / (2.0 * xv * xv - f * (var + k3));
+    }
+
+    /**
+     * Far from the root: a Newton step in ln x on G = ln(rhs / x), G' = -1 - var / rhs, exact in the
+     * low-ionisation limit where rhs ~ 1 / x.
+     */
+    private static double newtonInLnX(double x, double rhs, double var) {
+        return x * Math.exp(Math.log(rhs / x) * rhs / (rhs + var));
+    }
+
+    /** The largest root of a single species alone, a lower bound of x (helium's first stage alone is below its e). */
+    private static double lowerBound(double aH, double aHe, double aD, double qH, double q1, double qD) {
+        return Math.max(Math.max(single(aH, qH), single(aHe, q1)), single(aD, qD));
     }
 
     /** The root of x = alpha q / (q + x): 2 alpha q / (q + sqrt(q^2 + 4 alpha q)), 0 when alpha = 0. */

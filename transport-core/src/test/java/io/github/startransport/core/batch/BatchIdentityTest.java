@@ -27,7 +27,9 @@ import io.github.startransport.spi.StabilityResult;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
+import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -113,6 +115,7 @@ class BatchIdentityTest {
                 new TransparentEddyMixingLength(2.0, Criterion.LEDOUX, MixingLengthGeometry.BOHM_VITENSE_1958, 1.0 / 3.0));
     }
 
+    @Tag("internal")
     @Test
     void convectionBatchEqualsPerZoneWithAndWithoutJacobian() {
         ZoneColumns in = demoColumns(2000, 11);
@@ -138,6 +141,7 @@ class BatchIdentityTest {
         assertEquals(EnumSet.allOf(Regime.class), seen, "regimes seen: " + seen);
     }
 
+    @Tag("internal")
     @Test
     void stabilityBatchEqualsPerZone() {
         ZoneColumns in = demoColumns(2000, 12);
@@ -164,6 +168,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void opacityBatchEqualsPerZone() {
         ZoneColumns in = demoColumns(2000, 13);
@@ -185,6 +190,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void oneProfileSplitAcrossThreadsEqualsOneCall() throws Exception {
         ZoneColumns in = demoColumns(2000, 14);
@@ -221,6 +227,7 @@ class BatchIdentityTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void badZoneIsRefusedWithItsColumnIndex() {
         ZoneColumns in = demoColumns(100, 15);
@@ -242,6 +249,109 @@ class BatchIdentityTest {
         assertTrue(conv.velocity[n - 1] >= 0.0);
     }
 
+    @Tag("internal")
+    @Test
+    void oddRangesAcrossChunkBoundariesEqualPerZoneInEveryLayout() {
+        // the batch kernels stage chunks of zones: ranges of one zone, ranges that start or end inside a
+        // chunk, cross one or several chunk boundaries, or hold an odd count, in the column layout (with
+        // and without the Jacobian), the zone-major block and a direct buffer; zones outside stay untouched
+        ZoneColumns in = demoColumns(300, 19);
+        int n = in.capacity;
+        int[][] ranges = {{0, 1}, {0, 31}, {5, 37}, {31, 33}, {32, 64}, {7, 7 + 3 * 32 + 1}, {n - 1, n}, {1, n - 2}};
+        ZoneState z = new ZoneState();
+        ConvectionResult r = new ConvectionResult();
+        for (ConvectionModel model : convectionModels()) {
+            for (int[] range : ranges) {
+                int from = range[0];
+                int to = range[1];
+                for (int layout = 0; layout < 4; layout++) {
+                    ConvectionColumns out = new ConvectionColumns(n);
+                    java.util.Arrays.fill(out.nabla, -5.0);
+                    for (double[] column : out.dVelocity) {
+                        java.util.Arrays.fill(column, -5.0);
+                    }
+                    double[] block = new double[n * ZoneMajorJacobian.PER_ZONE];
+                    java.util.Arrays.fill(block, -5.0);
+                    java.nio.DoubleBuffer buffer = java.nio.ByteBuffer.allocateDirect(block.length * Double.BYTES)
+                            .order(java.nio.ByteOrder.nativeOrder()).asDoubleBuffer();
+                    buffer.put(0, block);
+                    if (layout == 0 || layout == 1) {
+                        model.solveColumns(in, from, to, out, layout == 0);
+                    } else if (layout == 2) {
+                        model.solveZoneMajor(in, from, to, out, block);
+                    } else {
+                        model.solveZoneMajorInto(in, from, to, out, buffer);
+                        buffer.get(0, block);
+                    }
+                    for (int k = 0; k < n; k++) {
+                        boolean inside = k >= from && k < to;
+                        if (!inside) {
+                            same(-5.0, out.nabla[k], "nabla outside [" + from + ", " + to + ")", k);
+                            same(-5.0, out.dVelocity[ZoneInput.T][k], "dv/dT outside the range", k);
+                            same(-5.0, block[ZoneMajorJacobian.index(k, ZoneMajorJacobian.DIFFUSION, 12)],
+                                    "block outside the range", k);
+                            continue;
+                        }
+                        model.solve(in.load(k, z), r);
+                        assertSameConvection(r, out, k, layout == 0);
+                        if (layout >= 2) {
+                            for (int o = 0; o < ZoneMajorJacobian.OUTPUTS; o++) {
+                                double[] row = o == 0 ? r.dNabla : o == 1 ? r.dVelocity
+                                        : o == 2 ? r.dConvectiveFraction : r.dDiffusion;
+                                for (int i = 0; i < ZoneInput.COUNT; i++) {
+                                    same(row[i], block[ZoneMajorJacobian.index(k, o, i)], "block (" + o + ", " + i
+                                            + ") in layout " + layout + " of [" + from + ", " + to + ")", k);
+                                }
+                            }
+                        }
+                    }
+                }
+            }
+        }
+    }
+
+    @Tag("internal")
+    @Test
+    void zonesBeforeARefusedZoneKeepTheirWholeResult() {
+        // the batch kernels work on chunks of zones: a refusal in the middle of one must leave every earlier
+        // zone of the range written, values and Jacobian, as the per-zone calls give them
+        ZoneColumns in = demoColumns(200, 17);
+        int n = in.capacity;
+        int from = 3;
+        int bad = 58;
+        in.temperature[bad] = Double.NaN;
+        ZoneState z = new ZoneState();
+        ConvectionResult r = new ConvectionResult();
+        for (ConvectionModel model : convectionModels()) {
+            for (int layout = 0; layout < 3; layout++) {
+                ConvectionColumns out = new ConvectionColumns(n);
+                double[] block = new double[n * ZoneMajorJacobian.PER_ZONE];
+                int mode = layout;
+                InvalidInputException e = assertThrows(InvalidInputException.class, () -> {
+                    if (mode == 2) {
+                        model.solveZoneMajor(in, from, n, out, block);
+                    } else {
+                        model.solveColumns(in, from, n, out, mode == 0);
+                    }
+                });
+                assertEquals(bad, e.zone(), e.getMessage());
+                assertEquals("temperature", e.field());
+                for (int k = from; k < bad; k++) {
+                    model.solve(in.load(k, z), r);
+                    assertSameConvection(r, out, k, mode == 0);
+                    if (mode == 2) {
+                        for (int i = 0; i < ZoneInput.COUNT; i++) {
+                            same(r.dNabla[i], block[ZoneMajorJacobian.index(k, ZoneMajorJacobian.NABLA, i)], "block", k);
+                            same(r.dDiffusion[i], block[ZoneMajorJacobian.index(k, ZoneMajorJacobian.DIFFUSION, i)],
+                                    "block", k);
+                        }
+                    }
+                }
+            }
+        }
+    }
+
+    @Tag("internal")
     @Test
     void badRangesAreRefused() {
         ZoneColumns in = demoColumns(100, 16);

@@ -13,8 +13,12 @@ import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneMajorJacobian;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.nio.DoubleBuffer;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.EnumSet;
@@ -99,6 +103,7 @@ class ZoneMajorJacobianTest {
         same(r.diffusion, c.diffusion[k], "D", k);
     }
 
+    @Tag("internal")
     @Test
     void blockEqualsPerZoneCallsBitForBit() {
         ZoneColumns in = BatchIdentityTest.demoColumns(2000, 21);
@@ -131,6 +136,7 @@ class ZoneMajorJacobianTest {
         assertEquals(EnumSet.allOf(Regime.class), seen, "regimes seen: " + seen);
     }
 
+    @Tag("internal")
     @Test
     void valuesOnlyEqualPerZoneValues() {
         ZoneColumns in = BatchIdentityTest.demoColumns(600, 22);
@@ -147,6 +153,7 @@ class ZoneMajorJacobianTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void aRangeWritesOnlyItsOwnBlocksAtTheirColumnIndex() {
         ZoneColumns in = BatchIdentityTest.demoColumns(400, 23);
@@ -174,6 +181,7 @@ class ZoneMajorJacobianTest {
         }
     }
 
+    @Tag("internal")
     @Test
     void shortBlockAndBadZoneAreRefused() {
         ZoneColumns in = BatchIdentityTest.demoColumns(200, 24);
@@ -192,6 +200,95 @@ class ZoneMajorJacobianTest {
                 assertTrue(bad.getMessage().contains("zone 77"), bad.getMessage());
             } finally {
                 in.density[77] = saved;
+            }
+        }
+    }
+
+    @Tag("internal")
+    @Test
+    void bufferEqualsPerZoneCallsBitForBitAndWritesOnlyItsRange() {
+        // direct buffers in native order (what a native host's memory looks like: stored straight into
+        // memory) and in the other order, and a heap buffer (both through the buffer's puts), each from
+        // position 0 and from an odd position
+        ZoneColumns in = BatchIdentityTest.demoColumns(1200, 25);
+        int n = in.capacity;
+        int from = 37;
+        ByteOrder other = ByteOrder.nativeOrder() == ByteOrder.LITTLE_ENDIAN ? ByteOrder.BIG_ENDIAN
+                : ByteOrder.LITTLE_ENDIAN;
+        EnumSet<Regime> seen = EnumSet.noneOf(Regime.class);
+        for (ConvectionModel model : models()) {
+            for (int kind = 0; kind < 3; kind++) {
+                for (int origin : new int[] {0, 3 * ZoneMajorJacobian.PER_ZONE + 5}) {
+                    int length = origin + n * ZoneMajorJacobian.PER_ZONE + 7;
+                    DoubleBuffer block = kind == 2 ? DoubleBuffer.allocate(length)
+                            : ByteBuffer.allocateDirect(length * Double.BYTES)
+                                    .order(kind == 0 ? ByteOrder.nativeOrder() : other).asDoubleBuffer();
+                    for (int j = 0; j < length; j++) {
+                        block.put(j, UNTOUCHED);
+                    }
+                    block.position(origin);
+                    ConvectionColumns out = new ConvectionColumns(n);
+                    model.solveZoneMajorInto(in, from, n, out, block);
+                    String what = model + (kind == 0 ? " (direct)" : kind == 1 ? " (direct, " + other + ")" : " (heap)")
+                            + " from " + origin;
+                    assertEquals(origin, block.position(), "the position is not changed: " + what);
+                    for (int j = 0; j < length; j++) {
+                        int k = (j - origin) / ZoneMajorJacobian.PER_ZONE;
+                        if (j < origin + from * ZoneMajorJacobian.PER_ZONE || j >= origin + n * ZoneMajorJacobian.PER_ZONE) {
+                            same(UNTOUCHED, block.get(j), "entry " + j + " outside the range, " + what, k);
+                        }
+                    }
+                    ZoneState z = new ZoneState();
+                    ConvectionResult r = new ConvectionResult();
+                    for (int k = from; k < n; k++) {
+                        model.solve(in.load(k, z), r);
+                        seen.add(r.regime);
+                        assertValues(r, out, k);
+                        for (int o = 0; o < ZoneMajorJacobian.OUTPUTS; o++) {
+                            double[] d = derivatives(r, o);
+                            for (int i = 0; i < ZoneInput.COUNT; i++) {
+                                same(d[i], block.get(origin + ZoneMajorJacobian.index(k, o, i)),
+                                        "d " + ZoneMajorJacobian.name(o) + " / d " + ZoneInput.name(i) + ", " + what, k);
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        assertEquals(EnumSet.allOf(Regime.class), seen, "regimes seen: " + seen);
+    }
+
+    @Tag("internal")
+    @Test
+    void shortReadOnlyOrMissingBufferIsRefusedBeforeAnythingIsWritten() {
+        ZoneColumns in = BatchIdentityTest.demoColumns(200, 26);
+        int n = in.capacity;
+        for (ConvectionModel model : models()) {
+            ConvectionColumns out = new ConvectionColumns(n);
+            Arrays.fill(out.nabla, UNTOUCHED);
+            DoubleBuffer tooShort = ByteBuffer.allocateDirect((n * ZoneMajorJacobian.PER_ZONE - 1) * Double.BYTES)
+                    .order(ByteOrder.nativeOrder()).asDoubleBuffer();
+            assertEquals("jacobian.limit", assertThrows(InvalidInputException.class,
+                    () -> model.solveZoneMajorInto(in, 0, n, out, tooShort)).field());
+            // a limit below the capacity counts: the buffer's own puts would refuse past it
+            DoubleBuffer limited = ByteBuffer.allocateDirect(n * ZoneMajorJacobian.PER_ZONE * Double.BYTES)
+                    .order(ByteOrder.nativeOrder()).asDoubleBuffer();
+            limited.limit(n * ZoneMajorJacobian.PER_ZONE - 1);
+            assertEquals("jacobian.limit", assertThrows(InvalidInputException.class,
+                    () -> model.solveZoneMajorInto(in, 0, n, out, limited)).field());
+            // and so does the position: the blocks start there
+            DoubleBuffer moved = ByteBuffer.allocateDirect(n * ZoneMajorJacobian.PER_ZONE * Double.BYTES)
+                    .order(ByteOrder.nativeOrder()).asDoubleBuffer();
+            moved.position(1);
+            assertEquals("jacobian.limit", assertThrows(InvalidInputException.class,
+                    () -> model.solveZoneMajorInto(in, 0, n, out, moved)).field());
+            DoubleBuffer readOnly = DoubleBuffer.allocate(n * ZoneMajorJacobian.PER_ZONE).asReadOnlyBuffer();
+            assertEquals("jacobian.readOnly", assertThrows(InvalidInputException.class,
+                    () -> model.solveZoneMajorInto(in, 0, n, out, readOnly)).field());
+            assertEquals("jacobian", assertThrows(InvalidInputException.class,
+                    () -> model.solveZoneMajorInto(in, 0, n, out, null)).field());
+            for (int k = 0; k < n; k++) {
+                same(UNTOUCHED, out.nabla[k], "nabla after a refused buffer", k);
             }
         }
     }

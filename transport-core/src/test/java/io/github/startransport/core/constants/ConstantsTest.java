@@ -1,5 +1,7 @@
 package io.github.startransport.core.constants;
 
+import io.github.startransport.core.checks.CheckKind;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -11,6 +13,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
  */
 class ConstantsTest {
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void codataExactConstantsAreTheDefinedValues() {
         // CODATA 2018 / SI 2019 definitions: c = 299 792 458 m/s, h = 6.626 070 15e-34 J s, k = 1.380 649e-23 J/K
@@ -19,6 +22,7 @@ class ConstantsTest {
         assertEquals(1.380649e-23 * 1e7, Codata2018.BOLTZMANN, 1e-30);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void codataMeasuredConstants() {
         // CODATA 2018: G = 6.674 30(15)e-11 m^3 kg^-1 s^-2; m_u = 1.660 539 066 60(50)e-27 kg;
@@ -29,6 +33,7 @@ class ConstantsTest {
         assertEquals(6.6524587321e-29 * 1e4, Codata2018.THOMSON_CROSS_SECTION, 1e-36);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void stefanBoltzmannFollowsFromTheExactConstants() {
         // sigma = 2 pi^5 k^4 / (15 h^3 c^2) (any statistical-physics text); CODATA 2018 lists
@@ -41,6 +46,7 @@ class ConstantsTest {
         assertEquals(5.670374419e-8 * 1e3, Codata2018.STEFAN_BOLTZMANN, 1e-17);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void radiationConstantIsFourSigmaOverC() {
         // a = 4 sigma / c = 8 pi^5 k^4 / (15 h^3 c^3) (Kippenhahn, Weigert & Weiss 2012 §13.2, from memory)
@@ -52,6 +58,7 @@ class ConstantsTest {
         assertEquals(7.5657e-15, Codata2018.RADIATION_CONSTANT, 1e-19);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void iauNominalSolarValues() {
         // IAU 2015 B3: R = 6.957e8 m, L = 3.828e26 W, (GM) = 1.3271244e20 m^3 s^-2, Teff = 5772 K
@@ -61,6 +68,7 @@ class ConstantsTest {
         assertEquals(5772.0, Iau2015.SOLAR_EFFECTIVE_TEMPERATURE, 0.0);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void nominalEffectiveTemperatureIsConsistentWithNominalRadiusAndLuminosity() {
         // IAU 2015 B3 notes that its nominal T_eff is consistent with L and R through
@@ -70,6 +78,7 @@ class ConstantsTest {
         assertEquals(Iau2015.SOLAR_EFFECTIVE_TEMPERATURE, teff, 0.5);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void solarMassFromTheNominalMassParameter() {
         // IAU 2015 B3 recommends M_sun = (GM)_sun^N / G; with CODATA 2018 G this is 1.98841e33 g,
@@ -77,6 +86,7 @@ class ConstantsTest {
         assertEquals(1.98841e33, Iau2015.SOLAR_MASS, 1e28);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void julianYear() {
         // IAU: the Julian year is exactly 365.25 days of 86400 s

@@ -1,5 +1,6 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.gradient.GradientStability;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
@@ -16,6 +17,7 @@ import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.constraints.Scale;
 import org.apache.commons.math3.analysis.solvers.LaguerreSolver;
 import org.apache.commons.math3.complex.Complex;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -82,6 +84,7 @@ class CompositionConvectionTest {
      * adding up to L / (4 pi r^2). Also the ordering: nabla between nabla_ad and nabla_rad, nabla_e
      * between nabla_ad and nabla, and y = nabla - nabla_e of the sign of W.
      */
+    @net.jqwik.api.Tag(CheckKind.EXTERNAL)
     @Property(tries = 2000, seed = "1001")
     void definingRelationsHold(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                                @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -143,6 +146,7 @@ class CompositionConvectionTest {
      * The velocity agrees with the positive root of (x^2 - b)(x^2 + k U x + 2 k U U') = k U W x found by
      * Commons Math's LaguerreSolver (all complex roots of the quartic, then the real positive one).
      */
+    @net.jqwik.api.Tag(CheckKind.EXTERNAL)
     @Property(tries = 1000, seed = "1002")
     void quarticRootAgreesWithCommonsMath(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                                           @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -178,6 +182,7 @@ class CompositionConvectionTest {
      * O(k U / sqrt(b)) and O(|y| / b), below 1e-3 here); inefficient convection (U &gt;= 1e5) gives nabla -&gt;
      * nabla_rad and x^2 -&gt; b, the composition's buoyancy alone.
      */
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 500, seed = "1003")
     void limits(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                 @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -223,6 +228,7 @@ class CompositionConvectionTest {
      * there (steps of 1e-10 in W change nabla by O(1e-10) and v, D by O(1e-10 / b)); exactly there y = 0, so nabla = nabla_e = nabla_ad
      * and v^2 = a g delta l^2 b / H_P.
      */
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 500, seed = "1004")
     void continuousAcrossTheSchwarzschildMargin(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                                                 @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -260,6 +266,7 @@ class CompositionConvectionTest {
      * with D &gt; 0 and identical results; with 1 &lt;= R0 both call it thermohaline with
      * D = C_t K_T / R0 &gt; 0. The stability test agrees with the convection models.
      */
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 3000, seed = "1005")
     void bothCriteriaAgreeWhereNablaMuIsNotPositive(
             @ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
@@ -307,6 +314,7 @@ class CompositionConvectionTest {
      * thermohaline, or convective where nabla_L &lt; nabla_rad, and then the convective flux runs inwards
      * like the total one (F_conv / F &gt; 0) and the relations of mixing-length theory still close.
      */
+    @Tag(CheckKind.LAW)
     @Test
     void negativeLuminosityFollowsTheSameRules() {
         Case rad = zone(6.5, 0.5, -2, -0.6, 0.0, 10, 33, 1.8, 0, Criterion.LEDOUX);
@@ -328,6 +336,7 @@ class CompositionConvectionTest {
     }
 
     /** A convective zone with L = 0 (convecting because nabla_L &lt; 0) is refused: F_conv / F has no value. */
+    @Tag(CheckKind.INTERNAL)
     @Test
     void zeroLuminosityInAConvectiveZoneIsRefused() {
         Case c = zone(6.5, 0.5, -2, -0.6, 0.9, 10, 33, 1.8, 0, Criterion.LEDOUX);
@@ -345,6 +354,7 @@ class CompositionConvectionTest {
      * gradients): the residual of (Gamma^2 - beta) D = S Gamma is at rounding level relative
      * to its largest term, and the root lies in the bracket the javadoc proves.
      */
+    @Tag(CheckKind.INTERNAL)
     @Test
     void compositionSolverConvergesOverAGrid() {
         for (double a0 : new double[] {1e-6, 0.01, 0.5, 9.0 / 4.0, 6.0}) {

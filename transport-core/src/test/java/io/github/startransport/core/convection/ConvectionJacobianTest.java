@@ -1,5 +1,6 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
@@ -9,6 +10,7 @@ import io.github.startransport.spi.ZoneState;
 import net.jqwik.api.Assume;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
+import net.jqwik.api.Tag;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.constraints.Scale;
@@ -35,6 +37,7 @@ class ConvectionJacobianTest {
     }
 
     /** Convective zones, both variants, both geometry sets, both near-centre limits. */
+    @Tag(CheckKind.INTERNAL)
     @Property(tries = 400, seed = "51")
     void convectiveJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                             @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -58,6 +61,7 @@ class ConvectionJacobianTest {
      * b = -(phi/delta) nabla_mu in the buoyancy, R0 &lt; 1, W from -0.95 b to 2 b): every entry, including
      * d/d nabla_mu and d/d phi, under both criteria, both variants and both geometry sets.
      */
+    @Tag(CheckKind.INTERNAL)
     @Property(tries = 400, seed = "53")
     void compositionJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                              @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -80,6 +84,7 @@ class ConvectionJacobianTest {
     }
 
     /** Stable zones: radiative, semiconvective (Ledoux, nabla_mu &gt; 0) and thermohaline (nabla_mu &lt; 0). */
+    @Tag(CheckKind.INTERNAL)
     @Property(tries = 300, seed = "52")
     void stableJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                         @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -153,5 +158,132 @@ class ConvectionJacobianTest {
         double scale = Math.abs(value) / Math.max(Math.abs(q), h);
         double tolerance = 1e-6 * Math.max(Math.abs(fd), Math.abs(analytic)) + 1e-10 * scale;
         assertEquals(fd, analytic, tolerance, () -> "d " + output + " / d " + ZoneInput.name(input));
+    }
+    // ---- near the margins: steps small against the distance to the margin ----
+
+    /**
+     * Every entry of near-marginal convective zones, W from 1e-8 to 1e-3 above the criterion's gradient (nabla_ad
+     * under Schwarzschild, nabla_L under Ledoux with nabla_mu &gt; 0), both criteria, both variants: the steps
+     * are 1/400 of the margin's size relative to nabla_rad, so that no step crosses the margin.
+     */
+    @Tag(CheckKind.INTERNAL)
+    @Property(tries = 150, seed = "54")
+    void nearMarginalConvectiveJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
+                                        @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
+                                        @ForAll @Scale(12) @DoubleRange(min = -6, max = 6) double logU,
+                                        @ForAll @Scale(12) @DoubleRange(min = -8, max = -3) double logGap,
+                                        @ForAll @IntRange(min = 0, max = 3) int variant) {
+        Criterion criterion = (variant & 1) == 0 ? Criterion.SCHWARZSCHILD : Criterion.LEDOUX;
+        boolean transparent = (variant & 2) != 0;
+        MixingLengthGeometry geometry = MixingLengthGeometry.BOHM_VITENSE_1958;
+        ZoneState probe = TestZones.build(logT, rhoFraction, logU, 1.0, 10, 33, 1.8, geometry, CentreLimit.RADIUS);
+        // (phi/delta) nabla_mu = 0.05 under both criteria: away from the kink of the buoyancy at nabla_mu = 0,
+        // and a Ledoux margin 0.05 above nabla_ad whatever beta is
+        double nablaMu = 0.05 * probe.delta / probe.phi;
+        double critical = criterion == Criterion.LEDOUX ? probe.nablaAd + 0.05 : probe.nablaAd;
+        double gap = Math.pow(10, logGap);
+        ZoneState z = TestZones.build(logT, rhoFraction, logU, critical + gap, 10, 33, 1.8, geometry, CentreLimit.RADIUS);
+        z.nablaMu = nablaMu;
+        checkNear(model(1.8, criterion, geometry, CentreLimit.RADIUS, transparent), z, Regime.CONVECTIVE, gap);
+    }
+
+    /**
+     * Stable zones within 1e-8 to 1e-3 of each margin (Ledoux): radiative just below nabla_ad, semiconvective
+     * just above nabla_ad and just below nabla_L, thermohaline just below nabla_L (R0 just above 1).
+     */
+    @Tag(CheckKind.INTERNAL)
+    @Property(tries = 200, seed = "55")
+    void stableJacobianNearEachMargin(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
+                                      @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
+                                      @ForAll @Scale(12) @DoubleRange(min = -6, max = 6) double logU,
+                                      @ForAll @Scale(12) @DoubleRange(min = -8, max = -3) double logGap,
+                                      @ForAll @IntRange(min = 0, max = 3) int kind) {
+        MixingLengthGeometry geometry = MixingLengthGeometry.BOHM_VITENSE_1958;
+        ZoneState probe = TestZones.build(logT, rhoFraction, logU, 1.0, 10, 33, 1.8, geometry, CentreLimit.RADIUS);
+        double gap = Math.pow(10, logGap);
+        // nabla_mu such that (phi/delta) |nabla_mu| = 0.05: nabla_L lies 0.05 from nabla_ad whatever beta is
+        double mu = 0.05 * probe.delta / probe.phi;
+        double nablaMu;
+        double nablaRad;
+        Regime expected;
+        switch (kind) {
+            case 0 -> { nablaMu = mu; nablaRad = probe.nablaAd - gap; expected = Regime.RADIATIVE; }
+            case 1 -> { nablaMu = mu; nablaRad = probe.nablaAd + gap; expected = Regime.SEMICONVECTIVE; }
+            case 2 -> { nablaMu = mu; nablaRad = probe.nablaAd + 0.05 - gap; expected = Regime.SEMICONVECTIVE; }
+            default -> { nablaMu = -mu; nablaRad = probe.nablaAd - 0.05 - gap; expected = Regime.THERMOHALINE; }
+        }
+        ZoneState z = TestZones.build(logT, rhoFraction, logU, nablaRad, 10, 33, 1.8, geometry, CentreLimit.RADIUS);
+        z.nablaMu = nablaMu;
+        checkNear(model(1.8, Criterion.LEDOUX, geometry, CentreLimit.RADIUS, false), z, expected, gap);
+    }
+
+    /** Ledoux convective zones with a stabilising composition gradient, nabla_rad well above nabla_L. */
+    @Tag(CheckKind.INTERNAL)
+    @Property(tries = 200, seed = "56")
+    void ledouxConvectiveJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
+                                  @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
+                                  @ForAll @Scale(12) @DoubleRange(min = -8, max = 8) double logU,
+                                  @ForAll @Scale(12) @DoubleRange(min = -3, max = 1) double logW,
+                                  @ForAll @Scale(12) @DoubleRange(min = -4, max = 0) double logMu,
+                                  @ForAll @IntRange(min = 0, max = 3) int variant) {
+        MixingLengthGeometry geometry = MixingLengthGeometry.values()[variant & 1];
+        ZoneState probe = TestZones.build(logT, rhoFraction, logU, 1.0, 10, 33, 1.8, geometry, CentreLimit.RADIUS);
+        double nablaMu = Math.pow(10, logMu);
+        double nablaL = probe.nablaAd + (probe.phi / probe.delta) * nablaMu;
+        ZoneState z = TestZones.build(logT, rhoFraction, logU, nablaL + Math.pow(10, logW), 10, 33, 1.8, geometry,
+                CentreLimit.RADIUS);
+        z.nablaMu = nablaMu;
+        check(model(1.8, Criterion.LEDOUX, geometry, CentreLimit.RADIUS, (variant & 2) != 0), z, Regime.CONVECTIVE);
+    }
+
+    /**
+     * As {@link #check}, with steps of gap / (400 max(nabla_rad, 1)) relative (at most 1e-5; the stencil's
+     * truncation error then stays below 1e-7 of a coefficient like 1 / (nabla_L - nabla)), and a tolerance floor
+     * for the rounding of such small steps, (1e-13 + 4e-16 / gap) |f| / h (common practice, no source).
+     */
+    private static void checkNear(ConvectionModel model, ZoneState z, Regime expected, double gap) {
+        ConvectionResult out = new ConvectionResult();
+        model.solve(z, out);
+        assertEquals(expected, out.regime);
+        Assume.that(Math.abs(Math.log(out.scaleHeight / z.radius)) > 1e-3);
+        double relStep = Math.min(1e-5, gap / (400.0 * Math.max(Math.abs(out.nablaRad), 1.0)));
+        // an output that divides by the distance to the margin (D_sc ~ 1 / (nabla_L - nabla)) carries the rounding of
+        // that difference, ~1e-16 nabla / gap relative; the five-point stencil turns noise e |f| into ~1.5 e |f| / h
+        double rounding = 1e-13 + 4e-16 / gap;
+        ConvectionResult probe = new ConvectionResult();
+        ZoneState moved = new ZoneState();
+        for (int i = 0; i < ZoneInput.COUNT; i++) {
+            double q = i == ZoneInput.ALPHA ? model.alpha() : z.get(i);
+            double h = relStep * Math.max(Math.abs(q), i == ZoneInput.NABLA_MU ? 1e-6 : 1e-300);
+            double[][] f = new double[4][4];
+            double[] steps = {-2, -1, 1, 2};
+            for (int s = 0; s < 4; s++) {
+                moved.set(z);
+                ConvectionModel m = model;
+                if (i == ZoneInput.ALPHA) {
+                    m = withAlpha(model, q + steps[s] * h);
+                } else {
+                    moved.put(i, q + steps[s] * h);
+                }
+                m.solve(moved, probe);
+                assertEquals(expected, probe.regime, () -> "a step crossed the margin: " + probe);
+                f[0][s] = probe.nabla;
+                f[1][s] = probe.velocity;
+                f[2][s] = probe.convectiveFraction;
+                f[3][s] = probe.diffusion;
+            }
+            double[] values = {out.nabla, out.velocity, out.convectiveFraction, out.diffusion};
+            double[][] analytic = {out.dNabla, out.dVelocity, out.dConvectiveFraction, out.dDiffusion};
+            String[] names = {"nabla", "velocity", "convectiveFraction", "diffusion"};
+            for (int o = 0; o < 4; o++) {
+                double fd = (8.0 * (f[o][2] - f[o][1]) - (f[o][3] - f[o][0])) / (12.0 * h);
+                double a = analytic[o][i];
+                double tolerance = 1e-5 * Math.max(Math.abs(fd), Math.abs(a)) + rounding * Math.abs(values[o]) / h
+                        + 1e-10 * Math.abs(values[o]) / Math.max(Math.abs(q), h);
+                int input = i;
+                String name = names[o];
+                assertEquals(fd, a, tolerance, () -> "d " + name + " / d " + ZoneInput.name(input) + " at gap " + gap);
+            }
+        }
     }
 }

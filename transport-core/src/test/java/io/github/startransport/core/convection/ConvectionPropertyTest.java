@@ -1,5 +1,6 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
@@ -9,6 +10,7 @@ import io.github.startransport.spi.ZoneState;
 import net.jqwik.api.Assume;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
+import net.jqwik.api.Tag;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.constraints.Scale;
@@ -58,6 +60,7 @@ class ConvectionPropertyTest {
     }
 
     /** nabla_ad &lt;= nabla_e &lt;= nabla &lt;= nabla_rad and v &gt;= 0 in every unstable zone (Kippenhahn, Weigert &amp; Weiss 2012 §7.1). */
+    @Tag(CheckKind.LAW)
     @Property(tries = 2000, seed = "41")
     void gradientsAreOrdered(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                              @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -85,6 +88,7 @@ class ConvectionPropertyTest {
      * Tassoul, Fontaine &amp; Winget 1990, from memory) and F_rad = 4acT^4 nabla / (3 kappa rho H_P)
      * (Kippenhahn, Weigert &amp; Weiss 2012 §5.1). Also F_conv/F + F_rad/F = 1 to 1e-12.
      */
+    @Tag(CheckKind.EXTERNAL)
     @Property(tries = 2000, seed = "42")
     void fluxesAddUpToTheTotal(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                                @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -115,6 +119,7 @@ class ConvectionPropertyTest {
      * term, x recovered from v = l sqrt(a g delta / H_P) x; and nabla = nabla_ad + x^2 + 2U'x agrees to
      * 1e-10 with the root of the same cubic from Commons Math's LaguerreSolver.
      */
+    @Tag(CheckKind.EXTERNAL)
     @Property(tries = 2000, seed = "43")
     void cubicHoldsAndAgreesWithCommonsMath(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                                             @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -149,6 +154,7 @@ class ConvectionPropertyTest {
      * nabla decreases monotonically toward nabla_ad as alpha grows (Kippenhahn, Weigert &amp; Weiss 2012
      * §7.3: a longer mixing length makes convection more efficient), and d nabla / d alpha &lt;= 0.
      */
+    @Tag(CheckKind.LAW)
     @Property(tries = 1000, seed = "44")
     void nablaFallsWithAlpha(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                              @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -174,6 +180,7 @@ class ConvectionPropertyTest {
      * more efficient and nabla is never above the textbook value; for omega = kappa rho l &gt;&gt; 1 the two
      * agree (Henyey, Vardya &amp; Bodenheimer 1965, from memory).
      */
+    @Tag(CheckKind.LAW)
     @Property(tries = 1000, seed = "45")
     void transparencyNeverRaisesNabla(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                                       @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -198,6 +205,7 @@ class ConvectionPropertyTest {
     }
 
     /** Onset: W -&gt; 0+ gives nabla -&gt; nabla_rad = nabla_ad; on the stable side nabla = nabla_rad exactly. */
+    @Tag(CheckKind.LAW)
     @Property(tries = 500, seed = "46")
     void continuousThroughOnset(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                                 @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,

@@ -1,5 +1,7 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -18,6 +20,7 @@ class CubeRootEstimateTest {
         assertTrue(MixingLengthCubic.CBRT_LIFT * MixingLengthCubic.cubeRootEstimate(x) >= exact, "x = " + x);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void withinItsBoundsOverOnePeriodOfTheExponent() {
         for (double x = 1.0; x < 8.0; x += 1e-5) {
@@ -25,6 +28,7 @@ class CubeRootEstimateTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void withinItsBoundsAcrossTheNormalRange() {
         for (double e = -300; e <= 300; e += 0.0137) {

@@ -29,8 +29,9 @@ class CubicIterationBoundTest {
      * positive; it satisfies the equation to rounding relative to its largest term (S).
      */
     static void assertRoot(double a0, double s, double root) {
-        double residual = MixingLengthCubic.residual(a0, s, root);
-        if (!Double.isFinite(root) || !(root > 0.0) || !(Math.abs(residual) <= 1e-12 * s)) {
+        // the residual relative to S, written so that it cannot overflow near the largest double
+        double residual = ((a0 * root + 1.0) * root + 1.0) * (root / s) - 1.0;
+        if (!Double.isFinite(root) || !(root > 0.0) || !(Math.abs(residual) <= 1e-12)) {
             fail("not a finite positive root: a0 = " + a0 + ", S = " + s + ", Gamma = " + root + ", residual "
                     + residual);
         }
@@ -48,9 +49,11 @@ class CubicIterationBoundTest {
                 checked++;
             }
         }
-        // the low end of the zone's range of S (a normal double) and below it (subnormal)
-        for (double a0 : new double[] {1e-100, 1e-3, 2.25, 1e3}) {
-            for (double s : new double[] {Double.MIN_NORMAL, Double.MIN_VALUE, 1e-310}) {
+        // both ends of the zone's range of S (a normal double up to the largest one) and below it (subnormal),
+        // with a0 far beyond the grid on both sides (a tiny a0 is an optically very thin eddy)
+        for (double a0 : new double[] {1e-300, 1e-100, 1e-30, 1e-3, 0.25, 2.25, 1e3, 1e30, 1e100, 1e300}) {
+            for (double s : new double[] {Double.MIN_NORMAL, Double.MIN_VALUE, 1e-310, 1e150, 1e200, 1e300,
+                Double.MAX_VALUE}) {
                 assertRoot(a0, s, MixingLengthCubic.efficiency(a0, s));
                 checked++;
             }
@@ -98,6 +101,19 @@ class CubicIterationBoundTest {
             assertThrows(AssertionFailedError.class, () -> assertRoot(a0, s, bad), "accepted " + bad);
         }
         assertRoot(a0, s, MixingLengthCubic.efficiency(a0, s));
+    }
+
+    /**
+     * Documented: an infinite S gives an infinite root; the largest double gives the finite root
+     * Gamma ~ (S / a0)^(1/3) of the cubic-dominated equation.
+     */
+    @Tag("law")
+    @Test
+    void infiniteAndLargestSGiveTheirRoots() {
+        assertEquals(Double.POSITIVE_INFINITY, MixingLengthCubic.efficiency(2.25, Double.POSITIVE_INFINITY));
+        double big = MixingLengthCubic.efficiency(2.25, Double.MAX_VALUE);
+        assertRoot(2.25, Double.MAX_VALUE, big);
+        assertEquals(Math.cbrt(Double.MAX_VALUE / 2.25), big, 1e-6 * big);
     }
 
     /** Documented: S &lt;= 0 has no positive root and gives 0 at once (a NaN S too: not &gt; 0). */

@@ -1,5 +1,7 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -29,6 +31,7 @@ class CubicStartTableTest {
         return Math.fma(table[2 * i + 1], fraction, table[2 * i]);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void tableStartAndRootAgreeWithCommonsMathLaguerre() {
         for (MixingLengthGeometry geometry : MixingLengthGeometry.values()) {
@@ -50,6 +53,7 @@ class CubicStartTableTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void tableRootSatisfiesTheCubicOverTheWholeTableRange() {
         for (MixingLengthGeometry geometry : MixingLengthGeometry.values()) {

@@ -1,5 +1,6 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.spi.ConvectionColumns;
 import io.github.startransport.spi.ConvectionModel;
@@ -19,6 +20,7 @@ import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.constraints.Scale;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -53,6 +55,7 @@ class EddySpectrumTest {
 
     // ---- the fit ----
 
+    @Tag(CheckKind.LAW)
     @Test
     void theRememberedExponentsGiveTheLimitsOfLocalTheory() {
         // Phi ~ S^2 (inefficient) and Phi ~ S^(1/2) (efficient): the exponents k + n and k + m n of the fit
@@ -60,6 +63,7 @@ class EddySpectrumTest {
         assertEquals(0.5, SpectrumFlux.K + SpectrumFlux.M * SpectrumFlux.N, 1e-5);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void phiEqualsTheFitAsWrittenWhereThatHasNoCancellation() {
         for (double s = 1e-1; s < 1e12; s *= 1.7) {
@@ -68,6 +72,7 @@ class EddySpectrumTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void phiApproachesThePapersLimits() {
         // inefficient: (1 + x)^m - 1 = m x (1 + (m - 1) x / 2 + ...), so Phi / (a (m b)^n S^(k + n)) - 1
@@ -94,6 +99,7 @@ class EddySpectrumTest {
         assertEquals(11.0095, SpectrumFlux.EFFICIENT_COEFFICIENT, 1e-4);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void slopeOfPhiIsTheLogarithmicDerivativeOfTheFit() {
         for (double s = 1e-6; s < 1e12; s *= 2.3) {
@@ -107,6 +113,7 @@ class EddySpectrumTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void theMixingLengthPhiTurnsTheFluxEquationIntoTheCubic() {
         // with S = 162 Gamma (Gamma + 1): S (1 + Phi_MLT(S)) = 162 (a0 Gamma^3 + Gamma^2 + Gamma), a0 = 9/4
@@ -118,6 +125,7 @@ class EddySpectrumTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void theFullSpectrumCarriesMoreFluxThanOneEddyAtEveryEfficiency() {
         // CM91's central result (from memory): Phi_CM > Phi_MLT at the same S
@@ -128,12 +136,14 @@ class EddySpectrumTest {
 
     // ---- the root ----
 
+    @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 300, seed = "91")
     void tableStartIsWithinTwoPartsInTenToTheEightOfTheRoot(
             @ForAll @Scale(9) @DoubleRange(min = -40, max = 79.99) double rho) {
         assertEquals(SpectrumFlux.solveFully(rho), SpectrumFlux.start(rho), 2e-8);
     }
 
+    @net.jqwik.api.Tag(CheckKind.EXTERNAL)
     @Property(tries = 200, seed = "92")
     void rootAgreesWithCommonsMathBrent(@ForAll @Scale(9) @DoubleRange(min = -2, max = 60) double rho) {
         // h(sigma) = sigma + ln(1 + Phi(e^sigma)) - rho with the fit as written (no cancellation for S > 0.1)
@@ -146,6 +156,7 @@ class EddySpectrumTest {
     // ---- a zone ----
 
     /** F_rad + F_conv = F with the fit as written: nabla_rad - nabla = Phi(S) (nabla - nabla_ad), S = 40.5 (nabla - nabla_ad) / U^2. */
+    @net.jqwik.api.Tag(CheckKind.EXTERNAL)
     @Property(tries = 300, seed = "93")
     void fluxEquationHolds(@ForAll @Scale(9) @DoubleRange(min = 3.7, max = 8) double logT,
                            @ForAll @Scale(9) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -169,6 +180,7 @@ class EddySpectrumTest {
         assertTrue(out.nabla > z.nablaAd && out.nabla < out.nablaRad);
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void efficientLimitApproachesTheAdiabatAsTheAsymptoteSays() {
         // U -> 0: S (1 + Phi) = R with Phi -> c S^(1/2): S -> (R / c)^(2/3), nabla - nabla_ad = S U^2 / 40.5
@@ -187,6 +199,7 @@ class EddySpectrumTest {
         assertTrue(previous < 1e-2, "deviation at U = 1e-10: " + previous);
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void inefficientLimitApproachesTheRadiativeGradientAsTheAsymptoteSays() {
         // U -> infinity: S -> R, Phi -> c0 R^2, so F_conv / F -> c0 R^2 and nabla -> nabla_rad
@@ -202,6 +215,7 @@ class EddySpectrumTest {
         }
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void atTheSameLengthTheFullSpectrumIsCloserToTheAdiabatThanMixingLengthTheory() {
         ConvectionModel mlt = new LocalMixingLength(1.0, Criterion.SCHWARZSCHILD, MixingLengthGeometry.BOHM_VITENSE_1958);
@@ -217,6 +231,7 @@ class EddySpectrumTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void velocityIsTheOneEddyCarryingTheFluxInTheMixingLengthPicture() {
         // v^3 = g delta Lambda F_conv / (4 rho c_P T) holds exactly in mixing-length theory with the Böhm-Vitense
@@ -238,6 +253,7 @@ class EddySpectrumTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void efficiencyAndElementGradientFollowCoxAndGiuli() {
         ZoneState z = zone(6.0, 0.5, -2, 0.3, 10, 33, 1.0);
@@ -252,6 +268,7 @@ class EddySpectrumTest {
 
     // ---- derivatives ----
 
+    @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 300, seed = "94")
     void convectiveJacobian(@ForAll @Scale(12) @DoubleRange(min = 3.7, max = 8.5) double logT,
                             @ForAll @Scale(12) @DoubleRange(min = 0, max = 1) double rhoFraction,
@@ -314,6 +331,7 @@ class EddySpectrumTest {
 
     // ---- calls ----
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void batchIsBitForBitThePerZoneCallAndValuesOnlyKeepsEveryValue() {
         int n = 257;
@@ -357,6 +375,7 @@ class EddySpectrumTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void concurrentCallsGiveTheSerialResults() throws Exception {
         ConvectionModel m = model(1.0, Criterion.LEDOUX, LengthScale.SCALE_HEIGHT);
@@ -397,6 +416,7 @@ class EddySpectrumTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void refusesWhatItCannotSolveNamingTheField() {
         ConvectionModel edge = model(1.0, Criterion.SCHWARZSCHILD, LengthScale.EDGE_DISTANCE);
@@ -418,6 +438,7 @@ class EddySpectrumTest {
                 () -> model(1.0, Criterion.SCHWARZSCHILD, LengthScale.SCALE_HEIGHT).solve(bad, out)).field());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void hostsFindItByNameWithItsOptions() {
         Transport transport = Transport.discover();

@@ -1,5 +1,6 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.InvalidInputException;
@@ -11,6 +12,7 @@ import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.IntRange;
 import net.jqwik.api.constraints.Scale;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;
@@ -53,6 +55,7 @@ class EfficientLimitTest {
      * expansion of the cubic (x = (kUW)^(1/3) (1 - kU / (3x) ...), nabla - nabla_ad = x^2 + 2Ux; re-derived),
      * where it is resolved above the rounding of nabla; for U &gt;= 1e6 (nabla_rad - nabla) / W below 1e-4.
      */
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 3000, seed = "1101")
     void rightAnswerOrRefusalOverEveryU(@ForAll @Scale(12) @DoubleRange(min = -300, max = 300) double logU,
                                         @ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
@@ -88,6 +91,7 @@ class EfficientLimitTest {
     }
 
     /** The values the review found: c_P = 1e152 and 3e152 (U about 1e-152): the adiabatic limit, or a refusal. */
+    @Tag(CheckKind.LAW)
     @Test
     void largeHeatCapacityGivesTheAdiabaticGradientOrARefusal() {
         for (double factor : new double[] {1e150, 1e152, 3e152, 1e160}) {
@@ -118,6 +122,7 @@ class EfficientLimitTest {
      * F_conv / F + F_rad / F = 1 to 1e-12 (fractions of one flux; exact identity of the theory); a zone
      * convecting with W &lt;= 0 carries its convective flux inwards (F_conv / F has the sign of -L).
      */
+    @Tag(CheckKind.LAW)
     @Test
     void convectiveFractionStaysInItsRangeOverFuzzedZones() {
         SplittableRandom rnd = new SplittableRandom(1102);

@@ -1,7 +1,9 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
+import net.jqwik.api.Tag;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Scale;
 
@@ -16,6 +18,7 @@ class MixingCoefficientsPropertyTest {
      * margin, positive and increasing in nabla between nabla_ad and nabla_L, linear in alpha_sc,
      * proportional to T^3 / (kappa rho^2 c_P).
      */
+    @Tag(CheckKind.LAW)
     @Property(tries = 1000, seed = "61")
     void semiconvection(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                         @ForAll @Scale(12) @DoubleRange(min = -12, max = 6) double logRho,
@@ -47,6 +50,7 @@ class MixingCoefficientsPropertyTest {
      * from memory): zero for a flat composition profile, positive for nabla_mu &lt; 0, linear in
      * -nabla_mu and in C_t, growing as nabla approaches nabla_ad from below.
      */
+    @Tag(CheckKind.LAW)
     @Property(tries = 1000, seed = "62")
     void thermohaline(@ForAll @Scale(12) @DoubleRange(min = 3.5, max = 9) double logT,
                       @ForAll @Scale(12) @DoubleRange(min = -12, max = 6) double logRho,
@@ -72,6 +76,7 @@ class MixingCoefficientsPropertyTest {
      * Exponential overshoot (Freytag, Ludwig &amp; Steffen 1996; Herwig 2000; form from memory): D(0) = D_0,
      * strictly decreasing in z, D(z1 + z2) D_0 = D(z1) D(z2), and halving f squares the decay.
      */
+    @Tag(CheckKind.LAW)
     @Property(tries = 1000, seed = "63")
     void overshoot(@ForAll @Scale(12) @DoubleRange(min = 0, max = 16) double logD0,
                    @ForAll @Scale(12) @DoubleRange(min = 0.001, max = 0.05) double f,

@@ -1,7 +1,9 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
+import net.jqwik.api.Tag;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Scale;
 
@@ -14,6 +16,7 @@ class MixingLengthCubicPropertyTest {
     private static final double KWW_K = 8.0 / 9.0;
 
     /** The root satisfies a0 Gamma^3 + Gamma^2 + Gamma = S to 1e-12 relative (to S, the sum of the positive terms). */
+    @Tag(CheckKind.INTERNAL)
     @Property(tries = 2000, seed = "31")
     void residualIsBelow1e12(@ForAll @Scale(12) @DoubleRange(min = -8, max = 8) double logU,
                              @ForAll @Scale(12) @DoubleRange(min = -9, max = 1) double logW,
@@ -31,6 +34,7 @@ class MixingLengthCubicPropertyTest {
      * nabla agrees to 1e-10 with the root of the textbook x-cubic (Kippenhahn, Weigert &amp; Weiss
      * 2012, ch. 7) found by Commons Math's LaguerreSolver.
      */
+    @Tag(CheckKind.EXTERNAL)
     @Property(tries = 2000, seed = "32")
     void agreesWithCommonsMathLaguerre(@ForAll @Scale(12) @DoubleRange(min = -8, max = 8) double logU,
                                        @ForAll @Scale(12) @DoubleRange(min = -6, max = 1) double logW,
@@ -48,6 +52,7 @@ class MixingLengthCubicPropertyTest {
      * Efficient limit U -&gt; 0 (Kippenhahn, Weigert &amp; Weiss 2012 §7.3: nabla -&gt; nabla_ad): from the
      * cubic, nabla - nabla_ad -&gt; (8UW/9)^(2/3), with a relative correction of order 1/Gamma.
      */
+    @Tag(CheckKind.LAW)
     @Property(tries = 500, seed = "33")
     void efficientLimit(@ForAll @Scale(12) @DoubleRange(min = -8, max = -5) double logU,
                         @ForAll @Scale(12) @DoubleRange(min = -3, max = 1) double logW) {
@@ -64,6 +69,7 @@ class MixingLengthCubicPropertyTest {
      * Inefficient limit U -&gt; infinity (Cox &amp; Giuli 1968 ch. 14: Gamma -&gt; A^2 W, with A = 1/(2U); from
      * memory): nabla -&gt; nabla_rad, and nabla_rad - nabla -&gt; a0 S^2 W with a relative correction of order S.
      */
+    @Tag(CheckKind.LAW)
     @Property(tries = 500, seed = "34")
     void inefficientLimit(@ForAll @Scale(12) @DoubleRange(min = 3, max = 8) double logU,
                           @ForAll @Scale(12) @DoubleRange(min = -6, max = 1) double logW) {
@@ -77,6 +83,7 @@ class MixingLengthCubicPropertyTest {
     }
 
     /** Onset W -&gt; 0+: nabla -&gt; nabla_rad (= nabla_ad at W = 0); the deficit is bounded by a0 S^2 W since Gamma &lt;= S. */
+    @Tag(CheckKind.LAW)
     @Property(tries = 500, seed = "35")
     void continuousThroughOnset(@ForAll @Scale(12) @DoubleRange(min = -4, max = 4) double logU,
                                 @ForAll @Scale(12) @DoubleRange(min = -14, max = -6) double logW) {

@@ -1,10 +1,12 @@
 package io.github.startransport.core.convection;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.InvalidInputException;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Scale;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.Arrays;
@@ -65,6 +67,7 @@ class OvershootMixingTest {
         return new Result(out, rb, rt);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void exponentialAboveACoreFollowsTheClosedFormFromR0() {
         double[] r = radius();
@@ -89,6 +92,7 @@ class OvershootMixingTest {
         assertTrue(Double.isNaN(res.reachBottom()[0]), "no edge at the centre");
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void atTheEdgeItselfTheCoefficientIsD0TimesExpOfMinusTwoF0OverF() {
         // place the edge exactly on a zone so that the zone sits at z = f0 H from r_0
@@ -105,6 +109,7 @@ class OvershootMixingTest {
         assertTrue(res.reachBottom()[0] < bottom);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void stepMixesAtD0UpToAlphaHBeyondTheEdgeAndNotFurther() {
         double[] r = radius();
@@ -120,6 +125,7 @@ class OvershootMixingTest {
         assertEquals(end, res.reachBottom()[0], 1e-9 * R);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aCoreSmallerThanHpOvershootsInUnitsOfItsOwnRadius() {
         // a core of 0.02 R = 2e9 cm under H_P = 1e10 cm: H = min(H_P, r_core) = r_core (common practice, no source)
@@ -134,6 +140,7 @@ class OvershootMixingTest {
         assertEquals(top + alpha * 0.1 * top, unlimited.reachTop()[0], 1e-9 * R, "H_P below the core's radius is used");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void withoutOvershootEveryZoneIsZeroAndNoReachIsReported() {
         double[] r = radius();
@@ -148,6 +155,7 @@ class OvershootMixingTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aStartingCoefficientAtOrBelowTheFloorGivesNoOvershoot() {
         double[] r = radius();
@@ -163,6 +171,7 @@ class OvershootMixingTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void twoEdgesReachingTheSameZonesKeepTheLargerCoefficient() {
         double[] r = radius();
@@ -179,6 +188,7 @@ class OvershootMixingTest {
     }
 
     /** The exponential falls by e^-2 over each f H (Freytag, Ludwig &amp; Steffen 1996): a law on any grid. */
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 200, seed = "15")
     void coefficientFallsByEToTheMinusTwoPerFH(@ForAll @DoubleRange(min = 0.005, max = 0.05) @Scale(6) double f,
                                                @ForAll @DoubleRange(min = 0.1, max = 0.6) @Scale(6) double top) {
@@ -197,6 +207,7 @@ class OvershootMixingTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void badColumnsAndSettingsAreRefusedNamingTheFieldAndZone() {
         double[] r = radius();

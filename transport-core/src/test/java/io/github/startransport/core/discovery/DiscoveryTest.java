@@ -1,6 +1,7 @@
 package io.github.startransport.core.discovery;
 
 import io.github.startransport.core.CoreProvider;
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.DiscoveryException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
@@ -8,6 +9,7 @@ import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.StabilityModel;
 import io.github.startransport.spi.Transport;
 import io.github.startransport.spi.TransportProvider;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -65,6 +67,7 @@ class DiscoveryTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void classPathDiscoveryFindsTheCoreProvider() {
         Transport t = Transport.discover();
@@ -76,6 +79,7 @@ class DiscoveryTest {
                 ModelOptions.defaults()));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void defaultModelOfAFamilyIsTheProvidersFirst() {
         Transport t = Transport.discover();
@@ -83,6 +87,7 @@ class DiscoveryTest {
         assertNotNull(t.stability(null, ModelOptions.defaults()));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void unknownModelNameSaysWhatWasFound() {
         Transport t = Transport.discover();
@@ -94,6 +99,7 @@ class DiscoveryTest {
         assertTrue(e.getMessage().contains("transport-core"), e.getMessage());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void unknownProviderNameSaysWhatWasFound() {
         Transport t = Transport.discover();
@@ -102,6 +108,7 @@ class DiscoveryTest {
         assertEquals(List.of(CoreProvider.NAME), e.found());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void noProviderAtAllNamesTheJarToAdd() {
         DiscoveryException e = assertThrows(DiscoveryException.class, () -> Transport.fromSuppliers(List.of()));
@@ -116,6 +123,7 @@ class DiscoveryTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void twoProvidersWithOneNameAreRefusedNamingBoth() {
         List<Supplier<TransportProvider>> two = List.of(CoreProvider::new, () -> new NamedProvider(CoreProvider.NAME));
@@ -125,6 +133,7 @@ class DiscoveryTest {
         assertTrue(e.found().get(1).contains(NamedProvider.class.getName()), e.found().toString());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aModelOfferedTwiceMustBeQualified() {
         Transport t = Transport.fromSuppliers(List.of(CoreProvider::new, () -> new NamedProvider("other")));
@@ -135,6 +144,7 @@ class DiscoveryTest {
         assertNotNull(t.stability("other/gradient-comparison", ModelOptions.defaults()));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aProviderThatFailsToLoadDoesNotHideTheOthers() {
         Supplier<TransportProvider> failing = () -> {
@@ -146,6 +156,7 @@ class DiscoveryTest {
         assertTrue(t.loadFailures().get(0).contains("missing native data"));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void brokenServiceEntriesAreReportedNotFatal(@TempDir Path dir) throws IOException {
         Path services = dir.resolve("META-INF/services");

@@ -1,5 +1,6 @@
 package io.github.startransport.core.envelope;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.constants.Iau2015;
 import io.github.startransport.core.convection.LocalMixingLength;
@@ -8,6 +9,7 @@ import io.github.startransport.spi.EnvelopeSolution;
 import io.github.startransport.spi.EnvelopeStar;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -19,6 +21,7 @@ class EnvelopeAnalyticTest {
     private static final EnvelopeStar STAR = new EnvelopeStar(Iau2015.SOLAR_MASS, Iau2015.SOLAR_RADIUS,
             Iau2015.SOLAR_LUMINOSITY, 0.7, 0.02);
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void eddingtonTemperatureLaw() {
         // T^4 = 3/4 T_eff^4 (tau + 2/3): T = T_eff at tau = 2/3, T(0) = 2^(-1/4) T_eff = 0.8409 T_eff
@@ -27,6 +30,7 @@ class EnvelopeAnalyticTest {
         assertEquals(Math.pow(2.0, -0.25) * 5772.0, GreyAtmosphere.temperature(0.0, 5772.0), 1e-9);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void effectiveTemperatureOfTheNominalSun() {
         // IAU 2015 Resolution B3: the nominal L and R give T_eff = 5772 K (the nominal value, rounded)
@@ -34,6 +38,7 @@ class EnvelopeAnalyticTest {
         assertEquals(5772.0, teff, 0.01);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void photosphericPressureOfAConstantOpacityAtmosphere() {
         // dP/dtau = g / kappa with constant kappa and P(0) = P_rad(0) = a T(0)^4 / 3 = a T_eff^4 / 6 gives
@@ -49,6 +54,7 @@ class EnvelopeAnalyticTest {
         assertEquals(1.0, p / expected, 1e-9);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void kramersRadiativeEnvelopeFollowsTheRadiativeZeroSolution() {
         // Radiative envelope with m = M, L constant and kappa = kappa_0 rho T^-3.5 (Kramers) in a perfect gas:
@@ -81,6 +87,7 @@ class EnvelopeAnalyticTest {
         assertTrue(checked > 100, "deep points checked: " + checked);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void efficientConvectionInAPerfectMonatomicGasFollowsTheAdiabatPOfT() {
         // Deep in an efficient convection zone nabla -> nabla_ad = 2/5 for a fully ionised perfect monatomic gas,

@@ -1,5 +1,6 @@
 package io.github.startransport.core.envelope;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Iau2015;
 import io.github.startransport.core.convection.EddySpectrumConvection;
 import io.github.startransport.core.opacity.AnalyticOpacity;
@@ -15,6 +16,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Scale;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -37,6 +39,7 @@ class EnvelopeCalibrationTest {
      * deep adiabat has a lower entropy and the zone reaches deeper (Kippenhahn, Weigert &amp; Weiss 2012, §7.3 and
      * §11.3.2 [from memory]; the reason alpha is calibrated on the solar convection-zone depth).
      */
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 12, seed = "16016")
     void largerAlphaGivesADeeperBase(@ForAll @DoubleRange(min = 0.8, max = 3.0) @Scale(6) double a,
                                      @ForAll @DoubleRange(min = 0.05, max = 1.0) @Scale(6) double step,
@@ -49,6 +52,7 @@ class EnvelopeCalibrationTest {
         assertTrue(deep < shallow, "alpha " + a + " -> r_b/R " + shallow + ", alpha " + (a + step) + " -> " + deep);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void calibrationPutsTheBaseOnTheTargetAndItsSensitivityMatchesNeighbouringCalibrations() {
         EnvelopeStar sun = Stars.sun();
@@ -70,6 +74,7 @@ class EnvelopeCalibrationTest {
         assertTrue(c.sensitivity() < 0.0, "a deeper base (smaller r_b) needs a larger alpha");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void targetsOutsideTheReachableRangeAreRefusedWithTheRange() {
         EnvelopeStar sun = Stars.sun();
@@ -85,6 +90,7 @@ class EnvelopeCalibrationTest {
                 () -> GreyAtmosphereEnvelope.DEFAULT.calibrate(sun, setup, Double.NaN, null));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void badStarsAndOptionsAreRefusedByName() {
         double m = Iau2015.SOLAR_MASS;

@@ -1,5 +1,6 @@
 package io.github.startransport.core.envelope;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.profile.LocalDiagnosis;
 import io.github.startransport.spi.ConvectiveBase;
 import io.github.startransport.spi.DiagnosisSetup;
@@ -12,6 +13,7 @@ import io.github.startransport.spi.Region;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.ode.ContinuousOutputModel;
 import org.apache.commons.math3.ode.nonstiff.GraggBulirschStoerIntegrator;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -26,6 +28,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /** Convergence, event accuracy against an independent integration, and thread safety. */
 class EnvelopeNumericsTest {
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void halvingTheTolerancesMovesTheBaseByLessThan1e5R() {
         // common practice, no source: a converged integration does not move when its tolerance is halved
@@ -40,6 +43,7 @@ class EnvelopeNumericsTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void theBaseEventAgreesWithAnIndependentIntegrationTo1e6R() {
         // Commons Math's Gragg-Bulirsch-Stoer integrator (a different method), no events, dense output, and
@@ -80,6 +84,7 @@ class EnvelopeNumericsTest {
         assertEquals(base.radius() / sun.radius(), rb / sun.radius(), 1e-6);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void theProfileDiagnosesWithItsBaseWhereTheEventPutIt() {
         // the envelope profile goes through the library's own diagnosis, whose boundary is a linear
@@ -97,6 +102,7 @@ class EnvelopeNumericsTest {
         assertEquals(rb, outer.bottomRadius(), hp);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void concurrentEnvelopesEqualSerialOnes() throws Exception {
         // common practice, no source: an immutable integrator gives bit-identical envelopes on any thread

@@ -1,5 +1,6 @@
 package io.github.startransport.core.envelope;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.convection.LocalMixingLength;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.opacity.AnalyticOpacity;
@@ -11,6 +12,7 @@ import io.github.startransport.spi.EnvelopeSetup;
 import io.github.startransport.spi.EnvelopeSolution;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -56,6 +58,7 @@ class SolarEnvelopeTest {
      * convection-zone base. Our lower Z (0.0134 against BP04's 0.0170) is not widened for, which makes the
      * band stricter, not looser.
      */
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void calibratedSunHasTheBaseTemperatureAndDensityOfAStandardSolarModel() {
         AlphaCalibration c = GreyAtmosphereEnvelope.DEFAULT.calibrate(Stars.sun(), partialIonisation(), SOLAR_BASE,
@@ -76,6 +79,7 @@ class SolarEnvelopeTest {
      * ionisation dip of nabla_ad lies inside the zone, and at the same alpha, opacity and star a fully
      * ionised gas gives a shallower zone.
      */
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void theSunsSurfaceZoneRunsThroughTheIonisationZonesAndIsShallowerWithoutThem() {
         EnvelopeSolution ionising = GreyAtmosphereEnvelope.DEFAULT.integrate(Stars.sun(),

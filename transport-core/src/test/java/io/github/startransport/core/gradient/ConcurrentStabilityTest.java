@@ -1,8 +1,10 @@
 package io.github.startransport.core.gradient;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.StabilityResult;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -17,6 +19,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 /** One shared model instance used from 8 threads gives bit-identical results to a serial run. */
 class ConcurrentStabilityTest {
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void sharedModelIsThreadSafe() throws Exception {
         GradientStability model = new GradientStability(Criterion.LEDOUX);

@@ -1,5 +1,6 @@
 package io.github.startransport.core.gradient;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.convection.EddySpectrumConvection;
 import io.github.startransport.core.convection.LengthScale;
 import io.github.startransport.core.convection.LocalMixingLength;
@@ -18,6 +19,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Scale;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -64,6 +66,7 @@ class GradientStabilityTest {
         return r.regime;
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void radiativeWhereNablaRadBelowNablaAd() {
         ZoneState z = zone(0.2, 0.4, 0.0);
@@ -71,6 +74,7 @@ class GradientStabilityTest {
         assertEquals(Regime.RADIATIVE, regime(LEDOUX, z));
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void convectiveWhereNablaRadAboveBothGradients() {
         ZoneState z = zone(0.9, 0.4, 0.1);
@@ -78,6 +82,7 @@ class GradientStabilityTest {
         assertEquals(Regime.CONVECTIVE, regime(LEDOUX, z));
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void semiconvectiveBetweenNablaAdAndNablaLedoux() {
         // nabla_ad < nabla_rad < nabla_L with nabla_mu > 0: Schwarzschild-unstable, Ledoux-stable
@@ -86,6 +91,7 @@ class GradientStabilityTest {
         assertEquals(Regime.SEMICONVECTIVE, regime(LEDOUX, z));
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void thermohalineWhereMuInvertedAndLedouxStable() {
         ZoneState z = zone(0.2, 0.4, -0.05); // nabla_L = 0.35 > nabla_rad
@@ -93,6 +99,7 @@ class GradientStabilityTest {
         assertEquals(Regime.THERMOHALINE, regime(LEDOUX, z));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void zonesExactlyOnAMarginAreNotConvective() {
         // the semiconvective coefficient diverges at nabla_rad = nabla_L (Langer, Sugimoto & Fricke 1983): radiative
@@ -138,6 +145,7 @@ class GradientStabilityTest {
                 Arguments.of("L<0, mu<0, nabla_L<nabla_rad", -0.3, -0.9, Regime.CONVECTIVE, Regime.CONVECTIVE));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @ParameterizedTest(name = "{0}")
     @MethodSource("ruleTable")
     void everyRowOfTheRuleTable(String row, double nablaRad, double nablaMu, Regime schwarzschild, Regime ledoux) {
@@ -176,6 +184,7 @@ class GradientStabilityTest {
         }
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void negativeLuminosityWithoutAnInvertedGradientIsRadiative() {
         // energy flowing inward (e.g. a neutrino-cooled core): nabla_rad < 0 < nabla_ad
@@ -187,6 +196,7 @@ class GradientStabilityTest {
         assertEquals(Regime.RADIATIVE, regime(LEDOUX, z));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void marginsAreTheGradientDifferences() {
         ZoneState z = zone(0.5, 0.4, 0.3);
@@ -197,6 +207,7 @@ class GradientStabilityTest {
         assertEquals(r.marginLedoux, r.margin(), 0.0);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void optionsChooseTheCriterion() {
         assertEquals(Criterion.LEDOUX, GradientStability.fromOptions(ModelOptions.parse("criterion=Ledoux")).criterion());
@@ -207,6 +218,7 @@ class GradientStabilityTest {
                 () -> GradientStability.fromOptions(ModelOptions.parse("alhpa=2")));
     }
 
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 2000, seed = "201")
     void schwarzschildStableWithStabilisingMuIsLedouxStable(
             @ForAll @Scale(9) @DoubleRange(min = -1, max = 3) double nablaRad,
@@ -226,6 +238,7 @@ class GradientStabilityTest {
         }
     }
 
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 2000, seed = "202")
     void ledouxConvectiveImpliesSchwarzschildConvectiveWhenMuStabilises(
             @ForAll @Scale(9) @DoubleRange(min = -1, max = 3) double nablaRad,
@@ -237,6 +250,7 @@ class GradientStabilityTest {
         }
     }
 
+    @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 1000, seed = "203")
     void ledouxDerivativesAgreeWithCentralDifferences(
             @ForAll @Scale(9) @DoubleRange(min = 0.2, max = 0.45) double nablaAd,
@@ -293,6 +307,7 @@ class GradientStabilityTest {
         return cases.stream();
     }
 
+    @Tag(CheckKind.INTERNAL)
     @ParameterizedTest(name = "{0} = {2}")
     @MethodSource("badInputs")
     void badInputIsRefusedNamingFieldValueUnitAndZone(String field, String unit, double bad) {

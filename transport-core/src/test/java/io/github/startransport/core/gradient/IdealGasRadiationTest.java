@@ -1,9 +1,11 @@
 package io.github.startransport.core.gradient;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -11,6 +13,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 
 class IdealGasRadiationTest {
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void pressureIsGasPlusRadiation() {
         // P = rho k T / (mu m_u) + a T^4 / 3 (Kippenhahn, Weigert & Weiss 2012 §13.1, from memory),
@@ -24,6 +27,7 @@ class IdealGasRadiationTest {
         assertEquals(1.0, r.phi, 0.0);
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void tenuousCoolGasIsMonatomicIdeal() {
         // beta -> 1: nabla_ad = 2/5, delta = 1, Gamma_1 = 5/3, c_P = (5/2) k/(mu m_u)
@@ -35,6 +39,7 @@ class IdealGasRadiationTest {
         assertEquals(2.5 * Codata2018.BOLTZMANN / (r.mu * Codata2018.ATOMIC_MASS_UNIT), r.cp, 1e-4 * r.cp);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void completeWritesTheResponseFunctionsIntoTheZone() {
         ZoneState z = new ZoneState();
@@ -50,6 +55,7 @@ class IdealGasRadiationTest {
         assertEquals(r.delta, z.delta, 0.0);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void refusesImpossibleCompositions() {
         ThermoResult r = new ThermoResult();

@@ -1,9 +1,11 @@
 package io.github.startransport.core.gradient;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.spi.ZoneInput;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
+import net.jqwik.api.Tag;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Scale;
 
@@ -17,6 +19,7 @@ class RadiativeGradientTest {
     private static final double A = Codata2018.RADIATION_CONSTANT;
     private static final double C = Codata2018.SPEED_OF_LIGHT;
 
+    @Tag(CheckKind.EXTERNAL)
     @Property(tries = 1000, seed = "101")
     void radiativeFluxAtNablaRadCarriesTheWholeLuminosity(
             @ForAll @Scale(9) @DoubleRange(min = 3.5, max = 9) double logT,
@@ -43,6 +46,7 @@ class RadiativeGradientTest {
         assertEquals(expected, flux, 1e-12 * expected);
     }
 
+    @Tag(CheckKind.LAW)
     @Property(tries = 1000, seed = "102")
     void scalesLinearlyWithKappaTimesL(@ForAll @Scale(9) @DoubleRange(min = -1, max = 4) double logKappa,
                                        @ForAll @Scale(9) @DoubleRange(min = 30, max = 38) double logL,
@@ -60,6 +64,7 @@ class RadiativeGradientTest {
         assertEquals(base, RadiativeGradient.value(s * kappa, l / s, p, m, t), 1e-13 * base);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Property(tries = 1000, seed = "103")
     void derivativesAgreeWithCentralDifferences(
             @ForAll @Scale(9) @DoubleRange(min = 3.5, max = 9) double logT,

@@ -1,5 +1,6 @@
 package io.github.startransport.core.model;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.constants.Iau2015;
 import io.github.startransport.core.profile.LocalDiagnosis;
@@ -12,6 +13,7 @@ import io.github.startransport.spi.Region;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -20,6 +22,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class EddingtonStandardModelTest {
     private static final double MSUN = Iau2015.SOLAR_MASS;
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void betaSatisfiesEddingtonsQuartic() {
         // 1 - beta = 0.003 (M/M_sun)^2 mu^4 beta^4 (Eddington 1926; Kippenhahn, Weigert & Weiss 2012
@@ -32,6 +35,7 @@ class EddingtonStandardModelTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void demoCentralTemperatureFollowsTheStandardModelFormula() {
         // T_c = (beta mu m_u / k) P_c / rho_c with P_c = 11.05 G M^2 / R^4 and rho_c = 54.18 * 3M / (4 pi R^3)
@@ -48,6 +52,7 @@ class EddingtonStandardModelTest {
         assertEquals(pc, model.centralPressure(), 1e-3 * pc);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void demoProfileIsOrderedAndEndsAtTheSurfaceTemperature() {
         Profile p = DemoStar.fromOptions(ModelOptions.parse("zones=300,surface=polytrope")).profile();
@@ -59,6 +64,7 @@ class EddingtonStandardModelTest {
         assertTrue(p.mass() < DemoStar.MASS_SOLAR * MSUN && p.mass() > 0.999 * DemoStar.MASS_SOLAR * MSUN);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void demoStarWithAnEnvelopeEndsAtThePhotosphereOfItsLAndR() {
         Profile p = DemoStar.fromOptions(ModelOptions.parse("zones=300")).profile();
@@ -96,6 +102,7 @@ class EddingtonStandardModelTest {
      * the photosphere and holds the zone where nabla_ad is smallest, a hydrogen-ionisation value below 0.15
      * between 8e3 and 3e4 K.
      */
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void demoStarsSurfaceConvectionHoldsTheHydrogenIonisationDip() {
         Profile p = DemoStar.fromOptions(ModelOptions.parse("zones=400")).profile();

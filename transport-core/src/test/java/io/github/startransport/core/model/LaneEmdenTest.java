@@ -1,5 +1,7 @@
 package io.github.startransport.core.model;
 
+import io.github.startransport.core.checks.CheckKind;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -10,6 +12,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
  */
 class LaneEmdenTest {
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void indexZeroIsTheUniformSphere() {
         // theta = 1 - xi^2/6: xi_1 = sqrt(6), -xi_1^2 theta' = xi_1^3/3, rho_c / mean = 1
@@ -19,6 +22,7 @@ class LaneEmdenTest {
         assertEquals(1.0, le.centralToMeanDensity(), 1e-9);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void indexOneIsSinXOverX() {
         // theta = sin(xi)/xi: xi_1 = pi, -xi_1^2 theta'(xi_1) = pi, rho_c / mean = pi^2 / 3
@@ -31,6 +35,7 @@ class LaneEmdenTest {
         assertEquals(Math.sin(1.3) / 1.3, s[0], 1e-10);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void indexOneAndAHalf() {
         // Chandrasekhar 1939, table 4: xi_1 = 3.65375, -xi_1^2 theta' = 2.71406, rho_c/mean = 5.99071
@@ -40,6 +45,7 @@ class LaneEmdenTest {
         assertEquals(5.99071, le.centralToMeanDensity(), 1e-4 * 5.99071);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void indexThree() {
         // Chandrasekhar 1939, table 4: xi_1 = 6.89685, -xi_1^2 theta' = 2.01824, rho_c/mean = 54.1825

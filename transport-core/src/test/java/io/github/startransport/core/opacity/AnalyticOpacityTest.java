@@ -1,5 +1,6 @@
 package io.github.startransport.core.opacity;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.constants.Iau2015;
 import io.github.startransport.spi.InvalidInputException;
@@ -10,6 +11,8 @@ import io.github.startransport.spi.OpacityStatus;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
+import net.jqwik.api.constraints.Scale;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -24,6 +27,7 @@ class AnalyticOpacityTest {
         assertEquals(expected, actual, rel * Math.abs(expected), what);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void electronScatteringTendsToThomsonInCoolTenuousLimit() {
         // Thomson opacity of fully ionised matter sigma_T / (mu_e m_u), mu_e = 2 / (1 + X), with the
@@ -35,6 +39,7 @@ class AnalyticOpacityTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void compositeIsPointTwoTimesOnePlusXInHotTenuousGas() {
         // kappa_es = 0.2 (1 + X) cm^2/g for fully ionised gas, the textbook Thomson value (e.g. Carroll & Ostlie
@@ -49,6 +54,7 @@ class AnalyticOpacityTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void electronScatteringCorrectionMatchesPublishedFit() {
         // Buchler & Yueh (1976) fit as given by Paczynski (1983), from memory:
@@ -63,6 +69,7 @@ class AnalyticOpacityTest {
         assertEquals(0.79, ratio, 0.02);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void kramersConstantsMatchCarrollOstlie() {
         // Carroll & Ostlie (1996, p. 274): kappa_bf = 4.34e25 (g/t) Z (1+X) rho T^-3.5 and
@@ -72,12 +79,14 @@ class AnalyticOpacityTest {
         assertRel(0.019388, Kramers.freeFree(1e7, 1.0, 0.7, 0.02, 1.0), 1e-4, "free-free");
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void hMinusMatchesHansenKawalerTrimble() {
         // Hansen, Kawaler & Trimble (2004): kappa_H- = 2.5e-31 (Z/0.02) rho^1/2 T^9; rho = 1e-7, T = 5000 K gives 0.15441.
         assertRel(0.15441, HMinus.kappa(5000, 1e-7, 0.02), 1e-4, "H-minus");
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void conductionCoefficientIsTheWiedemannFranzLorentzGasValue() {
         // Wiedemann-Franz for degenerate electrons, lambda = (pi^2/3) n_e k^2 T tau / m_e, with the Lorentz-gas
@@ -124,6 +133,7 @@ class AnalyticOpacityTest {
                 what + ": " + actual + " cm^2/g, expected " + expected + " within a factor " + factor);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void calibrationAnchorSolarCentre() {
         // CALIBRATION ANCHOR, not an independent check: T_A was chosen so that the composite gives 1.25 cm^2/g here,
@@ -133,6 +143,7 @@ class AnalyticOpacityTest {
         assertRel(1.25, kappa(1.57e7, 150, 0.34, 0.02), 0.01, "solar centre");
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void heldOutBaseOfTheSolarConvectionZone() {
         // Held out. At the base of the solar convection zone (helioseismic r = 0.713 R_sun, Christensen-Dalsgaard,
@@ -152,6 +163,7 @@ class AnalyticOpacityTest {
         assertWithinFactor(expected, kappa(t, rho, 0.74, 0.02), 1.5, "base of the solar convection zone");
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void heldOutOneMillionKelvin() {
         // Held out. T = 1e6 K, rho = 0.1 g/cm^3 (log R = -1), X = 0.7, Z = 0.02: ~150 cm^2/g in tabulated Rosseland
@@ -159,6 +171,7 @@ class AnalyticOpacityTest {
         assertWithinFactor(150, kappa(1e6, 0.1, 0.7, 0.02), 1.5, "1 MK");
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void heldOutPhotosphereIsWithinAFactorThree() {
         // Held out, and a known weakness. Near the solar photosphere (T = 5800 K, rho = 3e-7 g/cm^3, X = 0.7,
@@ -168,6 +181,7 @@ class AnalyticOpacityTest {
         assertWithinFactor(0.4, kappa(5800, 3e-7, 0.7, 0.02), 3, "photosphere");
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void guillotineFactorHasBothPhysicalLimits() {
         // Kramers regime: t = 1 (the published law) while the light metals keep their K-shell electrons; with the
@@ -186,18 +200,20 @@ class AnalyticOpacityTest {
         }
     }
 
+    @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 300, seed = "20261203")
-    void defaultDerivativesMatchCentralDifferences(@ForAll @DoubleRange(min = 3.3, max = 9.0) double logT,
-                                                   @ForAll @DoubleRange(min = -12, max = 8) double logRho,
-                                                   @ForAll @DoubleRange(min = 0, max = 1) double x,
-                                                   @ForAll @DoubleRange(min = 0, max = 0.1) double zFrac) {
+    void defaultDerivativesMatchCentralDifferences(@ForAll @Scale(9) @DoubleRange(min = 3.3, max = 9.0) double logT,
+                                                   @ForAll @Scale(9) @DoubleRange(min = -12, max = 8) double logRho,
+                                                   @ForAll @Scale(9) @DoubleRange(min = 0, max = 1) double x,
+                                                   @ForAll @Scale(9) @DoubleRange(min = 0, max = 0.1) double zFrac) {
         assertDerivativesMatch(AnalyticOpacity.DEFAULT, logT, logRho, x, zFrac * (1 - x));
     }
 
+    @net.jqwik.api.Tag(CheckKind.EXTERNAL)
     @Property(tries = 300, seed = "20261204")
-    void conductionIsNegligibleInNonDegenerateGas(@ForAll @DoubleRange(min = 0, max = 1) double u,
-                                                  @ForAll @DoubleRange(min = 0, max = 1) double v,
-                                                  @ForAll @DoubleRange(min = 0, max = 3.99) double box) {
+    void conductionIsNegligibleInNonDegenerateGas(@ForAll @Scale(9) @DoubleRange(min = 0, max = 1) double u,
+                                                  @ForAll @Scale(9) @DoubleRange(min = 0, max = 1) double v,
+                                                  @ForAll @Scale(9) @DoubleRange(min = 0, max = 3.99) double box) {
         // Conduction matters only where electrons are degenerate, rho / mu_e > ~2.4e-8 T^3/2 (Hansen, Kawaler &
         // Trimble 2004 §3.5, from memory). The four boxes of the Conduction javadoc lie at least 5x below that
         // density; there the stand-in conductive term must take < 1 % of 1/kappa.
@@ -211,6 +227,7 @@ class AnalyticOpacityTest {
         assertTrue(share < 0.01, "conduction share " + share + " at T = " + t + ", rho = " + rho);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void kramersSlopesWhereFreeFreeDominates() {
         // Kramers' law kappa ~ rho T^-3.5 (Carroll & Ostlie 1996): d ln kappa/d ln rho = 1, d ln kappa/d ln T = -3.5.
@@ -227,6 +244,7 @@ class AnalyticOpacityTest {
         assertEquals(-3.5, r.dLnKappaDLnT, 3e-3 * 3.5);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void hMinusSlopesWhereItDominates() {
         // kappa_H- ~ rho^1/2 T^9 (Hansen, Kawaler & Trimble 2004). At T = 6000 K, rho = 1e-7, X = 0.7,
@@ -239,6 +257,7 @@ class AnalyticOpacityTest {
         assertRel(HMinus.kappa(6000, 1e-7, 0.02), r.kappa, 0.005, "kappa");
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void conductionDominatesInDegenerateMatter() {
         // kappa_cd ~ (T/rho)^2 (Hansen, Kawaler & Trimble 2004): at rho = 1e8, T = 1e7 (white-dwarf core)
@@ -249,11 +268,12 @@ class AnalyticOpacityTest {
         assertEquals(2.0, r.dLnKappaDLnT, 1e-3);
     }
 
+    @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 300, seed = "20261201")
-    void derivativesMatchCentralDifferences(@ForAll @DoubleRange(min = 3.3, max = 9.0) double logT,
-                                            @ForAll @DoubleRange(min = -12, max = 8) double logRho,
-                                            @ForAll @DoubleRange(min = 0, max = 1) double x,
-                                            @ForAll @DoubleRange(min = 0, max = 0.1) double zFrac) {
+    void derivativesMatchCentralDifferences(@ForAll @Scale(9) @DoubleRange(min = 3.3, max = 9.0) double logT,
+                                            @ForAll @Scale(9) @DoubleRange(min = -12, max = 8) double logRho,
+                                            @ForAll @Scale(9) @DoubleRange(min = 0, max = 1) double x,
+                                            @ForAll @Scale(9) @DoubleRange(min = 0, max = 0.1) double zFrac) {
         assertDerivativesMatch(MODEL, logT, logRho, x, zFrac * (1 - x));
     }
 
@@ -275,9 +295,10 @@ class AnalyticOpacityTest {
         assertEquals(fdT, r.dLnKappaDLnT, 1e-6 * Math.max(1, Math.abs(fdT)), "d ln kappa / d ln T");
     }
 
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 300, seed = "20261202")
-    void conductionAndRadiationNeverExceedEither(@ForAll @DoubleRange(min = 3.3, max = 9.0) double logT,
-                                                 @ForAll @DoubleRange(min = -12, max = 9) double logRho) {
+    void conductionAndRadiationNeverExceedEither(@ForAll @Scale(9) @DoubleRange(min = 3.3, max = 9.0) double logT,
+                                                 @ForAll @Scale(9) @DoubleRange(min = -12, max = 9) double logRho) {
         // Fluxes add, so 1/kappa = 1/kappa_rad + 1/kappa_cd: kappa is below kappa_cd (HKT 2004 §4.5).
         double t = Math.pow(10, logT);
         double rho = Math.pow(10, logRho);
@@ -288,6 +309,7 @@ class AnalyticOpacityTest {
         assertTrue(r.kappa > 0 && Double.isFinite(r.kappa));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void refusesBadInputNamingTheField() {
         OpacityResult r = new OpacityResult();
@@ -302,6 +324,7 @@ class AnalyticOpacityTest {
         assertThrows(InvalidInputException.class, () -> new AnalyticOpacity(-1, 1));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void guillotineOptionTakesTheLawOrAConstant() {
         assertEquals(AnalyticOpacity.DEFAULT.toString(), AnalyticOpacity.fromOptions(ModelOptions.defaults()).toString());

@@ -1,5 +1,7 @@
 package io.github.startransport.core.opacity;
 
+import io.github.startransport.core.checks.CheckKind;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.SplittableRandom;
@@ -10,6 +12,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /** The O(1) interval search on evenly spaced axes against the plain binary search (common practice, no source). */
 class AxisLocateTest {
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void evenAxesAreRecognisedAndUnevenOnesAreNot() {
         assertTrue(OpacityGrid.inverseStep(Grids.uniform(3.5, 8.5, 101)) > 0);
@@ -19,6 +22,7 @@ class AxisLocateTest {
         assertEquals(0.0, OpacityGrid.inverseStep(new double[] {0.0, 1.0, 2.0, 3.5}));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void sameIntervalAsBinarySearchOnEvenAndUnevenAxes() {
         double[][] axes = {Grids.uniform(3.5, 8.5, 101), Grids.uniform(-9.0, 1.0, 81), Grids.uniform(0, 1, 2),

@@ -1,5 +1,6 @@
 package io.github.startransport.core.opacity;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.OpacityResult;
 import io.github.startransport.spi.OpacityStatus;
@@ -7,10 +8,12 @@ import io.github.startransport.spi.OutOfRangePolicy;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
+import net.jqwik.api.constraints.Scale;
 import net.jqwik.api.constraints.IntRange;
 import org.apache.commons.math3.analysis.BivariateFunction;
 import org.apache.commons.math3.analysis.interpolation.BicubicInterpolator;
 import org.apache.commons.math3.analysis.interpolation.PiecewiseBicubicSplineInterpolator;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -88,6 +91,7 @@ class InterpolationTest {
     /** A smooth analytic surface (not a polynomial) standing in for log kappa (log T in [4, 6], log R in [-4, 0]). */
     static final DoubleBinaryOperator SMOOTH = (x, y) -> Math.sin(1.7 * x) * Math.cos(1.3 * y) + 0.3 * Math.exp(0.4 * y) * x;
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void reproducesEveryNode() {
         double[] t = Grids.nonUniform(3.5, 8.0, 23, 1);
@@ -109,6 +113,7 @@ class InterpolationTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void exactForBicubicPolynomials() {
         for (long seed = 10; seed < 14; seed++) {
@@ -133,6 +138,7 @@ class InterpolationTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void extrapolationContinuesTheEdgeCellAndClampZeroesDerivatives() {
         Bicubic p = new Bicubic(42);
@@ -169,6 +175,7 @@ class InterpolationTest {
         return max;
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void convergesAtFourthOrderUnderRefinement() {
         // Bicubic Hermite with exact slopes errs by O(h^4) (constant f^(4)/384, tiny here); our slopes carry
@@ -185,6 +192,7 @@ class InterpolationTest {
         assertTrue(order2 > 3.7 && order2 < 6, "observed order " + order2 + " (" + e2 + " -> " + e3 + ")");
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void agreesWithCommonsMathBicubicInterpolators() {
         // Same grid (h = 0.05 in log T, 0.1 in log R) and data for three schemes:
@@ -228,6 +236,7 @@ class InterpolationTest {
                 "max errors: ours " + errOurs + ", bicubic " + errBicubic + ", akima " + errAkima);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void noOvershootAtASteepEdge() {
         // A step of 4 dex between two log T nodes, flat on both sides (the shape of an ionisation edge).
@@ -249,9 +258,10 @@ class InterpolationTest {
         assertEquals(0.0, HermiteSlopes.slopes(t, vals)[4]);
     }
 
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 300, seed = "20261203")
     void valueAndDerivativesContinuousAcrossSeams(@ForAll @IntRange(min = 1, max = 9) int seam,
-                                                 @ForAll @DoubleRange(min = 0, max = 1) double along,
+                                                 @ForAll @Scale(9) @DoubleRange(min = 0, max = 1) double along,
                                                  @ForAll boolean alongLogT,
                                                  @ForAll @IntRange(min = 0, max = 1000) int dataSeed) {
         double[] t = Grids.nonUniform(3.5, 6.0, 11, 1000 + dataSeed);
@@ -283,9 +293,10 @@ class InterpolationTest {
         assertEquals(lo.dLnKappaDLnRho, hi.dLnKappaDLnRho, scale * 10, "d/d log R");
     }
 
+    @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 200, seed = "20261204")
-    void derivativesMatchCentralDifferences(@ForAll @DoubleRange(min = 3.8, max = 7.8) double logT,
-                                            @ForAll @DoubleRange(min = -7.5, max = 0.5) double logR) {
+    void derivativesMatchCentralDifferences(@ForAll @Scale(9) @DoubleRange(min = 3.8, max = 7.8) double logT,
+                                            @ForAll @Scale(9) @DoubleRange(min = -7.5, max = 0.5) double logR) {
         // The demo table; derivatives with respect to ln rho and ln T against central differences.
         TabulatedOpacity model = new TabulatedOpacity(DemoTable.set(), OutOfRangePolicy.REFUSE);
         double t = Math.pow(10, logT);
@@ -305,6 +316,7 @@ class InterpolationTest {
         assertEquals(fdT, r.dLnKappaDLnT, 1e-6 * Math.max(1, Math.abs(fdT)));
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void compositionBlendIsExactForQuadratics() {
         // log kappa = c(x, y) + q(X, Z) with q quadratic in X and Z (cross term included): the blended
@@ -342,6 +354,7 @@ class InterpolationTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void fastAndGeneralPathsAgree() {
         double[] t = Grids.nonUniform(3.5, 8.0, 15, 11);
@@ -369,6 +382,7 @@ class InterpolationTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void demoTableInterpolatesTheAnalyticModel() {
         // The demo table: h = 0.05 dex in log T, 0.125 dex in log R, Z in {0.01, 0.02, 0.04}.
@@ -407,6 +421,7 @@ class InterpolationTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void eightThreadsGiveBitIdenticalResults() throws Exception {
         TabulatedOpacity model = new TabulatedOpacity(DemoTable.set(), OutOfRangePolicy.EXTRAPOLATE);
@@ -457,6 +472,7 @@ class InterpolationTest {
         return out;
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void memoryIsFourDoublesPerNode() {
         OpacityTableSet set = DemoTable.set();

@@ -1,5 +1,6 @@
 package io.github.startransport.core.opacity;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.DataFormatException;
 import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelOptions;
@@ -11,6 +12,7 @@ import io.github.startransport.spi.OpacityTableSummary;
 import io.github.startransport.spi.OpacityTableTool;
 import io.github.startransport.spi.OutOfRangePolicy;
 import io.github.startransport.spi.Transport;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -45,6 +47,7 @@ class OpacityTableReaderTest {
         assertTrue(e.reason().contains(reasonPart), e.getMessage());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void readsAGoodFile() {
         OpacityTableSet set = OpacityTableReader.parse(GOOD, "t.csv");
@@ -55,18 +58,21 @@ class OpacityTableReaderTest {
         assertEquals(0.6, Math.log10(r.kappa), 1e-12);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void wrongHeader() {
         assertRefused("# c\nX,Z,logT,log_R,log_kappa\n0.7,0.02,4,-3,1\n", 2, 5, "wrong header");
         assertRefused("X,Z,log_T,log_R\n", 1, 16, "wrong header");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void nonNumericValue() {
         assertRefused(HEADER + "0.7,0.02,4.0,abc,1.0\n", 2, 14, "log_R is not a number");
         assertRefused(HEADER + "0.7,0.02,4.0,-3.0,1.0d\n", 2, 19, "log_kappa is not a number");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void nonFiniteValue() {
         assertRefused(HEADER + "0.7,0.02,4.0,-3.0,NaN\n", 2, 19, "log_kappa is not finite");
@@ -74,18 +80,21 @@ class OpacityTableReaderTest {
         assertRefused(HEADER + "0.7,0.02,4.0,-3.0,1e400\n", 2, 19, "not finite");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void wrongFieldCount() {
         assertRefused(HEADER + "0.7,0.02,4.0,-3.0\n", 2, 18, "too few fields");
         assertRefused(HEADER + "0.7,0.02,4.0,-3.0,1,2\n", 2, 21, "too many fields");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void duplicatePoint() {
         assertRefused(GOOD + "0.7,0.02,4.5,-2.5,0.9\n", 9, 1, "duplicate point");
         assertTrue(refused(GOOD + "0.7,0.02,4.5,-2.5,0.9\n").reason().contains("line 7"));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void notRectangular() {
         String missing = GOOD.replace("0.7,0.02,4.5,-2.5,0.6\n", "");
@@ -94,12 +103,14 @@ class OpacityTableReaderTest {
         assertTrue(refused(missing).reason().contains("log_R=-2.5"));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void singlePointAxis() {
         assertRefused(HEADER + "0.7,0.02,4.0,-3.0,1\n0.7,0.02,4.0,-2.0,1\n", 2, 10, "single log_T value");
         assertRefused(HEADER + "0.7,0.02,4.0,-3.0,1\n0.7,0.02,4.5,-3.0,1\n", 2, 14, "single log_R value");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void impossibleComposition() {
         assertRefused(HEADER + "0.9,0.2,4.0,-3.0,1\n", 2, 5, "exceeds 1");
@@ -107,12 +118,14 @@ class OpacityTableReaderTest {
         assertRefused(HEADER + "0.7,-0.02,4.0,-3.0,1\n", 2, 5, "Z = -0.02 is negative");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void missingHeaderOrRows() {
         assertRefused("# only comments\n", 0, 0, "no header");
         assertRefused("# c\n" + HEADER, 0, 0, "no data rows");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void declaredHolesAreAllowedAndOutOfRange() {
         // 3 x 4 grid without its high-T, high-R corner, declared
@@ -139,6 +152,7 @@ class OpacityTableReaderTest {
         assertEquals(OpacityStatus.EXTRAPOLATED, r.status);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void undeclaredHoleAndBadDeclarations() {
         String body = HEADER + "0.7,0.02,4.0,-3.0,1.0\n0.7,0.02,4.0,-2.0,1.1\n0.7,0.02,4.5,-3.0,0.5\n";
@@ -151,6 +165,7 @@ class OpacityTableReaderTest {
         assertRefused("# absent: X=0.7 Y=0.28 log_T=4.5 log_R=-2\n" + body, 1, 17, "not 'Y'");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aRowSlightlyOffTheGridIsNamedAsSuch() {
         // the case: one log_R off by 1e-12 (line 7, the 5th data row; log_R starts at column 14)
@@ -161,6 +176,7 @@ class OpacityTableReaderTest {
         assertRefused(offT, 6, 10, "log_T=4.500000000001 is off the grid");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aMissingNodeIsNamedAtItsNeighbour() {
         String missing = GOOD.replace("0.7,0.02,4.5,-2.0,0.7\n", "");
@@ -168,6 +184,7 @@ class OpacityTableReaderTest {
         assertRefused(missing, 7, 14, "no row for log_T=4.5, log_R=-2.0");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void fortyThousandSingleNodeHolesAreRead() {
         // log_T 0..400 x log_R 0..200; the nodes with log_T >= 201 and odd log_R are absent, each declared
@@ -196,6 +213,7 @@ class OpacityTableReaderTest {
         assertTrue(refused(undeclared).reason().contains("no row for log_T=300.0, log_R=4.0"));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void builderWritesRectanglesOfRefusedNodesAsRanges() {
         // a model that refuses two blocks: log_T > 5 with log_R > -2, and log_T < 4.2 with log_R < -5
@@ -219,6 +237,7 @@ class OpacityTableReaderTest {
         assertEquals(2 * 21 * 21 - refusedNodes, set.tabulatedValues());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aTooLargeGridIsRefusedBeforeAnythingIsWritten() {
         // the grid: 2300 x 2200 log T, log R nodes, 9 compositions (45.5 million nodes; 48 * that overflows an int)
@@ -232,6 +251,7 @@ class OpacityTableReaderTest {
         assertEquals(0, text.length());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void builderRoundTripIsExactAtNodes() {
         OpacityGridSpec grid = new OpacityGridSpec(new double[] {0.0, 0.7}, new double[] {0.02},
@@ -250,6 +270,7 @@ class OpacityTableReaderTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void builderWritesRefusedNodesAsHoles() {
         // a table model that refuses outside its range, tabulated on a wider grid
@@ -262,6 +283,7 @@ class OpacityTableReaderTest {
         assertEquals(6, set.tabulatedValues());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void toolThroughTheContractBuildsAndChecks(@TempDir Path dir) throws Exception {
         Transport transport = Transport.discover();

@@ -1,5 +1,7 @@
 package io.github.startransport.core.opacity;
 
+import io.github.startransport.core.checks.CheckKind;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.lang.reflect.Field;
@@ -71,6 +73,7 @@ class TableMemoryTest {
         return n;
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void demoSetHoldsFourDoublesPerValueAndOneCopyOfTheNodes() throws IllegalAccessException {
         OpacityTableSet set = DemoTable.set();
@@ -87,6 +90,7 @@ class TableMemoryTest {
         assertTrue(held >= set.heldDoubles(), "own accounting " + set.heldDoubles() + " above the measured " + held);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aSetOfTablesWithOwnAxesHoldsEachTableOnce() throws IllegalAccessException {
         // the general path: tables on different axes, each keeps its own node data

@@ -1,5 +1,6 @@
 package io.github.startransport.core.profile;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.model.DemoStar;
 import io.github.startransport.spi.DiagnosisColumn;
 import io.github.startransport.spi.InvalidOptionException;
@@ -10,6 +11,7 @@ import io.github.startransport.spi.ProfileDiagnosis;
 import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Region;
 import io.github.startransport.spi.Transport;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;
@@ -35,6 +37,7 @@ class ConvectiveEdgesTest {
         return d.regions().stream().filter(r -> r.regime() == Regime.CONVECTIVE).toList();
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void withoutOvershootTheColumnIsZeroAndNoReachIsReported() {
         ProfileDiagnosis d = diagnose(LocalDiagnosis.INSTANCE, new DemoStar(400).profile(), "schwarzschild");
@@ -46,6 +49,7 @@ class ConvectiveEdgesTest {
         }
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void exponentialOvershootMixesBeyondBothInnerEdgesAndOnlyRaisesDMix() {
         Profile star = new DemoStar(800).profile();
@@ -94,6 +98,7 @@ class ConvectiveEdgesTest {
         assertTrue(depth > 0.1 && depth < 0.4, "overshoot depth " + depth + " H");
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void stepOvershootGoesAlphaHBeyondTheCoreWithHLimitedByTheCoreRadius() {
         Profile star = new DemoStar(800).profile();
@@ -110,6 +115,7 @@ class ConvectiveEdgesTest {
         assertEquals(top + 0.2 * h, core.overshootTop().orElseThrow(), 1e-9 * top);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void overshootOptionsAreCheckedWhenTheDiagnoserIsCreated() {
         assertThrows(InvalidOptionException.class,
@@ -122,6 +128,7 @@ class ConvectiveEdgesTest {
                 () -> TRANSPORT.diagnoser(null, ModelOptions.parse("overshot-f=0.016")));
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void smoothProfileEdgesAreSelfConsistentAndConvergeToZeroMargin() {
         // Gabriel et al. (2014): with no composition jump the criterion is marginal at the edge, so the
@@ -150,6 +157,7 @@ class ConvectiveEdgesTest {
         }
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void aCompositionStepAtTheCoresEdgeIsReportedAsMisplacedUnderLedoux() {
         Profile smooth = new DemoStar(800).profile();
@@ -180,6 +188,7 @@ class ConvectiveEdgesTest {
         assertTrue(Math.abs(plain) < BoundaryMargins.MISPLACED, "Schwarzschild margin " + plain);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void hostsGetTheSameOvershootThroughTheBatchCall() {
         Profile star = new DemoStar(600).profile();
@@ -200,6 +209,7 @@ class ConvectiveEdgesTest {
         assertTrue(Double.isNaN(reachBottom[0]) && Double.isNaN(reachTop[1]));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void withTheEdgeDistanceAsLengthScaleEachConvectiveZoneGetsItsDistanceToTheNearestInnerEdge() {
         Profile star = new DemoStar(600).profile();

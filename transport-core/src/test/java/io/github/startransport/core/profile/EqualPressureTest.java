@@ -1,11 +1,13 @@
 package io.github.startransport.core.profile;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.model.DemoStar;
 import io.github.startransport.spi.DiagnosisColumn;
 import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
 import io.github.startransport.spi.ProfileDiagnosis;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.Map;
@@ -29,6 +31,7 @@ class EqualPressureTest {
         return cols;
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void equalPressureWithTheSameCompositionIsAcceptedWithNablaMuZero() {
         int k = 300;
@@ -42,6 +45,7 @@ class EqualPressureTest {
         assertTrue(d.warnings().stream().anyMatch(w -> w.contains("could not be computed")), d.warnings().toString());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aCompositionChangeAcrossEqualPressureIsRefusedNamingTheZone() {
         int k = 300;
@@ -57,6 +61,7 @@ class EqualPressureTest {
         assertTrue(e.requirement().contains("another X or Z"), e.getMessage());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void pressureRisingOutwardsIsStillRefused() {
         int k = 300;
@@ -65,8 +70,10 @@ class EqualPressureTest {
         InvalidInputException e = assertThrows(InvalidInputException.class,
                 () -> LocalDiagnosisTest.diagnose(new Profile("rising P", cols), "ledoux"));
         assertEquals(k, e.zone());
+        assertEquals(ProfileColumn.PRESSURE.header(), e.field());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aZoneBetweenTwoEqualPressurePairsAndAnEndZoneOfOneGetZero() {
         // direct kernel: pairs (0, 1) and (2, 3), (3, 4) have equal P and equal composition

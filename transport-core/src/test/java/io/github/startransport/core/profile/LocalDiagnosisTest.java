@@ -1,5 +1,6 @@
 package io.github.startransport.core.profile;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Iau2015;
 import io.github.startransport.core.model.DemoStar;
 import io.github.startransport.spi.DiagnosisColumn;
@@ -15,6 +16,7 @@ import io.github.startransport.spi.Transport;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.IntRange;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.Arrays;
@@ -51,6 +53,7 @@ class LocalDiagnosisTest {
         return m;
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void demoStarHasAConvectiveCoreAndAConvectiveEnvelope() {
         ProfileDiagnosis d = diagnose(new DemoStar(800).profile(), "schwarzschild");
@@ -64,6 +67,7 @@ class LocalDiagnosisTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void photonDiffusionTimeOfTheDemoStarIsInTheRangeQuotedForSunLikeStars() {
         // "thousands to hundreds of thousands of years" for a Sun-like star: ~1.7e5 yr for the Sun
@@ -76,6 +80,7 @@ class LocalDiagnosisTest {
         assertTrue(d.timescales().thermalDiffusion() > 10 * d.timescales().photonDiffusion());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void reversingTheZoneOrderChangesNothing() {
         Profile forward = new DemoStar(500).profile();
@@ -108,6 +113,7 @@ class LocalDiagnosisTest {
         return new Profile("step", cols);
     }
 
+    @Tag(CheckKind.LAW)
     @Test
     void aCompositionStepIsSemiconvectiveUnderLedouxAndConvectiveUnderSchwarzschild() {
         Profile smooth = new DemoStar(800).profile();
@@ -145,6 +151,7 @@ class LocalDiagnosisTest {
      * ({@link io.github.startransport.core.gradient.StabilityClassifier}); the convective region's edges
      * lie where nabla_rad - nabla_L changes sign.
      */
+    @Tag(CheckKind.LAW)
     @Test
     void anInvertedCompositionStepConvectsUnderBothCriteria() {
         Profile smooth = new DemoStar(800).profile();
@@ -196,6 +203,7 @@ class LocalDiagnosisTest {
         assertEquals(r[b] + (r[b + 1] - r[b]) * g0 / (g0 - g1), step.topRadius(), 1e-9 * r[b]);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void resamplingConvergesAtSecondOrder() {
         // boundary by linear interpolation and trapezoidal integrals: error O(h^2) expected (common practice)
@@ -217,6 +225,7 @@ class LocalDiagnosisTest {
         assertEquals(photon[3], photon[2], 1e-4 * photon[3]);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void turnoverTimesConvergeWithResolution() {
         // A converged quantity changes by less than 1 % when the zones are doubled (common practice, no source).
@@ -249,6 +258,7 @@ class LocalDiagnosisTest {
         }
     }
 
+    @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 8, seed = "503")
     void regionsDoNotDependOnTheZoneCountBeyondDiscretisation(@ForAll @IntRange(min = 300, max = 2500) int n) {
         ProfileDiagnosis ref = diagnose(new DemoStar(3000).profile(), "schwarzschild");
@@ -265,6 +275,7 @@ class LocalDiagnosisTest {
                 1e-2 * ref.timescales().photonDiffusion());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void fallbackThermodynamicsAndItsLimitsAreReported() {
         ProfileDiagnosis d = diagnose(new DemoStar(300).profile(), "schwarzschild");
@@ -293,6 +304,7 @@ class LocalDiagnosisTest {
         return assertThrows(InvalidInputException.class, () -> new Profile("bad", cols));
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void nonMonotonicRadiusIsRefusedWithZoneAndColumn() {
         Map<ProfileColumn, double[]> cols = small();
@@ -302,6 +314,7 @@ class LocalDiagnosisTest {
         assertEquals(7, e.zone());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void nonMonotonicMassIsRefusedWithZoneAndColumn() {
         Map<ProfileColumn, double[]> cols = small();
@@ -311,6 +324,7 @@ class LocalDiagnosisTest {
         assertEquals(9, e.zone());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void duplicateZoneIsRefused() {
         Map<ProfileColumn, double[]> cols = small();
@@ -323,6 +337,7 @@ class LocalDiagnosisTest {
         assertTrue(e.getMessage().contains("duplicate"), e.getMessage());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void nonFiniteValueIsRefusedWithZoneAndColumn() {
         Map<ProfileColumn, double[]> cols = small();
@@ -337,6 +352,7 @@ class LocalDiagnosisTest {
         assertEquals(2, e.zone());
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void zoneIndexRefersToTheOrderGiven() {
         Map<ProfileColumn, double[]> cols = small();

@@ -1,5 +1,6 @@
 package io.github.startransport.core.profile;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.model.DemoStar;
 import io.github.startransport.spi.ConvectionModel;
 import io.github.startransport.spi.ConvectionResult;
@@ -13,6 +14,7 @@ import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.Region;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.Map;
@@ -23,6 +25,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /** The profile's own gradient nabla_model against the transport physics' nabla. */
 class ModelConsistencyTest {
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void stencilIsExactForQuadraticsInLnP() {
         // The three-point formulas (centred inside, one-sided at the ends) are exact for quadratics
@@ -58,6 +61,7 @@ class ModelConsistencyTest {
         assertTrue(Double.isFinite(out[4]));
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void demoStarIsAnNEquals3PolytropeAndItsConvectiveZonesAreInconsistent() {
         // Eddington's standard model: T ~ theta, P ~ theta^4, so d ln T / d ln P = 1/4 exactly everywhere
@@ -96,6 +100,7 @@ class ModelConsistencyTest {
         assertEquals(Regime.CONVECTIVE, regimes[core.firstZone()]);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void aProfileBuiltFromThePhysicsOwnGradientIsConsistent() {
         // Keep the demo star's r, m, rho, P, L, X, Z and rebuild T by integrating d ln T / d ln P = nabla, with

@@ -1,5 +1,6 @@
 package io.github.startransport.core.seismic;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.spi.BuoyancyModel;
 import io.github.startransport.spi.BuoyancyResult;
@@ -8,6 +9,7 @@ import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.Transport;
 import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneState;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -30,6 +32,7 @@ class LocalBuoyancyTest {
         return z;
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void discoveredModelGivesTheLocalFrequencies() {
         BuoyancyModel m = Transport.discover().buoyancy(null, ModelOptions.defaults());
@@ -48,6 +51,7 @@ class LocalBuoyancyTest {
         assertEquals(0.0, out.dBuoyancySquared[ZoneInput.T], 0.0);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void refusesBadInputNamingFieldAndZone() {
         ZoneState z = zone();

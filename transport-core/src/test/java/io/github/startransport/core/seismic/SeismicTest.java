@@ -1,5 +1,6 @@
 package io.github.startransport.core.seismic;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.constants.Iau2015;
 import io.github.startransport.core.model.DemoStar;
@@ -17,6 +18,7 @@ import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Scale;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -45,6 +47,7 @@ class SeismicTest {
      * variables as in Chandrasekhar 1939, ch. IV). For n = 3/2 and Gamma_1 = 5/3 it vanishes: the
      * polytrope is isentropic, nabla = nabla_ad.
      */
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void polytropeBuoyancyFrequencyIsAnalytic() {
         for (double n : new double[] {1.5, 3.0, 4.0}) {
@@ -77,6 +80,7 @@ class SeismicTest {
     }
 
     /** Each entry of the N^2 Jacobian equals a central difference (common practice, no source). */
+    @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 200, seed = "1406")
     void buoyancyJacobianMatchesCentralDifferences(
             @ForAll @Scale(9) @DoubleRange(min = 8, max = 12) double logR,
@@ -119,6 +123,7 @@ class SeismicTest {
      * the period spacing as its inverse (Kjeldsen &amp; Bedding 1995 for the Delta nu scaling; homology,
      * Kippenhahn, Weigert &amp; Weiss 2012 §20, from memory).
      */
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 60, seed = "1407")
     void largeSeparationScalesAsRootOfMeanDensity(@ForAll @Scale(9) @DoubleRange(min = 0.1, max = 10) double a,
                                                   @ForAll @Scale(9) @DoubleRange(min = 0.1, max = 10) double b) {
@@ -162,6 +167,7 @@ class SeismicTest {
     }
 
     /** Uniform and linear 1/c_s: the integrals are exact (trapezoids integrate linear functions exactly). */
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void acousticIntegralsOfSimpleProfiles() {
         int n = 101;
@@ -198,6 +204,7 @@ class SeismicTest {
      * is limited by r), so N^2 / (g^2 rho / P) there must be below 1e-3, against ~0.1 in the radiative
      * zone above (nabla_ad - nabla_rad).
      */
+    @Tag(CheckKind.LAW)
     @Test
     void buoyancyVanishesInTheConvectiveCore() {
         ProfileDiagnosis d = DEMO;
@@ -232,6 +239,7 @@ class SeismicTest {
      * so its envelope is slower than the Sun's convective, n ~ 3/2 one by up to sqrt(4 / 2.5) = 1.26
      * where the outer layers dominate tau. So Delta nu must lie below 135 microhertz, within 10 %.
      */
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void sunLikeModelHasALargeSeparationNearTheSolarValue() {
         EddingtonStandardModel sun = new EddingtonStandardModel(Iau2015.SOLAR_MASS, Iau2015.SOLAR_RADIUS,

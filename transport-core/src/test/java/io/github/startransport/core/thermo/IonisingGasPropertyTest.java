@@ -1,5 +1,6 @@
 package io.github.startransport.core.thermo;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ZoneInput;
@@ -9,6 +10,7 @@ import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
 import net.jqwik.api.constraints.Scale;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import java.util.ArrayList;
@@ -41,6 +43,7 @@ class IonisingGasPropertyTest {
     }
 
     /** Every derivative equals a central difference (common practice, no source). */
+    @net.jqwik.api.Tag(CheckKind.INTERNAL)
     @Property(tries = 300, seed = "1401")
     void derivativesMatchCentralDifferences(@ForAll @Scale(9) @DoubleRange(min = 3.7, max = 8.5) double logT,
                                             @ForAll @Scale(9) @DoubleRange(min = -10, max = 1) double logRho,
@@ -80,6 +83,7 @@ class IonisingGasPropertyTest {
      * c_V = (du/dT)_rho and rho (du/drho)_T = (P / rho)(1 - chi_T) (Cox &amp; Giuli 1968, ch. 9, from
      * memory); holds only if the pressure-ionisation term is thermodynamically consistent.
      */
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 200, seed = "1402")
     void energyAndPressureAreThermodynamicallyConsistent(
             @ForAll @Scale(9) @DoubleRange(min = 3.7, max = 8.0) double logT,
@@ -106,6 +110,7 @@ class IonisingGasPropertyTest {
      * c_P from the enthalpy at constant pressure (Cox &amp; Giuli 1968, ch. 9; Kippenhahn, Weigert &amp;
      * Weiss 2012, §4.1, from memory).
      */
+    @net.jqwik.api.Tag(CheckKind.LAW)
     @Property(tries = 120, seed = "1403", maxDiscardRatio = 10)
     void adiabatsAndIdentities(@ForAll @Scale(9) @DoubleRange(min = 3.7, max = 8.0) double logT,
                                @ForAll @Scale(9) @DoubleRange(min = -10, max = 0) double logRho) {
@@ -164,6 +169,7 @@ class IonisingGasPropertyTest {
     }
 
     /** Our bounded Newton solve finds the root Commons Math's BrentSolver finds (independent library). */
+    @net.jqwik.api.Tag(CheckKind.EXTERNAL)
     @Property(tries = 500, seed = "1404")
     void solveAgreesWithBrent(@ForAll @Scale(9) @DoubleRange(min = 3.3, max = 9) double logT,
                               @ForAll @Scale(9) @DoubleRange(min = -14, max = 4) double logRho,
@@ -173,9 +179,8 @@ class IonisingGasPropertyTest {
         double[] s = new double[SahaIonisation.SYSTEM_SIZE];
         SahaIonisation.chargeBalance(Math.pow(10, logT), Math.pow(10, logRho), x, z, s);
         double ours = SahaIonisation.electronsPerNucleus(s);
-        if (ours == 0.0) {
-            return; // counted neutral: checked by the sweep below
-        }
+        // counted neutral (no free electron at all) is checked by the sweep below
+        Assume.that(ours > 0.0);
         double lnRoot = new BrentSolver(1e-15, 1e-15).solve(1000, u -> {
             double e = Math.exp(u);
             double he = s[1] * (e * s[4] + 2 * s[4] * s[5]) / (e * e + e * s[4] + s[4] * s[5]);
@@ -185,6 +190,7 @@ class IonisingGasPropertyTest {
     }
 
     /** 1e2 to 1e10 K and any positive density: the solve never fails, nothing is NaN. */
+    @Tag(CheckKind.INTERNAL)
     @Test
     void solveNeverFailsFromAHundredKelvinToTenBillion() {
         double[] densities = new double[40];
@@ -227,6 +233,7 @@ class IonisingGasPropertyTest {
     }
 
     /** Eight threads over the same states give bit-identical results to one thread. */
+    @Tag(CheckKind.INTERNAL)
     @Test
     void concurrentCallsMatchSerialOnes() throws Exception {
         int n = 4000;

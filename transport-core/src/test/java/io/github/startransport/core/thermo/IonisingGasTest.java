@@ -1,11 +1,13 @@
 package io.github.startransport.core.thermo;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ZoneInput;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -29,6 +31,7 @@ class IonisingGasTest {
         return r;
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void hydrogenIsHalfIonisedNear9600KatAnElectronPressureOf200() {
         // Carroll & Ostlie, An Introduction to Modern Astrophysics, Example 8.1.4 (values from memory):
@@ -43,6 +46,7 @@ class IonisingGasTest {
         assertEquals(9600.0, t, 100.0);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void pureHydrogenFollowsTheSahaEquationInClosedForm() {
         // Saha (Kippenhahn, Weigert & Weiss 2012, eq. 14.4-14.5, numbers from memory):
@@ -58,6 +62,7 @@ class IonisingGasTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void ionisingHydrogenHasTheTextbookResponseFunctions() {
         // Kippenhahn, Weigert & Weiss 2012, §14.3 (from memory), pure hydrogen without radiation, with
@@ -78,6 +83,7 @@ class IonisingGasTest {
         }
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void neutralMonatomicGasLimit() {
         // an ideal monatomic gas: nabla_ad = 2/5, Gamma_1 = 5/3, c_P = 5/2 k/(mu m_u), delta = 1
@@ -95,6 +101,7 @@ class IonisingGasTest {
         assertEquals(0.0, m.pressureIonisation, 1e-5);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void fullyIonisedLimitIsTheIdealGasPlusRadiation() {
         // dense hot gas, ionised to 1e-13 (pressure ionisation takes the last bound states), compared
@@ -145,6 +152,7 @@ class IonisingGasTest {
         assertEquals(expected / value, actual / value, 1e-10, what);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void hydrogenIonisationZoneLowersNablaAdToAboutOneTenthAndGamma1() {
         // Kippenhahn, Weigert & Weiss 2012, §14.3-14.4 and their figure of nabla_ad against T for an
@@ -174,6 +182,7 @@ class IonisingGasTest {
         assertTrue(minHe > minGamma && minHe < 5.0 / 3.0 - 0.03, "He II dip of Gamma_1: " + minHe);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void refusesBadInputWithFieldAndZone() {
         ThermoResult r = new ThermoResult();
@@ -189,6 +198,7 @@ class IonisingGasTest {
         assertEquals("metals", e.field());
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void solarCentreIsFlaggedMildlyDegenerateAndPressureIonised() {
         // T = 1.57e7 K, rho = 150 g cm^-3, X = 0.34 (standard solar model centre, Bahcall et al., values

@@ -1,7 +1,9 @@
 package io.github.startransport.core.timescale;
 
+import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.constants.Iau2015;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -23,6 +25,7 @@ class TimescaleTest {
         return a;
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void photonDiffusionOfAUniformSphereIsKappaRhoRSquaredOverTwoC() {
         // random walk with mean free path l = 1/(kappa rho): t = R^2 / (2 l c) (Hansen, Kawaler & Trimble 2004 §1.3)
@@ -35,6 +38,7 @@ class TimescaleTest {
         assertEquals(closed, t, 1e-12 * closed);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void thermalDiffusionOfAUniformSphere() {
         // integral_0^R r / (3 chi) dr with chi = 4 a c T^3/(3 kappa rho^2 c_P) constant: R^2 / (6 chi)
@@ -52,6 +56,7 @@ class TimescaleTest {
         assertEquals(closed, t, 1e-12 * closed);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void kelvinHelmholtzTimeOfTheSunIsAboutThirtyMillionYears() {
         // ~3e7 yr for the Sun (Kippenhahn, Weigert & Weiss 2012 §3.3; Carroll & Ostlie 2007 §10.3; from memory)
@@ -60,6 +65,7 @@ class TimescaleTest {
         assertEquals(3.1e7, years, 0.2e7);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void globalTurnoverOfUniformVelocityIsThicknessOverVelocity() {
         // integral dr / v with v constant (definition)
@@ -70,6 +76,7 @@ class TimescaleTest {
         assertEquals((top - bottom) / 3e4, Timescale.turnoverGlobal(r, v, 4, 14, bottom, top), 1e-9);
     }
 
+    @Tag(CheckKind.EXTERNAL)
     @Test
     void localTurnoverIsMixingLengthOverVelocityHalfAMixingLengthAboveTheBase() {
         // Kim & Demarque (1996, ApJ 457, 340; from memory): tau_c = l / v half a mixing length above the base
@@ -94,6 +101,7 @@ class TimescaleTest {
         assertEquals(1.8e9 / (1e3 * mid / 1e8), Timescale.turnoverLocal(r, l, v, 3, 5, 2.2e9, 2.9e9), 1e-3);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void coreTurnoverIsRadiusOverMassWeightedVelocity() {
         // uniform v: r_top / v, the same as the integral of dr / v (definition)
@@ -114,6 +122,7 @@ class TimescaleTest {
         assertEquals(4e10 / mean, Timescale.turnoverCore(m, v, 19, 4e10, topMass), 1e-9 * 4e10 / mean);
     }
 
+    @Tag(CheckKind.INTERNAL)
     @Test
     void kelvinHelmholtzTimeIsUndefinedWhereTheStarLosesNoEnergy() {
         // t_KH = G M^2 / (R L) is the time the star's gravitational energy lasts at its luminosity

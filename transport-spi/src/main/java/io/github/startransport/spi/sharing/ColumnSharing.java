@@ -11,6 +11,7 @@ import io.github.startransport.spi.Timescales;
 
 import java.util.List;
 import java.util.Map;
+import java.util.function.IntToDoubleFunction;
 
 /**
  * Column access without copies, for the library's own diagnosis, so that a profile of millions
@@ -51,7 +52,32 @@ public final class ColumnSharing {
     public static ProfileDiagnosis adopt(String source, Criterion criterion, double alpha,
                                          Map<DiagnosisColumn, double[]> columns, Regime[] regimes,
                                          List<Region> regions, Timescales timescales, List<String> warnings) {
-        return Access.adopt(source, criterion, alpha, columns, regimes, regions, timescales, warnings);
+        return Access.adopt(source, criterion, alpha, columns, Map.of(), regimes, regions, timescales, warnings);
+    }
+
+    /**
+     * A diagnosis that takes the given arrays as they are, and computes some columns per zone
+     * instead of storing them.
+     *
+     * @param source     where the profile came from
+     * @param criterion  criterion the regimes were decided by
+     * @param alpha      mixing-length parameter used
+     * @param columns    the stored columns, each as long as {@code regimes}: arrays of the profile,
+     *                   or new arrays no one else keeps
+     * @param derived    every other {@link DiagnosisColumn}: a pure function of the zone index (0 to
+     *                   {@code regimes.length - 1}) over arrays no one writes, giving the value the
+     *                   diagnoser would have stored
+     * @param regimes    regime per zone (taken, not copied)
+     * @param regions    non-radiative regions, centre to surface
+     * @param timescales whole-star timescales
+     * @param warnings   warnings, one sentence each
+     * @return the diagnosis
+     */
+    public static ProfileDiagnosis adopt(String source, Criterion criterion, double alpha,
+                                         Map<DiagnosisColumn, double[]> columns,
+                                         Map<DiagnosisColumn, IntToDoubleFunction> derived, Regime[] regimes,
+                                         List<Region> regions, Timescales timescales, List<String> warnings) {
+        return Access.adopt(source, criterion, alpha, columns, derived, regimes, regions, timescales, warnings);
     }
 
     /** The bridge into the spi package's package-private members; set by {@code Profile}'s package. */
@@ -88,9 +114,11 @@ public final class ColumnSharing {
         }
 
         static ProfileDiagnosis adopt(String source, Criterion criterion, double alpha,
-                                      Map<DiagnosisColumn, double[]> columns, Regime[] regimes,
+                                      Map<DiagnosisColumn, double[]> columns,
+                                      Map<DiagnosisColumn, IntToDoubleFunction> derived, Regime[] regimes,
                                       List<Region> regions, Timescales timescales, List<String> warnings) {
-            return get().diagnosis(source, criterion, alpha, columns, regimes, regions, timescales, warnings);
+            return get().diagnosis(source, criterion, alpha, columns, derived, regimes, regions, timescales,
+                    warnings);
         }
 
         /**
@@ -105,6 +133,7 @@ public final class ColumnSharing {
          * @param criterion  criterion
          * @param alpha      alpha
          * @param columns    columns, taken
+         * @param derived    columns computed per zone
          * @param regimes    regimes, taken
          * @param regions    regions
          * @param timescales timescales
@@ -112,7 +141,9 @@ public final class ColumnSharing {
          * @return the diagnosis
          */
         protected abstract ProfileDiagnosis diagnosis(String source, Criterion criterion, double alpha,
-                                                      Map<DiagnosisColumn, double[]> columns, Regime[] regimes,
+                                                      Map<DiagnosisColumn, double[]> columns,
+                                                      Map<DiagnosisColumn, IntToDoubleFunction> derived,
+                                                      Regime[] regimes,
                                                       List<Region> regions, Timescales timescales,
                                                       List<String> warnings);
     }
