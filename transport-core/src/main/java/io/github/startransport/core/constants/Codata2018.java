@@ -53,8 +53,11 @@ public final class Codata2018 {
     public static final double ELECTRON_VOLT = 1.602176634e-12;
 
     /**
-     * Elementary charge in Gaussian units e = 4.803204712570263e-10 statC (exact: 1.602176634e-19 C
-     * times c / 10 in cgs, 1 C = c/10 statC with c in cm s^-1).
+     * Elementary charge in Gaussian units e = 4.803204712570263e-10 statC: 1.602176634e-19 C times c / 10
+     * in cgs (1 C = c/10 statC with c in cm s^-1). That conversion assumes mu_0 = 4 pi 1e-7 H/m, exact
+     * before the 2019 SI; since then mu_0 / (4 pi 1e-7) = 1.00000000055(15) (CODATA 2018) and the Gaussian
+     * charge sqrt(e^2 mu_0 c^2 / 4 pi) is larger than this value by 2.7e-10 relative, far below anything a
+     * stellar calculation resolves.
      */
     public static final double ELEMENTARY_CHARGE_ESU = 1.602176634e-20 * SPEED_OF_LIGHT;
 }

@@ -30,7 +30,8 @@ import java.util.Arrays;
  *   <li>A convective zone: U = 3 a c T^3 sqrt(8 H_P / (g delta)) / (c_P rho^2 kappa Lambda^2) (Kippenhahn,
  *       Weigert &amp; Weiss 2012, ch. 7, with Lambda for l), R = 40.5 W / U^2 with W = nabla_rad - nabla_ad,
  *       and the root S of S (1 + Phi(S)) = R ({@link SpectrumFlux}). Then nabla - nabla_ad = W / (1 + Phi) and
- *       F_conv / F = Phi / (1 + Phi), both without cancellation.</li>
+ *       F_conv / F = Phi (nabla - nabla_ad) / nabla_rad (= (nabla_rad - nabla) / nabla_rad, since F_conv =
+ *       K (T / H_P)(nabla - nabla_ad) Phi and F = K (T / H_P) nabla_rad), both without cancellation.</li>
  *   <li>Quantities the theory does not define, defined here so that every field of the result keeps its
  *       meaning (our choices, no source): the efficiency Gamma of an element with the same nabla - nabla_ad,
  *       from Gamma (Gamma + 1) = A^2 (nabla - nabla_ad) = S / 162 (Cox &amp; Giuli 1968, ch. 14), and
@@ -49,7 +50,7 @@ import java.util.Arrays;
  * <p>Derivatives: with rho = ln R and sigma = ln S, implicit differentiation of h = sigma + ln(1 + Phi) - rho
  * gives d sigma = d rho / h', h' = 1 + phi' Phi / (1 + Phi), phi' = d ln Phi / d ln S; d rho = dW / W - 2 d ln U;
  * d Phi = Phi phi' d sigma; d(nabla - nabla_ad) = (dW - (nabla - nabla_ad) d Phi) / (1 + Phi);
- * d(F_conv / F) = d Phi / (1 + Phi)^2; d ln v = (d ln g + d ln delta + d ln Lambda + d ln(F_conv / F) + d ln L
+ * d ln(F_conv / F) = phi' d sigma + d ln(nabla - nabla_ad) - d ln nabla_rad; d ln v = (d ln g + d ln delta + d ln Lambda + d ln(F_conv / F) + d ln L
  * - 2 d ln r - d ln rho - d ln c_P - d ln T) / 3; d ln D = d ln v + d ln Lambda. nabla_mu and phi enter only a
  * stable zone's coefficients. With Lambda = alpha z the distance z is not a {@link ZoneInput}; since
  * Lambda depends on alpha z only, d/dz = (alpha / z) d/d alpha.
@@ -159,11 +160,13 @@ public final class EddySpectrumZone {
         phi *= 1.0 + slope * step;
         onePlus = 1.0 + phi;
         final double inv1p = 1.0 / onePlus;
-        final double share = phi * inv1p;
-        final double invSlopeH = 1.0 / (1.0 + slope * share);
+        final double invSlopeH = 1.0 / (1.0 + slope * phi * inv1p);
 
         final double y = w * inv1p;
         final double nabla = nablaAd + y;
+        // F_conv / F = K (T / H_P) y Phi / (K (T / H_P) nabla_rad): the share of the total flux
+        final double invNablaRad = 1.0 / nablaRad;
+        final double share = phi * y * invNablaRad;
         final double sOver = s / 162.0;
         final double gamma = 2.0 * sOver / (1.0 + Math.sqrt(1.0 + 4.0 * sOver));
         final double v = Math.cbrt(V3_FACTOR * gravity * delta * length * share * lum / (r * r * rho * cp * t));
@@ -193,44 +196,44 @@ public final class EddySpectrumZone {
             final double phiSlope = phi * slope;
             // T: nabla_rad ~ T^-4, U ~ T^3, v^3 ~ 1/T
             probe += entry(out, ZoneInput.T, -4.0 * nablaRad * invT, 0.0, 3.0 * invT, 0.0, -invT,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             // rho: H_P ~ 1/rho, U ~ rho^-2 H_P^(1/2) Lambda^-2, v^3 ~ 1/rho
             double lambdaRho = -hp * invRho;
             probe += entry(out, ZoneInput.RHO, 0.0, 0.0, -2.5 * invRho - 2.0 * lambdaRho, lambdaRho, -invRho,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             // P: nabla_rad ~ P, H_P ~ P
             double lambdaP = hp * invP;
             probe += entry(out, ZoneInput.P, nablaRad * invP, 0.0, 0.5 * invP - 2.0 * lambdaP, lambdaP, 0.0,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             // L: nabla_rad ~ L, v^3 ~ L
             probe += entry(out, ZoneInput.L, perL, 0.0, 0.0, 0.0, 1.0 / lum,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             // m: nabla_rad ~ 1/m, g ~ m, H_P ~ 1/m, U ~ (H_P / g)^(1/2) Lambda^-2, v^3 ~ g
             double lambdaM = -hp * invM;
             probe += entry(out, ZoneInput.M, -nablaRad * invM, 0.0, -invM - 2.0 * lambdaM, lambdaM, invM,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             // r: g ~ r^-2, H_P ~ r^2, Lambda ~ r when capped, v^3 ~ g / r^2
             double lambdaR = capped ? invR : 2.0 * hp * invR;
             probe += entry(out, ZoneInput.R, 0.0, 0.0, 2.0 * invR - 2.0 * lambdaR, lambdaR, -4.0 * invR,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             // kappa: nabla_rad ~ kappa, U ~ 1/kappa
             probe += entry(out, ZoneInput.KAPPA, nablaRad * invKappa, 0.0, -invKappa, 0.0, 0.0,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             // c_P: U ~ 1/c_P, v^3 ~ 1/c_P
             probe += entry(out, ZoneInput.CP, 0.0, 0.0, -invCp, 0.0, -invCp,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             probe += entry(out, ZoneInput.NABLA_AD, 0.0, 1.0, 0.0, 0.0, 0.0,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             // delta: U ~ delta^-1/2, v^3 ~ delta
             probe += entry(out, ZoneInput.DELTA, 0.0, 0.0, -0.5 * invDelta, 0.0, invDelta,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             probe += entry(out, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0, 0.0,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             probe += entry(out, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0, 0.0,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
             // alpha: Lambda ~ alpha, U ~ alpha^-2
             probe += entry(out, ZoneInput.ALPHA, 0.0, 0.0, -2.0 * invAlpha, invAlpha, 0.0,
-                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion);
+                    invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
         }
         guard(z, out, probe);
     }
@@ -243,16 +246,18 @@ public final class EddySpectrumZone {
      */
     private static double entry(ConvectionResult out, int i, double dRad, double dAd, double lnU, double lnLength,
                                 double lnV3, double invW, double invSlopeH, double phiSlope, double slope,
-                                double inv1p, double y, double v, double diffusion) {
+                                double inv1p, double y, double v, double diffusion, double invNablaRad,
+                                double share) {
         double dW = dRad - dAd;
         double dSigma = (dW * invW - 2.0 * lnU) * invSlopeH;
         double dPhi = phiSlope * dSigma;
         double dy = (dW - y * dPhi) * inv1p;
-        double dLnFraction = slope * dSigma * inv1p;
+        // F_conv / F = Phi y / nabla_rad
+        double dLnFraction = slope * dSigma + dy / y - dRad * invNablaRad;
         double dLnV = THIRD * (lnV3 + lnLength + dLnFraction);
         double nabla = dAd + dy;
         double velocity = v * dLnV;
-        double fraction = dPhi * inv1p * inv1p;
+        double fraction = share * dLnFraction;
         double mixing = diffusion * (dLnV + lnLength);
         out.dNabla[i] = nabla;
         out.dVelocity[i] = velocity;

@@ -176,7 +176,9 @@ class EddySpectrumTest {
         double w = out.nablaRad - z.nablaAd;
         assertEquals(SpectrumFlux.S_PER_EXCESS * w / u2, s * (1.0 + phi), 1e-12 * s * (1.0 + phi));
         assertEquals(s * u2 / SpectrumFlux.S_PER_EXCESS, out.nabla - z.nablaAd, 1e-12 * w + 4e-16 * z.nablaAd);
-        assertEquals(phi / (1.0 + phi), out.convectiveFraction, 1e-12);
+        // F_conv / F = K (T / H_P)(nabla - nabla_ad) Phi / (K (T / H_P) nabla_rad) (Canuto & Mazzitelli 1991), with
+        // nabla - nabla_ad = W / (1 + Phi) from the flux equation
+        assertEquals(phi / (1.0 + phi) * w / out.nablaRad, out.convectiveFraction, 1e-12);
         assertTrue(out.nabla > z.nablaAd && out.nabla < out.nablaRad);
     }
 
@@ -202,16 +204,18 @@ class EddySpectrumTest {
     @Tag(CheckKind.LAW)
     @Test
     void inefficientLimitApproachesTheRadiativeGradientAsTheAsymptoteSays() {
-        // U -> infinity: S -> R, Phi -> c0 R^2, so F_conv / F -> c0 R^2 and nabla -> nabla_rad
+        // U -> infinity: S -> R, Phi -> c0 R^2, so F_conv / F = Phi (nabla - nabla_ad) / nabla_rad -> c0 R^2 W / nabla_rad
+        // and nabla -> nabla_rad
         for (double logU = 2; logU <= 6; logU += 2) {
             ZoneState z = zone(5.0, 0.3, logU, 0.5, 10, 33, 1.0);
             ConvectionResult out = new ConvectionResult();
             model(1.0, Criterion.SCHWARZSCHILD, LengthScale.SCALE_HEIGHT).solve(z, out);
             double u = out.lossParameter;
             double r = SpectrumFlux.S_PER_EXCESS * 0.5 / (u * u);
-            double expected = SpectrumFlux.INEFFICIENT_COEFFICIENT * r * r;
+            double expected = SpectrumFlux.INEFFICIENT_COEFFICIENT * r * r * 0.5 / out.nablaRad;
             assertEquals(expected, out.convectiveFraction, 1e-3 * expected, "U = " + u);
-            assertEquals(out.nablaRad, out.nabla, 1.01 * expected * out.nablaRad);
+            // nabla_rad - nabla = F_conv / F nabla_rad, down to the rounding of nabla = nabla_ad + W / (1 + Phi)
+            assertEquals(out.nablaRad, out.nabla, 1.01 * expected * out.nablaRad + 4.0 * Math.ulp(out.nablaRad));
         }
     }
 
