@@ -197,11 +197,7 @@ public final class NativeBridge {
             DoubleBuffer jacobian = ws.hostJacobian(host);
             jacobian.position(start * ZoneMajorJacobian.PER_ZONE);
             model.solveZoneMajorInto(ws.in, 0, count, ws.convection, jacobian);
-            Regime[] regime = ws.convection.regime;
-            int[] codes = ws.codes;
-            for (int k = 0; k < count; k++) {
-                codes[k] = code(regime[k]);
-            }
+            convectionCodes(ws, count);
             return OK;
         } catch (Throwable e) {
             return fail(ws, e, zoneShift);
@@ -225,14 +221,19 @@ public final class NativeBridge {
         try {
             defaults(ws, count, present);
             model.solveZoneMajor(ws.in, 0, count, ws.convection, jacobian ? ws.convectionJacobian : null);
-            Regime[] regime = ws.convection.regime;
-            int[] codes = ws.codes;
-            for (int k = 0; k < count; k++) {
-                codes[k] = code(regime[k]);
-            }
+            convectionCodes(ws, count);
             return OK;
         } catch (Throwable e) {
             return fail(ws, e, zoneShift);
+        }
+    }
+
+    /** The chunk's convection regimes as the C header's codes, into the workspace. */
+    private static void convectionCodes(Workspace ws, int count) {
+        Regime[] regime = ws.convection.regime;
+        int[] codes = ws.codes;
+        for (int k = 0; k < count; k++) {
+            codes[k] = code(regime[k]);
         }
     }
 

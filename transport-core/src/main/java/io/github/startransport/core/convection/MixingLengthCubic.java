@@ -112,7 +112,9 @@ public final class MixingLengthCubic {
         if (s == Double.POSITIVE_INFINITY) {
             return s; // the root of an infinite right-hand side; Newton would turn it into NaN
         }
-        double g = Math.min(s, Math.min(Math.sqrt(s), Math.cbrt(s / a0)));
+        // cbrt(S) / cbrt(a0), not cbrt(S / a0): the quotient overflows for a tiny a0 and a huge S, and a start
+        // at sqrt(S) instead leaves Newton (2/3 per step from far above) short of the root after MAX_STEPS
+        double g = Math.min(s, Math.min(Math.sqrt(s), Math.cbrt(s) / Math.cbrt(a0)));
         for (int i = 0; i < maxSteps; i++) {
             // f / f' with f written relative to S, so that S near the largest double does not overflow
             double relative = ((a0 * g + 1.0) * g + 1.0) * (g / s) - 1.0;

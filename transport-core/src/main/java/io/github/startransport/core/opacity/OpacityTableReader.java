@@ -53,6 +53,12 @@ public final class OpacityTableReader {
     public static final String ABSENT = "absent:";
 
     private static final String[] COLUMNS = HEADER.split(",");
+    /**
+     * The largest |log10 kappa| a table may hold: 10^300 leaves eight decades below the largest double
+     * (1.8e308) for the interpolation's slopes and blends (common practice, no source; tabulated
+     * Rosseland means lie within about -10..10).
+     */
+    static final double MAX_ABS_LOG_KAPPA = 300.0;
     private static final Pattern NON_FINITE = Pattern.compile("[+-]?(nan|inf|infinity)", Pattern.CASE_INSENSITIVE);
 
     private OpacityTableReader() {
@@ -408,6 +414,12 @@ public final class OpacityTableReader {
             if (!Double.isFinite(v)) {
                 throw new DataFormatException(source, lineNo, col,
                         COLUMNS[field] + " is not finite: '" + text + "' overflows a double");
+            }
+            if (field == 4 && Math.abs(v) > MAX_ABS_LOG_KAPPA) {
+                throw new DataFormatException(source, lineNo, col, "log_kappa = '" + text
+                        + "' puts kappa beyond what a double holds with room for interpolation"
+                        + " (|log_kappa| <= " + (int) MAX_ABS_LOG_KAPPA + "); check the column order ("
+                        + HEADER + ") and the units (log10 of cm^2/g)");
             }
             vals[field] = v;
             field++;

@@ -46,12 +46,27 @@ class ConvectionModelTest {
         return z;
     }
 
+    /** H_P (cm) of the synthetic envelope point, derived by {@code src/test/resources/vectors/MixingLengthVectors.java}. */
+    static final double SYNTHETIC_SCALE_HEIGHT = 6.069587591e7;
+    /** U of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_LOSS_PARAMETER = 0.0420147842;
+    /** nabla of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_NABLA = 0.635589553;
+    /** nabla_e of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_NABLA_ELEMENT = 0.437293080;
+    /** v (cm/s) of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_VELOCITY = 3.65536581e5;
+    /** F_conv / F of the synthetic envelope point (same derivation). */
+    static final double SYNTHETIC_CONVECTIVE_FRACTION = 0.7881368156;
+
     /**
      * A synthetic envelope point solved with the textbook equations of Kippenhahn, Weigert &amp;
      * Weiss (2012, ch. 7): rho = 3e-7, T = 1.2e4, kappa = 10, g = 2.74e4, alpha = 1.8, nabla_rad = 3,
      * ideal gas plus radiation with mu = 0.6 (P, c_P, delta, nabla_ad rounded to 7 digits). The
-     * expected values were computed from those equations and recomputed independently in 40-digit
-     * arithmetic (xi-form of the cubic); tolerances allow for the 7-digit inputs.
+     * expected values come from those equations in 60-digit arithmetic (xi-form of the cubic, solved by
+     * bisection): {@code src/test/resources/vectors/MixingLengthVectors.java} derives them, and
+     * {@code MixingLengthVectorsTest} reruns it on every build against the constants above; tolerances
+     * allow for the 7-digit inputs.
      */
     @Tag("external")
     @Test
@@ -60,12 +75,12 @@ class ConvectionModelTest {
         ConvectionResult out = new ConvectionResult();
         new LocalMixingLength().solve(z, out);
         assertEquals(Regime.CONVECTIVE, out.regime);
-        assertEquals(6.069587591e7, out.scaleHeight, 1e-8 * 6.07e7);
-        assertEquals(0.0420147842, out.lossParameter, 1e-8 * 0.042);
-        assertEquals(0.635589553, out.nabla, 1e-8);
-        assertEquals(0.437293080, out.nablaElement, 1e-8);
-        assertEquals(3.65536581e5, out.velocity, 1e-7 * 3.66e5);
-        assertEquals(0.7881368156, out.convectiveFraction, 1e-8);
+        assertEquals(SYNTHETIC_SCALE_HEIGHT, out.scaleHeight, 1e-8 * 6.07e7);
+        assertEquals(SYNTHETIC_LOSS_PARAMETER, out.lossParameter, 1e-8 * 0.042);
+        assertEquals(SYNTHETIC_NABLA, out.nabla, 1e-8);
+        assertEquals(SYNTHETIC_NABLA_ELEMENT, out.nablaElement, 1e-8);
+        assertEquals(SYNTHETIC_VELOCITY, out.velocity, 1e-7 * 3.66e5);
+        assertEquals(SYNTHETIC_CONVECTIVE_FRACTION, out.convectiveFraction, 1e-8);
         // D = v l / 3 with l = alpha H_P (kinetic estimate, Langer, El Eid & Fricke 1985, from memory)
         assertEquals(1.8 * out.scaleHeight * out.velocity / 3.0, out.diffusion, 1e-12 * out.diffusion);
     }
@@ -90,30 +105,50 @@ class ConvectionModelTest {
         return z;
     }
 
+    /** nabla_rad of the deep solar-like zone, derived by {@code src/test/resources/vectors/MixingLengthVectors.java}. */
+    static final double DEEP_NABLA_RAD = 0.5260789820;
+    /** nabla - nabla_ad of the deep solar-like zone (same derivation). */
+    static final double DEEP_EXCESS = 3.172536989e-7;
+    /** v (cm/s) of the deep solar-like zone (same derivation). */
+    static final double DEEP_VELOCITY = 4223.437214;
+    /** nabla_rad of the zone below the solar-like surface (same derivation). */
+    static final double SURFACE_NABLA_RAD = 3.155516831;
+    /** nabla - nabla_ad of the zone below the solar-like surface (same derivation). */
+    static final double SURFACE_EXCESS = 0.2008523017;
+    /** v (cm/s) of the zone below the solar-like surface (same derivation). */
+    static final double SURFACE_VELOCITY = 3.126717770e5;
+
     /**
      * Deep in a solar-like convective envelope (r = 0.85 R_sun, T = 1e6 K, rho = 0.05 g/cm^3,
-     * kappa = 10 cm^2/g; state from memory of standard solar models): convection is efficient,
-     * nabla is within 1e-5 of nabla_ad, convection carries 1 - nabla_ad/nabla_rad of the flux, and v is of order 10^3-10^5 cm/s (tens of m/s in the deep
-     * envelope; from memory).
+     * kappa = 10 cm^2/g; state from memory of standard solar models): nabla_rad, nabla - nabla_ad and v
+     * as the textbook theory gives them (Kippenhahn, Weigert &amp; Weiss 2012 ch. 7 and 13, ideal gas plus
+     * radiation with mu = 0.6), derived in 60-digit arithmetic by
+     * {@code src/test/resources/vectors/MixingLengthVectors.java} from the state alone (the zone's c_P,
+     * delta and nabla_ad are recomputed there, not taken from the library). Convection is efficient:
+     * nabla - nabla_ad = 3.2e-7, v = 42 m/s (tens of m/s in the deep solar envelope, from memory), and
+     * convection carries 1 - nabla_ad/nabla_rad of the flux (the efficient limit).
      */
-    @Tag("law")
+    @Tag("external")
     @Test
     void deepSolarEnvelope() {
         ZoneState z = solarLike(0.85, 1.0e6, 0.05, 10.0);
         ConvectionResult out = new ConvectionResult();
         new LocalMixingLength().solve(z, out);
         assertEquals(Regime.CONVECTIVE, out.regime);
-        assertTrue(out.nabla - z.nablaAd < 1e-5, out::toString);
-        assertTrue(out.velocity > 1e3 && out.velocity < 1e5, out::toString);
+        assertEquals(DEEP_NABLA_RAD, out.nablaRad, 1e-9 * DEEP_NABLA_RAD);
+        assertEquals(DEEP_EXCESS, out.nabla - z.nablaAd, 1e-8 * DEEP_EXCESS);
+        assertEquals(DEEP_VELOCITY, out.velocity, 1e-9 * DEEP_VELOCITY);
         // efficient limit: nabla -> nabla_ad, so F_conv / F -> 1 - nabla_ad / nabla_rad
         assertEquals(1.0 - z.nablaAd / out.nablaRad, out.convectiveFraction, 1e-4);
     }
 
     /**
      * Just below a solar-like surface (r = R_sun, T = 1e4 K, rho = 3e-7 g/cm^3, kappa = 10 cm^2/g;
-     * from memory): radiative losses of the eddies matter, so nabla lies well above nabla_ad, and v is
-     * of order km/s (peak convective velocities of a few km/s below the solar surface, from memory).
-     * With optically thin eddies allowed for, losses are smaller and nabla cannot rise.
+     * from memory): nabla_rad, nabla - nabla_ad and v derived as for {@link #deepSolarEnvelope}. Radiative
+     * losses of the eddies matter, so nabla lies well above nabla_ad (by 0.20), and v = 3.1 km/s (peak
+     * convective velocities of a few km/s below the solar surface, from memory). With optically thin eddies
+     * allowed for, losses are smaller and nabla cannot rise (Henyey, Vardya &amp; Bodenheimer 1965; the
+     * transparent model's normalisation is not pinned here).
      */
     @Tag("external")
     @Test
@@ -122,15 +157,21 @@ class ConvectionModelTest {
         ConvectionResult out = new ConvectionResult();
         new LocalMixingLength().solve(z, out);
         assertEquals(Regime.CONVECTIVE, out.regime);
-        assertTrue(out.nabla - z.nablaAd > 0.05, out::toString);
-        assertTrue(out.velocity > 1e4 && out.velocity < 1e6, out::toString);
+        assertEquals(SURFACE_NABLA_RAD, out.nablaRad, 1e-9 * SURFACE_NABLA_RAD);
+        assertEquals(SURFACE_EXCESS, out.nabla - z.nablaAd, 1e-9);
+        assertEquals(SURFACE_VELOCITY, out.velocity, 1e-9 * SURFACE_VELOCITY);
         ConvectionResult thin = new ConvectionResult();
         new TransparentEddyMixingLength().solve(z, thin);
         assertTrue(thin.nabla <= out.nabla);
+        // the transparent model's normalisation is unverified (see TransparentEddyMixingLength): order of magnitude only
         assertTrue(thin.velocity > 1e4 && thin.velocity < 1e6, thin::toString);
     }
 
-    /** A stable zone: nabla = nabla_rad, no convective flux, radiative fraction 1. */
+    /**
+     * A stable zone: nabla = nabla_rad, no convective flux, radiative fraction 1 (a layer stable by the
+     * Schwarzschild criterion carries its whole flux by radiation; Kippenhahn, Weigert &amp; Weiss 2012 §6.1, from
+     * memory).
+     */
     @Tag("law")
     @Test
     void stableZoneCarriesNoConvectiveFlux() {
@@ -147,13 +188,16 @@ class ConvectionModelTest {
 
     /**
      * A semiconvective zone (Ledoux) gets D_sc = alpha_sc (4acT^3 / (3 kappa rho)) / (6 c_P rho)
-     * (nabla - nabla_ad) / (nabla_L - nabla) with nabla = nabla_rad (Langer, Sugimoto &amp; Fricke 1983, from memory).
+     * (nabla - nabla_ad) / (nabla_L - nabla) with nabla = nabla_rad (Langer, Sugimoto &amp; Fricke 1983, from memory)
+     * and nabla_L = nabla_ad + (phi/delta) nabla_mu (Kippenhahn, Weigert &amp; Weiss 2012 §6.1, from memory). phi and
+     * delta differ from 1 and from each other, so a swapped or dropped phi/delta changes nabla_L and fails.
      */
     @Tag("external")
     @Test
     void semiconvectiveZoneUsesTheLangerCoefficient() {
-        ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.45);
-        z.nablaMu = 0.1; // nabla_L = 0.5
+        ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 2.0, 0.4, 1e5, 0.45);
+        z.phi = 0.8;
+        z.nablaMu = 0.25; // nabla_L = 0.4 + (0.8 / 2.0) 0.25 = 0.5
         ConvectionModel model = LocalMixingLength.fromOptions(ModelOptions.parse("criterion=ledoux,semiconvection-efficiency=0.02"));
         ConvectionResult out = new ConvectionResult();
         model.solve(z, out);
@@ -165,18 +209,20 @@ class ConvectionModelTest {
 
     /**
      * A thermohaline zone gets D_th = C_t (4acT^3 / (3 kappa rho^2 c_P)) (phi/delta)(-nabla_mu)/(nabla_ad - nabla)
-     * (Kippenhahn, Ruschenplatt &amp; Thomas 1980; Charbonnel &amp; Zahn 2007; from memory).
+     * (Kippenhahn, Ruschenplatt &amp; Thomas 1980; Charbonnel &amp; Zahn 2007; from memory), with phi = 0.9 and
+     * delta = 1.6 so that a swapped or dropped phi/delta fails.
      */
     @Tag("external")
     @Test
     void thermohalineZoneUsesTheFingerCoefficient() {
-        ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.0, 0.4, 1e5, 0.3);
+        ZoneState z = zone(1e7, 10.0, 1e16, 1.0, 3e8, 1.6, 0.4, 1e5, 0.3);
+        z.phi = 0.9;
         z.nablaMu = -1e-3;
         ConvectionResult out = new ConvectionResult();
         new LocalMixingLength().solve(z, out);
         assertEquals(Regime.THERMOHALINE, out.regime);
         double kT = 4.0 * TestZones.A_RAD * TestZones.C * 1e21 / (3.0 * 1.0 * 100.0 * 3e8);
-        double expected = 1000.0 * kT * 1e-3 / (0.4 - out.nablaRad);
+        double expected = 1000.0 * kT * (0.9 / 1.6) * 1e-3 / (0.4 - out.nablaRad);
         assertEquals(expected, out.diffusion, 1e-12 * expected);
     }
 

@@ -12,8 +12,10 @@ class MixingLengthCubicTest {
     /**
      * Kippenhahn, Weigert &amp; Weiss (2012, ch. 7): the cubic
      * xi^3 - (19U/9) xi^2 + 3U^2 xi - U^3 - (8U/9)(U^2 + W) = 0 with nabla = nabla_ad + xi^2 - U^2
-     * and Gamma = (xi - U)/(2U), nabla_ad = 0.4. Values computed from those equations, and recomputed
-     * independently here in 40-digit arithmetic (polynomial roots of the xi form) before use.
+     * and Gamma = (xi - U)/(2U), nabla_ad = 0.4. Values derived from those equations in 60-digit
+     * arithmetic by {@code src/test/resources/vectors/MixingLengthVectors.java} (bisection on the xi form,
+     * no code of the library); {@code MixingLengthVectorsTest} reruns it on every build and compares
+     * each value below with it.
      */
     @Tag("external")
     @ParameterizedTest

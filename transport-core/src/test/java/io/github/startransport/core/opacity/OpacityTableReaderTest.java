@@ -82,6 +82,18 @@ class OpacityTableReaderTest {
 
     @Tag(CheckKind.INTERNAL)
     @Test
+    void logKappaBeyondADoubleIsRefusedAtItsCell() {
+        // 10^510432 is no double: before, such a file loaded and a lookup inside it was refused as
+        // "extrapolated"; now the cell is named when the file is read
+        assertRefused(HEADER + "0.7,0.02,4.0,-3.0,510432\n", 2, 19, "|log_kappa| <= 300");
+        assertRefused(HEADER + "0.7,0.02,4.0,-3.0,-300.5\n", 2, 19, "log_kappa = '-300.5'");
+        // the limit itself is accepted: the text reads (here only one node, so only the parse is asked)
+        String edge = GOOD.replace("4.5,-2.0,0.7", "4.5,-2.0,300");
+        assertEquals(1, OpacityTableReader.parse(edge, "t.csv").tableCount());
+    }
+
+    @Tag(CheckKind.INTERNAL)
+    @Test
     void wrongFieldCount() {
         assertRefused(HEADER + "0.7,0.02,4.0,-3.0\n", 2, 18, "too few fields");
         assertRefused(HEADER + "0.7,0.02,4.0,-3.0,1,2\n", 2, 21, "too many fields");

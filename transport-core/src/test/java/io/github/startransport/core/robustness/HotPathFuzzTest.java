@@ -20,7 +20,9 @@ import io.github.startransport.spi.OpacityResult;
 import io.github.startransport.spi.OutOfRangePolicy;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
+import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.ProfileDiagnosis;
+import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.StabilityResult;
 import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.TransportException;
@@ -49,13 +51,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * output is finite and inside its range, or one of our {@link TransportException}s with a message.
  * Any other exception fails the property by escaping; a hang would fail the build by timing out
  * (every iteration in the library is bounded). The counts of accepted and refused inputs are
- * printed with the test report.
+ * printed with the test report, and each property fails when either outcome falls below the share
+ * its inputs are built for (jqwik coverage checks), so a fuzzer that only ever hits the guards, or
+ * never hits them, is caught.
  */
 class HotPathFuzzTest {
 
     private static final List<ConvectionModel> CONVECTION = List.of(new LocalMixingLength(),
             new LocalMixingLength().withAlpha(1e-3), new TransparentEddyMixingLength(),
-            new TransparentEddyMixingLength().withAlpha(5.0));
+            new TransparentEddyMixingLength().withAlpha(5.0),
+            LocalMixingLength.fromOptions(ModelOptions.parse("criterion=ledoux")));
     private static final List<OpacityModel> OPACITY = List.of(AnalyticOpacity.DEFAULT,
             new TabulatedOpacity(DemoTable.set(), OutOfRangePolicy.REFUSE),
             new TabulatedOpacity(DemoTable.set(), OutOfRangePolicy.CLAMP),
@@ -118,6 +123,30 @@ class HotPathFuzzTest {
         }
     }
 
+    /** The demo star's zones, a plausible base that one random field spoils in half the tries. */
+    private static final ZoneColumns DEMO = BatchColumns.demo();
+
+    /**
+     * 0: every field random; 1: a zone of the demo star with field {@code spoiled} replaced by its random
+     * value, so that a fair share of calls is accepted and reaches the solvers' convective branch.
+     */
+    @Provide
+    Arbitrary<Integer> mode() {
+        return Arbitraries.of(0, 1);
+    }
+
+    /**
+     * Each call's outcomes in the share of calls the inputs are built for: at least 10 % accepted
+     * (the call reached its computation) and at least 10 % refused (the guards were exercised). Design
+     * targets of this test, not physics; jqwik fails the property when a share falls short.
+     */
+    private static void outcomeShares(String call) {
+        Statistics.label(call).coverage(c -> {
+            c.check("accepted").percentage(p -> p >= 10.0);
+            c.check("refused").percentage(p -> p >= 10.0);
+        });
+    }
+
     @Tag("internal")
     @Property(tries = 3000, seed = "7101")
     void hotPathCallsGiveAFiniteResultOrOurException(
@@ -125,8 +154,29 @@ class HotPathFuzzTest {
             @ForAll("extreme") double l, @ForAll("extreme") double m, @ForAll("extreme") double r,
             @ForAll("extreme") double kappa, @ForAll("extreme") double cp, @ForAll("fraction") double nablaAd,
             @ForAll("extreme") double delta, @ForAll("extreme") double nablaMu, @ForAll("fraction") double x,
-            @ForAll("fraction") double z) {
-        ZoneState s = zone(t, rho, p, l, m, r, kappa, cp, nablaAd, delta, nablaMu, x, z * (1.0 - Math.abs(x)));
+            @ForAll("fraction") double z, @ForAll("mode") int mode, @ForAll @IntRange(min = 0, max = 12) int spoiled,
+            @ForAll @IntRange(min = 0, max = 99) int demoZone) {
+        ZoneState s;
+        if (mode == 0) {
+            s = zone(t, rho, p, l, m, r, kappa, cp, nablaAd, delta, nablaMu, x, z * (1.0 - Math.abs(x)));
+        } else {
+            int k = demoZone % DEMO.capacity;
+            double[] v = {DEMO.temperature[k], DEMO.density[k], DEMO.pressure[k], DEMO.luminosity[k], DEMO.mass[k],
+                DEMO.radius[k], DEMO.opacity[k], DEMO.cp[k], DEMO.nablaAd[k], DEMO.delta[k], DEMO.nablaMu[k],
+                DEMO.hydrogen[k], DEMO.metals[k]};
+            v[spoiled] = new double[] {t, rho, p, l, m, r, kappa, cp, nablaAd, delta, nablaMu, x, z}[spoiled];
+            s = zone(v[0], v[1], v[2], v[3], v[4], v[5], v[6], v[7], v[8], v[9], v[10], v[11], v[12]);
+        }
+        for (String call : List.of("stability", "convection with Jacobian", "convection values", "opacity analytic",
+                "opacity table", "thermodynamics")) {
+            outcomeShares(call);
+        }
+        // the accepted convection calls include convective zones, where the cubic is solved
+        Statistics.label("convection regime").coverage(c -> {
+            c.check(Regime.CONVECTIVE).percentage(q -> q >= 5.0);
+            c.check(Regime.SEMICONVECTIVE).count(n -> n >= 10);
+            c.check(Regime.THERMOHALINE).count(n -> n >= 10);
+        });
         for (Criterion criterion : Criterion.values()) {
             StabilityResult out = new StabilityResult();
             try {
@@ -152,6 +202,7 @@ class HotPathFuzzTest {
                         model.solveValues(s, out);
                     }
                     Statistics.label(call).collect("accepted");
+                    Statistics.label("convection regime").collect(out.regime);
                     Object context = model + " " + s;
                     assertNotNull(out.regime);
                     for (double v : new double[] {out.nablaRad, out.nabla, out.nablaElement, out.velocity,
@@ -160,6 +211,19 @@ class HotPathFuzzTest {
                         finite(v, "an output", context);
                     }
                     assertTrue(out.velocity >= 0.0 && out.diffusion >= 0.0 && out.efficiency >= 0.0, "signs " + context);
+                    if (out.regime == Regime.CONVECTIVE && s.nablaMu >= 0.0) {
+                        // thermally driven convection carries part of the flux: nabla_ad <= nabla_e <= nabla <= nabla_rad
+                        // and the two flux fractions are in [0, 1] and add up to 1 (Kippenhahn, Weigert & Weiss 2012
+                        // ch. 7); the slack is rounding relative to the largest gradient. (With nabla_mu < 0 the
+                        // composition drives the motion and heat may flow inwards: nabla > nabla_rad, F_conv < 0; see
+                        // CompositionConvectionTest.)
+                        double slack = 1e-12 * Math.abs(out.nablaRad);
+                        assertTrue(s.nablaAd <= out.nablaElement + slack && out.nablaElement <= out.nabla + slack
+                                && out.nabla <= out.nablaRad + slack, "gradient order " + out + " for " + context);
+                        assertTrue(out.convectiveFraction >= 0.0 && out.convectiveFraction <= 1.0
+                                && Math.abs(out.convectiveFraction + out.radiativeFraction - 1.0) <= 1e-12,
+                                "flux fractions " + out + " for " + context);
+                    }
                     if (jacobian) {
                         finite(out.dNabla, "nabla", context);
                         finite(out.dVelocity, "v", context);
@@ -192,8 +256,12 @@ class HotPathFuzzTest {
             for (double v : new double[] {th.mu, th.beta, th.pressure, th.nablaAd, th.cp, th.delta, th.phi, th.gamma1}) {
                 finite(v, "a thermodynamic output", s);
             }
+            // beta = P_gas / P is in (0, 1]; for a fully ionised ideal gas plus radiation nabla_ad runs from 2/5
+            // (beta = 1) down to 1/4 (beta -> 0) and Gamma_1 from 5/3 to 4/3 (Chandrasekhar 1939; Kippenhahn,
+            // Weigert & Weiss 2012 ch. 13, from memory); the slack is rounding
             assertTrue(th.pressure > 0.0 && th.cp > 0.0 && th.beta > 0.0 && th.beta <= 1.0
-                    && th.nablaAd > 0.0 && th.nablaAd < 1.0, "ranges " + th + " for " + s);
+                    && th.nablaAd >= 0.25 - 1e-12 && th.nablaAd <= 0.4 + 1e-12
+                    && th.gamma1 >= 4.0 / 3.0 - 1e-12 && th.gamma1 <= 5.0 / 3.0 + 1e-12, "ranges " + th + " for " + s);
         } catch (TransportException e) {
             refused("thermodynamics", e);
         }
@@ -213,6 +281,10 @@ class HotPathFuzzTest {
         fields[field][k] = a;
         in.luminosity[(k + 1) % n] *= Double.isFinite(b) ? 1.0 + Math.abs(b) % 10.0 : 1.0;
         ConvectionColumns out = new ConvectionColumns(n);
+        Statistics.coverage(c -> {
+            c.check("accepted").percentage(q -> q >= 10.0);
+            c.check("refused").percentage(q -> q >= 10.0);
+        });
         try {
             new LocalMixingLength().solveColumns(in, 0, n, out, true);
             Statistics.collect("accepted");
@@ -252,6 +324,10 @@ class HotPathFuzzTest {
         }
         DiagnosisSetup setup = new DiagnosisSetup(new LocalMixingLength(), AnalyticOpacity.DEFAULT,
                 IdealGasRadiation.INSTANCE);
+        Statistics.coverage(c -> {
+            c.check("accepted").percentage(q -> q >= 10.0);
+            c.check("refused").percentage(q -> q >= 10.0);
+        });
         try {
             ProfileDiagnosis d = LocalDiagnosis.INSTANCE.diagnose(new Profile("spoiled demo", cols), setup);
             Statistics.collect("accepted");
