@@ -38,6 +38,18 @@ class OpacityRegimesTest {
 
     @Test
     @Tag(CheckKind.EXTERNAL)
+    void hMinusOpacityRisesAsTToTheNinthAndTheSquareRootOfRho() {
+        // kappa_H- ~ (Z / 0.02) rho^(1/2) T^9 (Hansen, Kawaler & Trimble 2004, ch. 4, from memory; valid
+        // near 3000-6000 K and 1e-10-1e-5 g cm^-3): a factor 1.2 in T gives 1.2^9, a factor 4 in rho gives 2,
+        // and halving Z halves it
+        double base = HMinus.kappa(4000.0, 1e-8, 0.02);
+        assertEquals(Math.pow(1.2, 9), HMinus.kappa(4800.0, 1e-8, 0.02) / base, 1e-13);
+        assertEquals(2.0, HMinus.kappa(4000.0, 4e-8, 0.02) / base, 1e-13);
+        assertEquals(0.5, HMinus.kappa(4000.0, 1e-8, 0.01) / base, 1e-13);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
     void conductiveOpacityScalesAsTSquaredOverRhoSquaredAndMuESquared() {
         // Degenerate electrons: Wiedemann-Franz, lambda = (pi^2 / 3) n_e k^2 T tau / m_e with the collision time
         // tau = p_F^2 v_F / (4 pi n_i Z^2 e^4); p_F^3 ~ n_e, so tau ~ n_e / (n_i Z^2) (independent of rho at fixed

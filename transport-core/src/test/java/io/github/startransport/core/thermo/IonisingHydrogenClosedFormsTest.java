@@ -52,7 +52,11 @@ class IonisingHydrogenClosedFormsTest {
                 double a = b + 1;
                 double nablaAd = (2 + w * a) / (5 + w * a * a);
                 double expected = chiRho / (1 - chiT * nablaAd);
-                assertEquals(expected, ideal(t, rho).gamma1, 1e-9 * expected, "T = " + t + ", rho = " + rho + ", x = " + x);
+                ThermoResult r = ideal(t, rho);
+                String at = "T = " + t + ", rho = " + rho + ", x = " + x;
+                assertEquals(chiRho, r.chiRho, 1e-9 * chiRho, at);
+                assertEquals(chiT, r.chiT, 1e-9 * chiT, at);
+                assertEquals(expected, r.gamma1, 1e-9 * expected, at);
             }
         }
     }
