@@ -61,4 +61,14 @@ class SolarGravityFiguresTest {
         double bound = G * M * M / (8.0 * Math.PI * R * R * R * R);
         assertEquals(4.5e14, bound, 0.05e14);
     }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void nuclearTimescaleOfTheSunIsTenBillionYears() {
+        // tau_nuc = 0.007 q M c^2 / L with 0.7 % of the rest mass released by hydrogen burning and q = 0.1 of the
+        // mass burnt on the main sequence: "about 1e10 years" for the Sun (Kippenhahn, Weigert & Weiss 2012 ch. 1;
+        // Carroll & Ostlie 2007 ch. 10; from memory, one digit, so 10 %)
+        double tau = 0.007 * 0.1 * M * C * C / Iau2015.SOLAR_LUMINOSITY;
+        assertEquals(1e10, tau / Iau2015.JULIAN_YEAR, 0.1e10);
+    }
 }

@@ -91,6 +91,26 @@ class PolytropeEnergyTimescalesTest {
 
     @Test
     @Tag(CheckKind.EXTERNAL)
+    void thermalEnergyOfAFullyConvectiveStarLastsThreeSeventhsOfTheKelvinHelmholtzTime() {
+        // A fully convective (pre-main-sequence, Hayashi-track) star is an n = 3/2 polytrope: Omega = -3 / (5 - n)
+        // G M^2 / R = -(6/7) G M^2 / R (Chandrasekhar 1939 ch. IV; from memory), xi_1 = 3.65375, mu_1 = 2.71406
+        // (Chandrasekhar's table, from memory); E_th = -Omega / 2 lasts (3/7) G M^2 / (R L) = 3/7 of our t_KH.
+        // A young M dwarf: 0.3 M_sun, 0.6 R_sun, 0.05 L_sun (round numbers for illustration)
+        double[] le = laneEmden(1.5);
+        assertEquals(3.65375, le[0], 1e-5);
+        assertEquals(2.71406, le[1], 1e-5);
+        double omegaOverGm2r = -le[0] * le[2] / (le[1] * le[1]);
+        assertEquals(-6.0 / 7.0, omegaOverGm2r, 1e-7);
+
+        double m = 0.3 * Iau2015.SOLAR_MASS;
+        double r = 0.6 * Iau2015.SOLAR_RADIUS;
+        double l = 0.05 * Iau2015.SOLAR_LUMINOSITY;
+        double thermal = -0.5 * omegaOverGm2r * Codata2018.GRAVITATIONAL_CONSTANT * m * m / r;
+        assertEquals(3.0 / 7.0, thermal / l / Timescale.kelvinHelmholtz(m, r, l), 1e-7);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
     void coreTurnoverOfAUniformDensityCoreWithVelocityRisingLikeR() {
         // Near a core's centre l = alpha r and v grows like r (the code's own description of its cores). In a
         // uniform-density core m ~ r^3, so v = v_top (m / M)^(1/3) and the mass-weighted mean velocity is
