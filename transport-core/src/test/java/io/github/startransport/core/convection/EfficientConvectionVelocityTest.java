@@ -18,7 +18,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * F_conv = rho c_P T sqrt(g delta) l^2 H_P^(-3/2) (nabla - nabla_e)^(3/2) / (4 sqrt 2); eliminating
  * (nabla - nabla_e) gives v^3 = g delta l F_conv / (4 rho c_P T) (derivation here). Where convection is efficient
  * nabla -&gt; nabla_ad, so the radiative flux is F nabla_ad / nabla_rad and F_conv = F (1 - nabla_ad / nabla_rad),
- * with F = L / (4 pi r^2): v follows from the inputs alone, without the code's superadiabatic excess.
+ * with F = L / (4 pi r^2): v follows from the inputs alone, without the code's superadiabatic excess. The opposite,
+ * inefficient limit is checked against the cubic's leading term.
  */
 class EfficientConvectionVelocityTest {
 
@@ -43,5 +44,30 @@ class EfficientConvectionVelocityTest {
         new LocalMixingLength().solve(z, out);
         assertEquals(Regime.CONVECTIVE, out.regime);
         assertEquals(expected, out.velocity, 1e-5 * expected);
+    }
+
+    @Test
+    @Tag(CheckKind.EXTERNAL)
+    void velocityInTheInefficientLimitIsWOverTwoU() {
+        // For U -> infinity the mixing-length cubic x^3 + (8/9) U x^2 + (16/9) U^2 x = (8/9) U W (Kippenhahn, Weigert
+        // & Weiss 2012 eqs. 7.14-7.18, from memory; x = (nabla - nabla_e)^(1/2)) is dominated by its linear term:
+        // x -> W / (2 U), W = nabla_rad - nabla_ad, with a relative correction x / (2U) = W / (4 U^2). Then
+        // v = l sqrt(g delta / (8 H_P)) W / (2 U) (limit derived here). A thin layer just below a photosphere
+        // (T = 1e4 K, rho = 1e-8, kappa = 2, nabla_rad = 3; illustrative), U written out from the inputs (eq. 7.12)
+        ZoneState z = ConvectionOutputsTest.zone(Iau2015.SOLAR_RADIUS, Iau2015.SOLAR_MASS, 1.0e4, 1e-8, 2.0, 3.0);
+        double g = Codata2018.GRAVITATIONAL_CONSTANT * z.mass / (z.radius * z.radius);
+        double hp = z.pressure / (z.density * g);
+        double l = 1.8 * hp;
+        double t = z.temperature;
+        double u = 3.0 * Codata2018.RADIATION_CONSTANT * Codata2018.SPEED_OF_LIGHT * t * t * t
+                / (z.cp * z.density * z.density * z.opacity * l * l) * Math.sqrt(8.0 * hp / (g * z.delta));
+        assertTrue(u > 100.0, "U = " + u);
+        double w = 3.0 - z.nablaAd;
+        double expected = l * Math.sqrt(g * z.delta / (8.0 * hp)) * w / (2.0 * u);
+
+        ConvectionResult out = new ConvectionResult();
+        new LocalMixingLength().solve(z, out);
+        assertEquals(Regime.CONVECTIVE, out.regime);
+        assertEquals(expected, out.velocity, (w / (u * u) + 1e-9) * expected);
     }
 }
