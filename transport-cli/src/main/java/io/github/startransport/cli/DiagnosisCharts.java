@@ -225,8 +225,11 @@ final class DiagnosisCharts {
         shadeRegions(d, plot, style.axis(), xs);
         if (hidden == d.size() && hiddenMixing == d.size()) {
             chart.addSubtitle(subtitle("no zone has v_conv > 0 or D_mix > 0: nothing to draw"));
+        } else if (hidden == hiddenMixing) {
+            note(chart, hidden, "zones without convection or mixing (v_conv = D_mix = 0)");
         } else {
-            note(chart, hidden + hiddenMixing, "zero values (zones without convection or mixing)");
+            chart.addSubtitle(subtitle(hidden + " zones with v_conv = 0 and " + hiddenMixing
+                    + " with D_mix = 0 not drawn on the logarithmic axis"));
         }
         return chart;
     }
