@@ -4,7 +4,6 @@ import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.core.gradient.LedouxGradient;
 import io.github.startransport.core.gradient.RadiativeGradient;
 import io.github.startransport.core.gradient.StabilityClassifier;
-import io.github.startransport.core.gradient.ZoneChecks;
 import io.github.startransport.spi.ConvectionResult;
 import io.github.startransport.spi.Criterion;
 import io.github.startransport.spi.InvalidInputException;
@@ -12,7 +11,6 @@ import io.github.startransport.spi.Regime;
 import io.github.startransport.spi.ZoneInput;
 import io.github.startransport.spi.ZoneState;
 
-import java.util.Arrays;
 
 /**
  * One zone of full-spectrum turbulent convection (Canuto &amp; Mazzitelli 1991, ApJ 370, 295) with the full
@@ -121,7 +119,7 @@ public final class EddySpectrumZone {
 
         if (regime != Regime.CONVECTIVE) {
             RadiativeGradient.valueAndDerivatives(kappa, lum, p, m, t, out.dNabla);
-            stable(z, regime, nablaRad, semiconvection, thermohaline, out);
+            MixingLengthZone.stable(z, regime, nablaRad, semiconvection, thermohaline, out);
             return;
         }
         if (!lengthOk) {
@@ -235,7 +233,7 @@ public final class EddySpectrumZone {
             probe += entry(out, ZoneInput.ALPHA, 0.0, 0.0, -2.0 * invAlpha, invAlpha, 0.0,
                     invW, invSlopeH, phiSlope, slope, inv1p, y, v, diffusion, invNablaRad, share);
         }
-        guard(z, out, probe);
+        MixingLengthZone.guard(z, out, probe);
     }
 
     /**
@@ -264,43 +262,5 @@ public final class EddySpectrumZone {
         out.dConvectiveFraction[i] = fraction;
         out.dDiffusion[i] = mixing;
         return (nabla * 0.0 + velocity * 0.0) + (fraction * 0.0 + mixing * 0.0);
-    }
-
-    private static void guard(ZoneState z, ConvectionResult out, double probe) {
-        probe += ((((out.nablaRad + out.nabla) + (out.nablaElement + out.velocity))
-                + ((out.convectiveFraction + out.radiativeFraction) + (out.efficiency + out.lossParameter)))
-                + ((out.scaleHeight + out.mixingLength) + out.diffusion)) * 0.0;
-        ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
-    }
-
-    private static void stable(ZoneState z, Regime regime, double nablaRad, double semiconvection,
-                               double thermohaline, ConvectionResult out) {
-        // out.dNabla already holds d nabla_rad
-        out.nabla = nablaRad;
-        out.nablaElement = nablaRad;
-        out.velocity = 0.0;
-        out.convectiveFraction = 0.0;
-        out.radiativeFraction = 1.0;
-        out.efficiency = 0.0;
-        Arrays.fill(out.dVelocity, 0.0);
-        Arrays.fill(out.dConvectiveFraction, 0.0);
-        if (regime == Regime.SEMICONVECTIVE) {
-            out.diffusion = MixingCoefficients.semiconvectiveWithDerivatives(semiconvection, z.temperature,
-                    z.density, z.opacity, z.cp, nablaRad, out.dNabla, z.nablaAd, z.phi, z.delta, z.nablaMu,
-                    out.dDiffusion);
-        } else if (regime == Regime.THERMOHALINE) {
-            out.diffusion = MixingCoefficients.thermohalineWithDerivatives(thermohaline, z.temperature,
-                    z.density, z.opacity, z.cp, nablaRad, out.dNabla, z.nablaAd, z.phi, z.delta, z.nablaMu,
-                    out.dDiffusion);
-        } else {
-            out.diffusion = 0.0;
-            Arrays.fill(out.dDiffusion, 0.0);
-        }
-        double a = 0.0;
-        for (int i = 0; i < ZoneInput.COUNT; i++) {
-            a += (out.dNabla[i] * 0.0 + out.dVelocity[i] * 0.0) + (out.dConvectiveFraction[i] * 0.0
-                    + out.dDiffusion[i] * 0.0);
-        }
-        guard(z, out, a);
     }
 }

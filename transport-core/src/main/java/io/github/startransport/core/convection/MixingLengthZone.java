@@ -1126,7 +1126,7 @@ public final class MixingLengthZone {
      *
      * @param probe sum of (entry * 0) over the derivatives already written, or 0
      */
-    private static void guard(ZoneState z, ConvectionResult out, double probe) {
+    static void guard(ZoneState z, ConvectionResult out, double probe) {
         // a short tree of sums (any non-finite term makes it NaN)
         probe += ((((out.nablaRad + out.nabla) + (out.nablaElement + out.velocity))
                 + ((out.convectiveFraction + out.radiativeFraction) + (out.efficiency + out.lossParameter)))
@@ -1145,8 +1145,12 @@ public final class MixingLengthZone {
         return a + b;
     }
 
-    private static void stable(ZoneState z, Regime regime, double nablaRad, double semiconvection,
-                               double thermohaline, ConvectionResult out) {
+    /**
+     * A stable zone's result (also the full-spectrum model's): nabla = nabla_rad, no convective flux or
+     * velocity, and the semiconvective or thermohaline coefficient where the regime has one.
+     */
+    static void stable(ZoneState z, Regime regime, double nablaRad, double semiconvection,
+                       double thermohaline, ConvectionResult out) {
         // out.dNabla already holds d nabla_rad
         out.nabla = nablaRad;
         out.nablaElement = nablaRad;
