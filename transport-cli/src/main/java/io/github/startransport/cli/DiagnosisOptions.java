@@ -199,17 +199,9 @@ final class DiagnosisOptions {
         ConvectionModel convectionModel = asOption("--convection", convectionName,
                 () -> transport.convection(convectionName, finalConvectionOptions));
 
-        OpacityModel opacityModel;
-        String opacityName;
-        if (opacityTable != null) {
-            opacityName = ModelNames.OPACITY_TABLE_MODEL;
-            opacityModel = transport.opacity(opacityName, ModelOptions.defaults()
-                    .with(ModelNames.OPACITY_TABLE_FILE, opacityTable.toAbsolutePath().toString()));
-        } else {
-            opacityName = opacity != null ? opacity : Catalog.defaultModel(transport, ModelFamily.OPACITY);
-            opacityModel = asOption("--opacity", opacityName, () -> transport.opacity(opacityName,
-                    ModelOptions.defaults()));
-        }
+        ChosenOpacity chosenOpacity = ChosenOpacity.of(transport, opacity, opacityTable);
+        OpacityModel opacityModel = chosenOpacity.model();
+        String opacityName = chosenOpacity.name();
         ThermodynamicsModel thermo = transport.thermodynamics(null, ModelOptions.defaults());
         ProfileDiagnoser diagnoser = asOption("--overshoot-f", "", () -> transport.diagnoser(null,
                 diagnosisOptions()));

@@ -189,17 +189,9 @@ final class EnvelopeCommand implements Callable<Integer> {
         ModelOptions finalConvectionOptions = convectionOptions;
         ConvectionModel convectionModel = DiagnosisOptions.asOption("--convection", convectionName,
                 () -> transport.convection(convectionName, finalConvectionOptions));
-        OpacityModel opacityModel;
-        String opacityName;
-        if (opacityTable != null) {
-            opacityName = ModelNames.OPACITY_TABLE_MODEL;
-            opacityModel = transport.opacity(opacityName, ModelOptions.defaults()
-                    .with(ModelNames.OPACITY_TABLE_FILE, opacityTable.toAbsolutePath().toString()));
-        } else {
-            opacityName = opacity != null ? opacity : Catalog.defaultModel(transport, ModelFamily.OPACITY);
-            opacityModel = DiagnosisOptions.asOption("--opacity", opacityName,
-                    () -> transport.opacity(opacityName, ModelOptions.defaults()));
-        }
+        ChosenOpacity chosenOpacity = ChosenOpacity.of(transport, opacity, opacityTable);
+        OpacityModel opacityModel = chosenOpacity.model();
+        String opacityName = chosenOpacity.name();
         String thermoName = thermodynamics != null ? thermodynamics
                 : Catalog.defaultModel(transport, ModelFamily.THERMODYNAMICS);
         ThermodynamicsModel thermo = DiagnosisOptions.asOption("--thermodynamics", thermoName,
