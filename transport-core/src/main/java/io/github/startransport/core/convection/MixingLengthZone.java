@@ -111,7 +111,7 @@ public final class MixingLengthZone {
 
     /**
      * Doubles of working space per zone: three sections of {@link ZoneInput#COUNT} (the intermediate
-     * values that pass from {@link #front} to the cubic and to {@link #back}). In a per-zone call the
+     * values that pass from {@link #front} to the cubic, to {@link #values} and to {@link #jacobian}). In a per-zone call the
      * sections are the result's {@code dVelocity}, {@code dConvectiveFraction} and {@code dDiffusion},
      * read before they are overwritten; in a batch call a chunk of zones shares the columns' work array.
      */
@@ -154,6 +154,15 @@ public final class MixingLengthZone {
     /** Batch calls only: the zone's {@link #front} code and its efficiency Gamma. */
     private static final int CODE = 3;
     private static final int GAMMA = 4;
+    /** Written by {@link #values} for {@link #jacobian}: 1/D, d Gamma / d S, the shares of W, v, F_conv / F, D_conv, the probe. */
+    private static final int INV_DEN = 5;
+    private static final int SENSITIVITY = 6;
+    private static final int SHARE_RAD = 7;
+    private static final int SHARE_SUPER = 8;
+    private static final int VELOCITY_OUT = 9;
+    private static final int CONVECTIVE_OUT = 10;
+    private static final int DIFFUSION_OUT = 11;
+    private static final int PROBE = 12;
 
     /** {@link #front} codes below 0: the zone is refused (by the caller, which holds the zone for the message). */
     private static final int INVALID = -1;
@@ -224,14 +233,15 @@ public final class MixingLengthZone {
 
     /**
      * The batch calls. Chunks of {@link #CHUNK} zones go through the per-zone stages one stage at a
-     * time: {@link #front} for every zone of the chunk, then the cubic, then {@link #back}, which writes
-     * the values straight into the columns and the Jacobian straight into the zone-major block (or into
-     * a zone-major staging area that is copied into the columns, or into the buffer, once per chunk).
-     * A zone's dependent chain of divisions, roots and Halley steps then overlaps with its neighbours'
-     * instead of running alone, and no zone goes through the per-zone result. The stages are those of the per-zone call,
-     * so every value is bit for bit the same; zones that are not convective go through the per-zone
-     * finish. Zones are finished, and refused, in order: a refused zone leaves every zone before it
-     * written.
+     * time: {@link #front} over the chunk, the cubic, {@link #values} over the chunk (which writes the
+     * values straight into the columns), then zone by zone {@link #jacobian}, which writes the Jacobian
+     * straight into the zone-major block (or into a zone-major staging area that is copied into the
+     * columns, or into the buffer, once per chunk). A zone's dependent chain of divisions, roots and
+     * Halley steps then overlaps with its neighbours' instead of running alone, the first two stages
+     * run as loops without a call per zone, and no zone goes through the per-zone result. The stages
+     * are those of the per-zone call, so every value is bit for bit the same; zones that are not
+     * convective go through the per-zone finish. Zones are finished, and refused, in order: a refused
+     * zone leaves every zone before it written (later zones of its chunk may hold their values too).
      */
     private static void solveBatch(ConvectionSettings settings, double eddyShape, ZoneColumns in, int from, int to,
                                    ConvectionColumns out, boolean jacobian, double[] block, DoubleBuffer buffer,
@@ -264,12 +274,7 @@ public final class MixingLengthZone {
         final double[] phi = in.phi;
         for (int c0 = from; c0 < to; c0 += CHUNK) {
             final int c1 = Math.min(to, c0 + CHUNK);
-            for (int k = c0; k < c1; k++) {
-                final int o = (k - c0) * SCRATCH;
-                work[o + 2 * ZoneInput.COUNT + CODE] = front(t[k], rho[k], p[k], lum[k], m[k], r[k], kappa[k], cp[k],
-                        nablaAd[k], delta[k], nablaMu[k], phi[k], alpha, geometry, eddyShape, limit, criterion,
-                        work, o, null);
-            }
+            front(null, in, c0, c1, alpha, geometry, eddyShape, limit, criterion, work, null);
             for (int k = c0; k < c1; k++) {
                 final int o = (k - c0) * SCRATCH;
                 final int c = o + 2 * ZoneInput.COUNT;
@@ -279,6 +284,7 @@ public final class MixingLengthZone {
                     work[c + GAMMA] = efficiency(code, work[b + A0], work[b + RHS], work[b + BETA], transparent, starts);
                 }
             }
+            values(work, null, out, c0, c1);
             for (int k = c0; k < c1; k++) {
                 final int o = (k - c0) * SCRATCH;
                 final int c = o + 2 * ZoneInput.COUNT;
@@ -289,8 +295,9 @@ public final class MixingLengthZone {
                         : origin + k * ZoneMajorJacobian.PER_ZONE;
                 try {
                     if (code >= CUBIC) {
-                        final double probe = back(code, work[c + GAMMA], jacobian, work, o, null, out, k, jac, base,
-                                stride);
+                        final double probe = jacobian
+                                ? work[c + PROBE] + jacobian(code, work[c + GAMMA], work, o, null, jac, base, stride)
+                                : work[c + PROBE];
                         if (probe != 0.0) {
                             ZoneChecks.finiteOutputs("nabla", out.nabla[k], probe, in.load(k, out.workZone));
                         }
@@ -431,12 +438,16 @@ public final class MixingLengthZone {
                              CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
                              ConvectionResult out, boolean jacobian) {
         // the scratch of the stages is the result's own last three derivative arrays (written last)
-        final int code = front(z.temperature, z.density, z.pressure, z.luminosity, z.mass, z.radius, z.opacity, z.cp,
-                z.nablaAd, z.delta, z.nablaMu, z.phi, alpha, geometry, eddyShape, limit, criterion, null, 0, out);
+        final int code = front(z, null, 0, 1, alpha, geometry, eddyShape, limit, criterion, null, out);
         if (code >= CUBIC) {
             final double[] b = out.dConvectiveFraction;
             final double gamma = efficiency(code, b[A0], b[RHS], b[BETA], eddyShape > 0.0, geometry.cubicStarts());
-            final double probe = back(code, gamma, jacobian, null, 0, out, null, 0, null, 0, 1);
+            final double[] c = out.dDiffusion;
+            c[CODE] = code;
+            c[GAMMA] = gamma;
+            values(null, out, null, 0, 1);
+            final double valuesProbe = c[PROBE];
+            final double probe = jacobian ? valuesProbe + jacobian(code, gamma, null, 0, out, null, 0, 1) : valuesProbe;
             ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
         } else {
             finish(code, z, semiconvection, thermohaline, null, 0, out);
@@ -456,7 +467,7 @@ public final class MixingLengthZone {
     }
 
     /**
-     * A zone that {@link #back} does not finish: a stable one (its result written into {@code out}), or
+     * A zone that {@link #values} does not finish: a stable one (its result written into {@code out}), or
      * one that is refused.
      */
     private static void finish(int code, ZoneState z, double semiconvection, double thermohaline,
@@ -492,184 +503,348 @@ public final class MixingLengthZone {
      * The first stage of a zone: validation, the reciprocals of the inputs, nabla_rad, H_P, l, U, the
      * regime and the right-hand side of the cubic, written into three scratch sections of
      * {@link ZoneInput#COUNT} doubles (A, B and C). Refuses nothing itself: the code says what the
-     * caller must do.
+     * caller must do. The loop over a batch call's zones is here rather than in the caller, so that the
+     * compiler keeps the whole stage in one piece of code instead of calling it once per zone (a
+     * per-zone call runs it once, for its zone).
      *
-     * @return {@link #CUBIC} or {@link #COMPOSITION} for a convective zone; the ordinal of the
+     * @param z        the zone of a per-zone call, or null
+     * @param in       the columns of a batch call (when z is null)
+     * @param c0       first zone (inclusive); 0 for a per-zone call
+     * @param c1       last zone (exclusive); 1 for a per-zone call
+     * @param alpha    mixing-length parameter
+     * @param geometry geometry constants
+     * @param eddyShape y of the transparency correction, or 0 for none
+     * @param limit    near-centre limit of the mixing length
+     * @param criterion stability criterion
+     * @param scratch  a batch call's work array (zone k's scratch at (k - c0) * SCRATCH, its code stored
+     *                 there too), or null for the result's own arrays
+     * @param out      the result whose arrays are the scratch of a per-zone call
+     * @return for the last zone: {@link #CUBIC} or {@link #COMPOSITION} for a convective zone; the ordinal of the
      *         {@link Regime} of a stable zone; {@link #INVALID}, {@link #OUT_OF_RANGE} or
      *         {@link #NO_FRACTION} for a zone to refuse
      */
-    private static int front(double t, double rho, double p, double lum, double m, double r, double kappa,
-                             double cp, double nablaAd, double delta, double nablaMu, double phi, double alpha,
+    private static int front(ZoneState z, ZoneColumns in, int c0, int c1, double alpha,
                              MixingLengthGeometry geometry, double eddyShape, CentreLimit limit, Criterion criterion,
-                             double[] scratch, int o, ConvectionResult out) {
-        // Normal path: every input that is inverted lies in [2^-256, 2^256) (one test on the bit
-        // patterns, which also proves it finite and > 0) and the other fields are valid. Otherwise the
-        // detailed checks run, which refuse naming the first bad field.
-        final long spread = offset(t) | offset(rho) | offset(p) | offset(m) | offset(r) | offset(kappa)
-                | offset(cp) | offset(delta) | offset(alpha);
-        final double inf = Double.POSITIVE_INFINITY;
-        final boolean ordinary = ((spread >>> ORDINARY_SHIFT) == 0L) & (Math.abs(lum) < inf)
-                & (nablaAd > 0.0) & (nablaAd < 1.0) & (phi > 0.0) & (phi < inf) & (Math.abs(nablaMu) < inf);
-        if (!ordinary && !valid(t, rho, p, lum, m, r, kappa, cp, nablaAd, delta, nablaMu, phi)) {
-            return INVALID;
-        }
+                             double[] scratch, ConvectionResult out) {
+        int code = INVALID;
+        for (int k = c0; k < c1; k++) {
+            // the zone's inputs: from the zone of a per-zone call, or from the columns of a batch call
+            final double t = z != null ? z.temperature : in.temperature[k];
+            final double rho = z != null ? z.density : in.density[k];
+            final double p = z != null ? z.pressure : in.pressure[k];
+            final double lum = z != null ? z.luminosity : in.luminosity[k];
+            final double m = z != null ? z.mass : in.mass[k];
+            final double r = z != null ? z.radius : in.radius[k];
+            final double kappa = z != null ? z.opacity : in.opacity[k];
+            final double cp = z != null ? z.cp : in.cp[k];
+            final double nablaAd = z != null ? z.nablaAd : in.nablaAd[k];
+            final double delta = z != null ? z.delta : in.delta[k];
+            final double nablaMu = z != null ? z.nablaMu : in.nablaMu[k];
+            final double phi = z != null ? z.phi : in.phi[k];
+            final int o = scratch != null ? (k - c0) * SCRATCH : 0;
+            // Normal path: every input that is inverted lies in [2^-256, 2^256) (one test on the bit
+            // patterns, which also proves it finite and > 0) and the other fields are valid. Otherwise the
+            // detailed checks run, which refuse naming the first bad field.
+            final long spread = offset(t) | offset(rho) | offset(p) | offset(m) | offset(r) | offset(kappa)
+                    | offset(cp) | offset(delta) | offset(alpha);
+            final double inf = Double.POSITIVE_INFINITY;
+            final boolean ordinary = ((spread >>> ORDINARY_SHIFT) == 0L) & (Math.abs(lum) < inf)
+                    & (nablaAd > 0.0) & (nablaAd < 1.0) & (phi > 0.0) & (phi < inf) & (Math.abs(nablaMu) < inf);
+            if (!ordinary && !valid(t, rho, p, lum, m, r, kappa, cp, nablaAd, delta, nablaMu, phi)) {
+                code = mark(scratch, o, INVALID);
+                continue;
+            }
 
-        // The reciprocals of the inputs first, independent of the value chain, which is then products
-        // and two independent square roots up to U. On the normal path three reciprocals come from one
-        // division (1/x = y z / (x y z)), whose products cannot overflow or underflow there.
-        final double invT;
-        final double invRho;
-        final double invP;
-        final double invM;
-        final double invR;
-        final double invKappa;
-        final double invCp;
-        final double invDelta;
-        final double invAlpha;
-        if (ordinary) {
-            final double rhoP = rho * p;
-            final double invRhoPDelta = 1.0 / (rhoP * delta);
-            final double mR = m * r;
-            final double invMRT = 1.0 / (mR * t);
-            final double kappaCp = kappa * cp;
-            final double invKappaCpAlpha = 1.0 / (kappaCp * alpha);
-            invRho = (p * delta) * invRhoPDelta;
-            invP = (rho * delta) * invRhoPDelta;
-            invDelta = rhoP * invRhoPDelta;
-            invM = (r * t) * invMRT;
-            invR = (m * t) * invMRT;
-            invT = mR * invMRT;
-            invKappa = (cp * alpha) * invKappaCpAlpha;
-            invCp = (kappa * alpha) * invKappaCpAlpha;
-            invAlpha = kappaCp * invKappaCpAlpha;
-        } else {
-            invT = 1.0 / t;
-            invRho = 1.0 / rho;
-            invP = 1.0 / p;
-            invM = 1.0 / m;
-            invR = 1.0 / r;
-            invKappa = 1.0 / kappa;
-            invCp = 1.0 / cp;
-            invDelta = 1.0 / delta;
-            invAlpha = 1.0 / alpha;
-        }
+            // The reciprocals of the inputs first, independent of the value chain, which is then products
+            // and two independent square roots up to U. On the normal path three reciprocals come from one
+            // division (1/x = y z / (x y z)), whose products cannot overflow or underflow there.
+            final double invT;
+            final double invRho;
+            final double invP;
+            final double invM;
+            final double invR;
+            final double invKappa;
+            final double invCp;
+            final double invDelta;
+            final double invAlpha;
+            if (ordinary) {
+                final double rhoP = rho * p;
+                final double invRhoPDelta = 1.0 / (rhoP * delta);
+                final double mR = m * r;
+                final double invMRT = 1.0 / (mR * t);
+                final double kappaCp = kappa * cp;
+                final double invKappaCpAlpha = 1.0 / (kappaCp * alpha);
+                invRho = (p * delta) * invRhoPDelta;
+                invP = (rho * delta) * invRhoPDelta;
+                invDelta = rhoP * invRhoPDelta;
+                invM = (r * t) * invMRT;
+                invR = (m * t) * invMRT;
+                invT = mR * invMRT;
+                invKappa = (cp * alpha) * invKappaCpAlpha;
+                invCp = (kappa * alpha) * invKappaCpAlpha;
+                invAlpha = kappaCp * invKappaCpAlpha;
+            } else {
+                invT = 1.0 / t;
+                invRho = 1.0 / rho;
+                invP = 1.0 / p;
+                invM = 1.0 / m;
+                invR = 1.0 / r;
+                invKappa = 1.0 / kappa;
+                invCp = 1.0 / cp;
+                invDelta = 1.0 / delta;
+                invAlpha = 1.0 / alpha;
+            }
 
-        // nabla_rad per unit L, then nabla_rad: the same arithmetic as RadiativeGradient.valueAndDerivatives
-        final double perL = RadiativeGradient.value(kappa, 1.0, p, m, t);
-        final double nablaRad = perL * lum;
-        // g = G m / r^2 and 1/g; H_P = (P / rho) / g and 1/H_P
-        final double gravity = (G * m) * (invR * invR);
-        final double invGravity = (r * r) * (invM * INV_G);
-        final double pressureHeight = p * invRho;
-        final double scaleHeight = pressureHeight * invGravity;
-        final boolean capped = limit == CentreLimit.RADIUS && r < scaleHeight;
-        final double length = alpha * (capped ? r : scaleHeight);
-        // sqrt(H_P / (a g delta)) = sqrt(P / (rho delta)) / (g sqrt(a)) and its inverse, the velocity
-        // scale sqrt(a g delta / H_P) = g sqrt(a) sqrt(delta rho / P): two independent roots
-        final double rootA = geometry.rootVelocityFactor();
-        final double thermal = Math.sqrt(pressureHeight * invDelta);
-        final double buoyant = Math.sqrt((delta * rho) * invP);
-        final double velocityScale = gravity * (rootA * buoyant);
-        // U = c sigma T^3 sqrt(H_P / (a g delta)) / (2 c_P kappa rho^2 l^2) as numerator / denominator,
-        // so that U and 1/U are two independent divisions
-        final double uNumerator = geometry.lossFactor() * SIGMA * t * t * t * (thermal * invGravity);
-        final double uDenominator = 2.0 * rootA * cp * kappa * rho * rho * length * length;
-        final double u = uNumerator / uDenominator;
-        final double invU = uDenominator / uNumerator;
-        final double nablaL = LedouxGradient.value(nablaAd, phi, delta, nablaMu);
-        final Regime regime = StabilityClassifier.classify(criterion, nablaRad, nablaAd, nablaL, nablaMu);
+            // nabla_rad per unit L, then nabla_rad: the same arithmetic as RadiativeGradient.valueAndDerivatives
+            final double perL = RadiativeGradient.value(kappa, 1.0, p, m, t);
+            final double nablaRad = perL * lum;
+            // g = G m / r^2 and 1/g; H_P = (P / rho) / g and 1/H_P
+            final double gravity = (G * m) * (invR * invR);
+            final double invGravity = (r * r) * (invM * INV_G);
+            final double pressureHeight = p * invRho;
+            final double scaleHeight = pressureHeight * invGravity;
+            final boolean capped = limit == CentreLimit.RADIUS && r < scaleHeight;
+            final double length = alpha * (capped ? r : scaleHeight);
+            // sqrt(H_P / (a g delta)) = sqrt(P / (rho delta)) / (g sqrt(a)) and its inverse, the velocity
+            // scale sqrt(a g delta / H_P) = g sqrt(a) sqrt(delta rho / P): two independent roots
+            final double rootA = geometry.rootVelocityFactor();
+            final double thermal = Math.sqrt(pressureHeight * invDelta);
+            final double buoyant = Math.sqrt((delta * rho) * invP);
+            final double velocityScale = gravity * (rootA * buoyant);
+            // U = c sigma T^3 sqrt(H_P / (a g delta)) / (2 c_P kappa rho^2 l^2) as numerator / denominator,
+            // so that U and 1/U are two independent divisions
+            final double uNumerator = geometry.lossFactor() * SIGMA * t * t * t * (thermal * invGravity);
+            final double uDenominator = 2.0 * rootA * cp * kappa * rho * rho * length * length;
+            final double u = uNumerator / uDenominator;
+            final double invU = uDenominator / uNumerator;
+            final double nablaL = LedouxGradient.value(nablaAd, phi, delta, nablaMu);
+            final Regime regime = StabilityClassifier.classify(criterion, nablaRad, nablaAd, nablaL, nablaMu);
 
-        final double w = nablaRad - nablaAd;
-        final boolean transparent = eddyShape > 0.0;
-        final double omega = kappa * rho * length;
-        final double yw2 = eddyShape * omega * omega;
-        // q = y omega^2 / (1 + y omega^2) and 1/q = 1 + 1/(y omega^2), independent of each other
-        final double thin = transparent ? 1.0 / (1.0 + yw2) : 0.0;
-        final double q = transparent ? yw2 * thin : 1.0;
-        final double invQ = transparent ? 1.0 + 1.0 / yw2 : 1.0;
-        final double uLoss = q * u;
-        final double invULoss = invQ * invU;
-        final double a0 = q * geometry.cubicCoefficient();
-        final double invFourULoss2 = 0.25 * invULoss * invULoss;
-        final double s = w * invFourULoss2;
-        // 1/W and 1/nabla_rad from one division when their product is far from overflow and underflow
-        final double wNablaRad = w * nablaRad;
-        final double invW;
-        final double invNablaRad;
-        if (wNablaRad > 1e-300 && wNablaRad < 1e300) {
-            final double both = 1.0 / wNablaRad;
-            invW = nablaRad * both;
-            invNablaRad = w * both;
-        } else {
-            invW = 1.0 / w;
-            invNablaRad = 1.0 / nablaRad;
-        }
-        // the composition term of the buoyancy, b = -(phi/delta) nabla_mu, where it destabilises
-        final double buoyancy = nablaMu < 0.0 ? (phi * invDelta) * -nablaMu : 0.0;
-        final boolean driven = buoyancy > 0.0;
-        final double beta = driven ? buoyancy * invFourULoss2 : 0.0;
+            final double w = nablaRad - nablaAd;
+            final boolean transparent = eddyShape > 0.0;
+            final double omega = kappa * rho * length;
+            final double yw2 = eddyShape * omega * omega;
+            // q = y omega^2 / (1 + y omega^2) and 1/q = 1 + 1/(y omega^2), independent of each other
+            final double thin = transparent ? 1.0 / (1.0 + yw2) : 0.0;
+            final double q = transparent ? yw2 * thin : 1.0;
+            final double invQ = transparent ? 1.0 + 1.0 / yw2 : 1.0;
+            final double uLoss = q * u;
+            final double invULoss = invQ * invU;
+            final double a0 = q * geometry.cubicCoefficient();
+            final double invFourULoss2 = 0.25 * invULoss * invULoss;
+            final double s = w * invFourULoss2;
+            // 1/W and 1/nabla_rad from one division when their product is far from overflow and underflow
+            final double wNablaRad = w * nablaRad;
+            final double invW;
+            final double invNablaRad;
+            if (wNablaRad > 1e-300 && wNablaRad < 1e300) {
+                final double both = 1.0 / wNablaRad;
+                invW = nablaRad * both;
+                invNablaRad = w * both;
+            } else {
+                invW = 1.0 / w;
+                invNablaRad = 1.0 / nablaRad;
+            }
+            // the composition term of the buoyancy, b = -(phi/delta) nabla_mu, where it destabilises
+            final double buoyancy = nablaMu < 0.0 ? (phi * invDelta) * -nablaMu : 0.0;
+            final boolean driven = buoyancy > 0.0;
+            final double beta = driven ? buoyancy * invFourULoss2 : 0.0;
 
-        // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
-        final double[] a = scratch != null ? scratch : out.dVelocity;
-        final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
-        final double[] c = scratch != null ? scratch : out.dDiffusion;
-        final int ao = scratch != null ? o : 0;
-        final int bo = scratch != null ? o + ZoneInput.COUNT : 0;
-        final int co = scratch != null ? o + 2 * ZoneInput.COUNT : 0;
-        // each section's highest slot first: its bounds check covers the others
-        a[ao + NABLA_AD] = nablaAd;
-        b[bo + U] = u;
-        c[co + NABLA_MU] = nablaMu;
-        a[ao + INV_T] = invT;
-        a[ao + INV_RHO] = invRho;
-        a[ao + INV_P] = invP;
-        a[ao + INV_M] = invM;
-        a[ao + INV_R] = invR;
-        a[ao + INV_KAPPA] = invKappa;
-        a[ao + INV_CP] = invCp;
-        a[ao + INV_DELTA] = invDelta;
-        a[ao + INV_ALPHA] = invAlpha;
-        // d ln l / d ln H_P (0 when l = alpha r), and the loss elasticity 2 (1 - q) of d ln q = 2 (1 - q) d ln omega
-        a[ao + LENGTH_HP] = capped ? 0.0 : 1.0;
-        a[ao + LOSS_ELASTICITY] = 2.0 * thin;
-        a[ao + PER_L] = perL;
-        b[bo + NABLA_RAD] = nablaRad;
-        b[bo + INV_NABLA_RAD] = invNablaRad;
-        b[bo + EXCESS] = w;
-        b[bo + INV_EXCESS] = invW;
-        b[bo + A0] = a0;
-        b[bo + INV_FOUR_U_LOSS2] = invFourULoss2;
-        b[bo + RHS] = s;
-        b[bo + BETA] = beta;
-        b[bo + B] = buoyancy;
-        b[bo + U_LOSS] = uLoss;
-        b[bo + VELOCITY_SCALE] = velocityScale;
-        b[bo + LENGTH] = length;
-        c[co + SCALE_HEIGHT] = scaleHeight;
-        c[co + PHI] = phi;
+            // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
+            final double[] a = scratch != null ? scratch : out.dVelocity;
+            final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
+            final double[] c = scratch != null ? scratch : out.dDiffusion;
+            final int ao = scratch != null ? o : 0;
+            final int bo = scratch != null ? o + ZoneInput.COUNT : 0;
+            final int co = scratch != null ? o + 2 * ZoneInput.COUNT : 0;
+            // each section's highest slot first: its bounds check covers the others
+            a[ao + NABLA_AD] = nablaAd;
+            b[bo + U] = u;
+            c[co + NABLA_MU] = nablaMu;
+            a[ao + INV_T] = invT;
+            a[ao + INV_RHO] = invRho;
+            a[ao + INV_P] = invP;
+            a[ao + INV_M] = invM;
+            a[ao + INV_R] = invR;
+            a[ao + INV_KAPPA] = invKappa;
+            a[ao + INV_CP] = invCp;
+            a[ao + INV_DELTA] = invDelta;
+            a[ao + INV_ALPHA] = invAlpha;
+            // d ln l / d ln H_P (0 when l = alpha r), and the loss elasticity 2 (1 - q) of d ln q = 2 (1 - q) d ln omega
+            a[ao + LENGTH_HP] = capped ? 0.0 : 1.0;
+            a[ao + LOSS_ELASTICITY] = 2.0 * thin;
+            a[ao + PER_L] = perL;
+            b[bo + NABLA_RAD] = nablaRad;
+            b[bo + INV_NABLA_RAD] = invNablaRad;
+            b[bo + EXCESS] = w;
+            b[bo + INV_EXCESS] = invW;
+            b[bo + A0] = a0;
+            b[bo + INV_FOUR_U_LOSS2] = invFourULoss2;
+            b[bo + RHS] = s;
+            b[bo + BETA] = beta;
+            b[bo + B] = buoyancy;
+            b[bo + U_LOSS] = uLoss;
+            b[bo + VELOCITY_SCALE] = velocityScale;
+            b[bo + LENGTH] = length;
+            c[co + SCALE_HEIGHT] = scaleHeight;
+            c[co + PHI] = phi;
 
-        if (regime != Regime.CONVECTIVE) {
-            return regime.ordinal();
+            if (regime != Regime.CONVECTIVE) {
+                code = mark(scratch, o, regime.ordinal());
+                continue;
+            }
+            // the cubic's right-hand side S (with composition, the scale |S| + beta of the equation) must be a
+            // normal double: outside it U' is beyond ~1e+-154 and S or Gamma do not fit. (W + b > 0 is not
+            // required of the rounded terms: the composition solver also takes a W + b that rounding made <= 0.)
+            final double drive = driven ? Math.abs(s) + beta : s;
+            if (!(drive >= Double.MIN_NORMAL && drive <= Double.MAX_VALUE && beta <= Double.MAX_VALUE)) {
+                code = mark(scratch, o, OUT_OF_RANGE);
+                continue;
+            }
+            if (nablaRad == 0.0) {
+                code = mark(scratch, o, NO_FRACTION);
+                continue;
+            }
+            code = mark(scratch, o, driven ? COMPOSITION : CUBIC);
         }
-        // the cubic's right-hand side S (with composition, the scale |S| + beta of the equation) must be a
-        // normal double: outside it U' is beyond ~1e+-154 and S or Gamma do not fit. (W + b > 0 is not
-        // required of the rounded terms: the composition solver also takes a W + b that rounding made <= 0.)
-        final double drive = driven ? Math.abs(s) + beta : s;
-        if (!(drive >= Double.MIN_NORMAL && drive <= Double.MAX_VALUE && beta <= Double.MAX_VALUE)) {
-            return OUT_OF_RANGE;
+        return code;
+    }
+
+    /** Stores a zone's {@link #front} code in its scratch (batch calls) and returns it. */
+    private static int mark(double[] scratch, int o, int code) {
+        if (scratch != null) {
+            scratch[o + 2 * ZoneInput.COUNT + CODE] = code;
         }
-        if (nablaRad == 0.0) {
-            return NO_FRACTION;
-        }
-        return driven ? COMPOSITION : CUBIC;
+        return code;
     }
 
     /**
-     * The last stage of a convective zone: from Gamma and the scratch of {@link #front}, the values
-     * (into {@code out}, or into zone k of {@code columns} when that is not null) and, with
-     * {@code jacobian}, the Jacobian, one output's 13 entries at a time into {@code dn}, {@code dv},
-     * {@code df}, {@code dd} from the given offsets in {@link ZoneInput} order. Reads all of its scratch
-     * before it writes anything, so the scratch may be the result's own derivative arrays.
+     * The values stage of convective zones: from Gamma (in the scratch, slot {@link #GAMMA}) and the
+     * scratch of {@link #front}, D = a0 Gamma^2 + Gamma + 1 and the shares of W of
+     * {@link MixingLengthCubic} give nabla, nabla_e, v, F_conv / F, F_rad / F and D_conv, written into
+     * {@code out} (a per-zone call) or into zone k of {@code columns}. What the Jacobian stage needs
+     * of them goes into section C of the scratch, with the zone's probe (0, or NaN when a value is not
+     * finite; the caller refuses the zone). Like {@link #front} it loops over a batch call's zones
+     * itself; zones whose code is not a convective one are skipped.
+     *
+     * @param scratch a batch call's work array, or null for the result's own arrays
+     * @param out     the result of a per-zone call (values and scratch), or null
+     * @param columns the output columns of a batch call, or null
+     * @param c0      first zone (inclusive); 0 for a per-zone call
+     * @param c1      last zone (exclusive); 1 for a per-zone call
+     */
+    private static void values(double[] scratch, ConvectionResult out, ConvectionColumns columns, int c0, int c1) {
+        for (int k = c0; k < c1; k++) {
+            // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
+            final int o = scratch != null ? (k - c0) * SCRATCH : 0;
+            final double[] a = scratch != null ? scratch : out.dVelocity;
+            final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
+            final double[] c = scratch != null ? scratch : out.dDiffusion;
+            final int ao = scratch != null ? o : 0;
+            final int bo = scratch != null ? o + ZoneInput.COUNT : 0;
+            final int co = scratch != null ? o + 2 * ZoneInput.COUNT : 0;
+            final int code = (int) c[co + CODE];
+            if (code < CUBIC) {
+                continue;
+            }
+            // each section's highest slot first: its bounds check covers the others
+            final double nablaAd = a[ao + NABLA_AD];
+            final double u = b[bo + U];
+            final double nablaRad = b[bo + NABLA_RAD];
+            final double invNablaRad = b[bo + INV_NABLA_RAD];
+            final double w = b[bo + EXCESS];
+            final double a0 = b[bo + A0];
+            final double uLoss = b[bo + U_LOSS];
+            final double velocityScale = b[bo + VELOCITY_SCALE];
+            final double length = b[bo + LENGTH];
+            final double scaleHeight = c[co + SCALE_HEIGHT];
+            final double gamma = c[co + GAMMA];
+
+            final double den = MixingLengthCubic.denominator(a0, gamma);
+            final double invDen;
+            final double sensitivity;
+            if (code == COMPOSITION) {
+                // the slope of the equation with composition is the Jacobian stage's own
+                invDen = 1.0 / den;
+                sensitivity = 0.0;
+            } else {
+                // D and the cubic's slope 3 a0 Gamma^2 + 2 Gamma + 1 are both >= 1: their reciprocals from one
+                // division unless the product is near overflow
+                final double slope = (3.0 * a0 * gamma + 2.0) * gamma + 1.0;
+                final double denSlope = den * slope;
+                if (denSlope < 1e300) {
+                    final double both = 1.0 / denSlope;
+                    invDen = slope * both;
+                    sensitivity = den * both;
+                } else {
+                    invDen = 1.0 / den;
+                    sensitivity = 1.0 / slope;
+                }
+            }
+            final double a0Gamma2 = a0 * (gamma * gamma);
+            final double shareRad = a0Gamma2 * invDen;               // (nabla_rad - nabla) / W
+            final double shareSuper = (gamma + 1.0) * invDen;        // (nabla - nabla_ad) / W
+            final double nabla = nablaAd + w * shareSuper;
+            final double nablaElement = nablaAd + w * invDen;
+            final double x = 2.0 * uLoss * gamma;
+            final double velocity = length * velocityScale * x;
+            // F_conv / F = (W / nabla_rad) (a0 Gamma^2 / D): for W > 0 both factors lie in [0, 1), but their
+            // rounded product can land one ulp above 1 where both are 1 - ulp; it is bounded to 1 there. For
+            // W <= 0 (convection driven by composition alone) it is the signed fraction, <= 0 for L > 0.
+            final double product = w * shareRad * invNablaRad;
+            final double convective = w > 0.0 ? Math.min(product, 1.0) : product;
+            final double radiative = nabla * invNablaRad;
+            final double diffusion = MixingCoefficients.convective(velocity, length);
+            if (columns == null) {
+                out.regime = Regime.CONVECTIVE;
+                out.nablaRad = nablaRad;
+                out.lossParameter = u;
+                out.scaleHeight = scaleHeight;
+                out.mixingLength = length;
+                out.nabla = nabla;
+                out.nablaElement = nablaElement;
+                out.velocity = velocity;
+                out.convectiveFraction = convective;
+                out.radiativeFraction = radiative;
+                out.efficiency = gamma;
+                out.diffusion = diffusion;
+            } else {
+                if (columns.regime[k] != Regime.CONVECTIVE) {
+                    // a reference store costs a garbage-collector barrier: skipped when the regime is unchanged
+                    columns.regime[k] = Regime.CONVECTIVE;
+                }
+                columns.nablaRad[k] = nablaRad;
+                columns.lossParameter[k] = u;
+                columns.scaleHeight[k] = scaleHeight;
+                columns.mixingLength[k] = length;
+                columns.nabla[k] = nabla;
+                columns.nablaElement[k] = nablaElement;
+                columns.velocity[k] = velocity;
+                columns.convectiveFraction[k] = convective;
+                columns.radiativeFraction[k] = radiative;
+                columns.efficiency[k] = gamma;
+                columns.diffusion[k] = diffusion;
+            }
+            // a short tree of sums (any non-finite term makes it NaN)
+            final double probe = ((((nablaRad + nabla) + (nablaElement + velocity))
+                    + ((convective + radiative) + (gamma + u))) + ((scaleHeight + length) + diffusion)) * 0.0;
+            // for the Jacobian stage and the caller (the highest slot first: its bounds check covers the others)
+            c[co + PROBE] = probe;
+            c[co + INV_DEN] = invDen;
+            c[co + SENSITIVITY] = sensitivity;
+            c[co + SHARE_RAD] = shareRad;
+            c[co + SHARE_SUPER] = shareSuper;
+            c[co + VELOCITY_OUT] = velocity;
+            c[co + CONVECTIVE_OUT] = convective;
+            c[co + DIFFUSION_OUT] = diffusion;
+        }
+    }
+
+    /**
+     * The Jacobian stage of a convective zone, after {@link #values}: from Gamma and the scratch of
+     * {@link #front} and {@link #values}, one output's 13 entries at a time into the result's arrays (a
+     * per-zone call) or into {@code jac} from {@code base} with {@code stride} ({@link #put}). Reads all
+     * of its scratch before it writes anything, so the scratch may be the result's own derivative arrays.
      *
      * <p>The Jacobian is written as a few coefficients per output times the derivatives of the "base"
      * quantities each input moves: nabla_rad (R), nabla_ad (A), ln U' (mu), ln a0 (nu), ln l (lambda)
@@ -691,11 +866,10 @@ public final class MixingLengthZone {
      * output's coefficient of dB times d b / d nabla_mu = -phi/delta, d b / d phi = -nabla_mu/delta
      * and d b / d delta = -b/delta, written for nabla_mu and phi and added to the delta entries.
      *
-     * @return 0, or NaN when a value or a derivative is not finite (the caller refuses the zone)
+     * @return 0, or NaN when a derivative is not finite (the caller refuses the zone)
      */
-    private static double back(int code, double gamma, boolean jacobian, double[] scratch, int o,
-                               ConvectionResult out, ConvectionColumns columns, int k, double[] jac, int base,
-                               int stride) {
+    private static double jacobian(int code, double gamma, double[] scratch, int o, ConvectionResult out,
+                                   double[] jac, int base, int stride) {
         // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
         final double[] a = scratch != null ? scratch : out.dVelocity;
         final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
@@ -704,8 +878,7 @@ public final class MixingLengthZone {
         final int bo = scratch != null ? o + ZoneInput.COUNT : 0;
         final int co = scratch != null ? o + 2 * ZoneInput.COUNT : 0;
         // each section's highest slot first: its bounds check covers the others
-        final double nablaAd = a[ao + NABLA_AD];
-        final double u = b[bo + U];
+        final double diffusion = c[co + DIFFUSION_OUT];
         final double nablaMu = c[co + NABLA_MU];
         final double invT = a[ao + INV_T];
         final double invRho = a[ao + INV_RHO];
@@ -726,17 +899,17 @@ public final class MixingLengthZone {
         final double a0 = b[bo + A0];
         final double invFourULoss2 = b[bo + INV_FOUR_U_LOSS2];
         final double s = b[bo + RHS];
-        final double beta = b[bo + BETA];
         final double buoyancy = b[bo + B];
-        final double uLoss = b[bo + U_LOSS];
-        final double velocityScale = b[bo + VELOCITY_SCALE];
-        final double length = b[bo + LENGTH];
-        final double scaleHeight = c[co + SCALE_HEIGHT];
         final double phi = c[co + PHI];
+        final double invDen = c[co + INV_DEN];
+        final double shareRad = c[co + SHARE_RAD];
+        final double shareSuper = c[co + SHARE_SUPER];
+        final double sensitivity = c[co + SENSITIVITY];
+        final double velocity = c[co + VELOCITY_OUT];
+        final double convective = c[co + CONVECTIVE_OUT];
         final boolean driven = code == COMPOSITION;
 
         final double den = MixingLengthCubic.denominator(a0, gamma);
-        final double invDen;
         // d Gamma = gR (dR - dA) + gB dB + gMu mu + gNu nu and d ln v = vR (dR - dA) + vB dB + vMu mu + vNu nu
         // + lambda + sigma, with B = b
         final double gR;
@@ -750,7 +923,6 @@ public final class MixingLengthZone {
         final double a0Gamma2 = a0 * (gamma * gamma);
         if (driven) {
             // d Gamma = (Gamma dS + D d beta - (Gamma^2 - beta) Gamma^2 d a0) / F' (MixingLengthCubic.compositionSlope)
-            invDen = 1.0 / den;
             final double h = 1.0 / MixingLengthCubic.compositionSlope(a0, s, gamma);
             final double scaled = invFourULoss2 * h;
             gR = gamma * scaled;
@@ -762,19 +934,6 @@ public final class MixingLengthZone {
             vMu = 1.0 - 2.0 * gamma * den * h;
             vNu = -s * a0Gamma2 * invDen * h;
         } else {
-            // D and the cubic's slope 3 a0 Gamma^2 + 2 Gamma + 1 are both >= 1: their reciprocals from one
-            // division unless the product is near overflow
-            final double slope = (3.0 * a0 * gamma + 2.0) * gamma + 1.0;
-            final double denSlope = den * slope;
-            final double sensitivity;
-            if (denSlope < 1e300) {
-                final double both = 1.0 / denSlope;
-                invDen = slope * both;
-                sensitivity = den * both;
-            } else {
-                invDen = 1.0 / den;
-                sensitivity = 1.0 / slope;
-            }
             // the g's over Gamma written by S = Gamma D and S = W / (4 U'^2): gR / Gamma = sensitivity D / W,
             // gMu / Gamma = -2 sensitivity D, gNu / Gamma = -sensitivity a0 Gamma^2
             gR = sensitivity * invFourULoss2;
@@ -785,55 +944,6 @@ public final class MixingLengthZone {
             vB = 0.0;
             vMu = 1.0 - 2.0 * (sensitivity * den);
             vNu = sensitivity * -a0Gamma2;
-        }
-        final double shareRad = a0Gamma2 * invDen;               // (nabla_rad - nabla) / W
-        final double shareSuper = (gamma + 1.0) * invDen;        // (nabla - nabla_ad) / W
-        final double nabla = nablaAd + w * shareSuper;
-        final double nablaElement = nablaAd + w * invDen;
-        final double x = 2.0 * uLoss * gamma;
-        final double velocity = length * velocityScale * x;
-        // F_conv / F = (W / nabla_rad) (a0 Gamma^2 / D): for W > 0 both factors lie in [0, 1), but their
-        // rounded product can land one ulp above 1 where both are 1 - ulp; it is bounded to 1 there. For
-        // W <= 0 (convection driven by composition alone) it is the signed fraction, <= 0 for L > 0.
-        final double product = w * shareRad * invNablaRad;
-        final double convective = w > 0.0 ? Math.min(product, 1.0) : product;
-        final double radiative = nabla * invNablaRad;
-        final double diffusion = MixingCoefficients.convective(velocity, length);
-        if (columns == null) {
-            out.regime = Regime.CONVECTIVE;
-            out.nablaRad = nablaRad;
-            out.lossParameter = u;
-            out.scaleHeight = scaleHeight;
-            out.mixingLength = length;
-            out.nabla = nabla;
-            out.nablaElement = nablaElement;
-            out.velocity = velocity;
-            out.convectiveFraction = convective;
-            out.radiativeFraction = radiative;
-            out.efficiency = gamma;
-            out.diffusion = diffusion;
-        } else {
-            if (columns.regime[k] != Regime.CONVECTIVE) {
-                // a reference store costs a garbage-collector barrier: skipped when the regime is unchanged
-                columns.regime[k] = Regime.CONVECTIVE;
-            }
-            columns.nablaRad[k] = nablaRad;
-            columns.lossParameter[k] = u;
-            columns.scaleHeight[k] = scaleHeight;
-            columns.mixingLength[k] = length;
-            columns.nabla[k] = nabla;
-            columns.nablaElement[k] = nablaElement;
-            columns.velocity[k] = velocity;
-            columns.convectiveFraction[k] = convective;
-            columns.radiativeFraction[k] = radiative;
-            columns.efficiency[k] = gamma;
-            columns.diffusion[k] = diffusion;
-        }
-        // a short tree of sums (any non-finite term makes it NaN)
-        final double values = ((((nablaRad + nabla) + (nablaElement + velocity))
-                + ((convective + radiative) + (gamma + u))) + ((scaleHeight + length) + diffusion)) * 0.0;
-        if (!jacobian) {
-            return values;
         }
 
         // d(shareRad) = sR (dR - dA) + sMu mu + sNu nu
@@ -1002,7 +1112,7 @@ public final class MixingLengthZone {
         // nabla_mu and phi enter only through the composition term, added below
         put(out, jac, base, stride, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
         put(out, jac, base, stride, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
-        double probe = values;
+        double probe = 0.0;
         if (!(Math.abs(sum) <= Double.MAX_VALUE)) {
             for (int output = 0; output < ZoneMajorJacobian.OUTPUTS; output++) {
                 for (int i = 0; i < ZoneInput.COUNT; i++) {
