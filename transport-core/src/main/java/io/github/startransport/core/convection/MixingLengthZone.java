@@ -260,18 +260,6 @@ public final class MixingLengthZone {
         final boolean columnLayout = staged && buffer == null;
         final double[] jac = staged ? work : block;
         final int stride = columnLayout ? CHUNK : 1;
-        final double[] t = in.temperature;
-        final double[] rho = in.density;
-        final double[] p = in.pressure;
-        final double[] lum = in.luminosity;
-        final double[] m = in.mass;
-        final double[] r = in.radius;
-        final double[] kappa = in.opacity;
-        final double[] cp = in.cp;
-        final double[] nablaAd = in.nablaAd;
-        final double[] delta = in.delta;
-        final double[] nablaMu = in.nablaMu;
-        final double[] phi = in.phi;
         for (int c0 = from; c0 < to; c0 += CHUNK) {
             final int c1 = Math.min(to, c0 + CHUNK);
             front(null, in, c0, c1, alpha, geometry, eddyShape, limit, criterion, work, null);
@@ -285,6 +273,11 @@ public final class MixingLengthZone {
                 }
             }
             values(work, null, out, c0, c1);
+            if (jacobian) {
+                // zone-major: output o of zone k at base + o * COUNT, in the block or in the chunk's staging
+                jacobian(work, null, jac, columnLayout || staged ? STAGE : origin + c0 * ZoneMajorJacobian.PER_ZONE,
+                        columnLayout ? 1 : ZoneMajorJacobian.PER_ZONE, stride, c0, c1);
+            }
             for (int k = c0; k < c1; k++) {
                 final int o = (k - c0) * SCRATCH;
                 final int c = o + 2 * ZoneInput.COUNT;
@@ -295,9 +288,7 @@ public final class MixingLengthZone {
                         : origin + k * ZoneMajorJacobian.PER_ZONE;
                 try {
                     if (code >= CUBIC) {
-                        final double probe = jacobian
-                                ? work[c + PROBE] + jacobian(code, work[c + GAMMA], work, o, null, jac, base, stride)
-                                : work[c + PROBE];
+                        final double probe = work[c + PROBE];
                         if (probe != 0.0) {
                             ZoneChecks.finiteOutputs("nabla", out.nabla[k], probe, in.load(k, out.workZone));
                         }
@@ -447,7 +438,7 @@ public final class MixingLengthZone {
             c[GAMMA] = gamma;
             values(null, out, null, 0, 1);
             final double valuesProbe = c[PROBE];
-            final double probe = jacobian ? valuesProbe + jacobian(code, gamma, null, 0, out, null, 0, 1) : valuesProbe;
+            final double probe = jacobian ? valuesProbe + jacobian(null, out, null, 0, 0, 1, 0, 1) : valuesProbe;
             ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
         } else {
             finish(code, z, semiconvection, thermohaline, null, 0, out);
@@ -841,10 +832,13 @@ public final class MixingLengthZone {
     }
 
     /**
-     * The Jacobian stage of a convective zone, after {@link #values}: from Gamma and the scratch of
+     * The Jacobian stage of convective zones, after {@link #values}: from Gamma and the scratch of
      * {@link #front} and {@link #values}, one output's 13 entries at a time into the result's arrays (a
-     * per-zone call) or into {@code jac} from {@code base} with {@code stride} ({@link #put}). Reads all
-     * of its scratch before it writes anything, so the scratch may be the result's own derivative arrays.
+     * per-zone call) or into {@code jac} from zone k's base {@code base0 + (k - c0) zoneStep} with
+     * {@code stride} ({@link #put}). Reads all of a zone's scratch before it writes anything, so the
+     * scratch may be the result's own derivative arrays. Like {@link #front} it loops over a batch
+     * call's zones itself (zones whose code is not a convective one are skipped) and adds each zone's
+     * probe to the one {@link #values} left in its scratch.
      *
      * <p>The Jacobian is written as a few coefficients per output times the derivatives of the "base"
      * quantities each input moves: nabla_rad (R), nabla_ad (A), ln U' (mu), ln a0 (nu), ln l (lambda)
@@ -866,274 +860,296 @@ public final class MixingLengthZone {
      * output's coefficient of dB times d b / d nabla_mu = -phi/delta, d b / d phi = -nabla_mu/delta
      * and d b / d delta = -b/delta, written for nabla_mu and phi and added to the delta entries.
      *
-     * @return 0, or NaN when a derivative is not finite (the caller refuses the zone)
+     * @param scratch  a batch call's work array, or null for the result's own arrays
+     * @param out      the result of a per-zone call, or null
+     * @param jac      the zone-major block or the chunk's staging, or null for the result's arrays
+     * @param base0    index of the chunk's first zone's entry (0, 0) in {@code jac}
+     * @param zoneStep distance between two zones' entries (0, 0): 1 or {@link ZoneMajorJacobian#PER_ZONE}
+     * @param stride   distance between entries (o, i) and (o, i + 1): 1 or {@link #CHUNK}
+     * @param c0       first zone (inclusive); 0 for a per-zone call
+     * @param c1       last zone (exclusive); 1 for a per-zone call
+     * @return the last zone's probe: 0, or NaN when a derivative is not finite (the caller refuses the zone)
      */
-    private static double jacobian(int code, double gamma, double[] scratch, int o, ConvectionResult out,
-                                   double[] jac, int base, int stride) {
-        // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
-        final double[] a = scratch != null ? scratch : out.dVelocity;
-        final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
-        final double[] c = scratch != null ? scratch : out.dDiffusion;
-        final int ao = scratch != null ? o : 0;
-        final int bo = scratch != null ? o + ZoneInput.COUNT : 0;
-        final int co = scratch != null ? o + 2 * ZoneInput.COUNT : 0;
-        // each section's highest slot first: its bounds check covers the others
-        final double diffusion = c[co + DIFFUSION_OUT];
-        final double nablaMu = c[co + NABLA_MU];
-        final double invT = a[ao + INV_T];
-        final double invRho = a[ao + INV_RHO];
-        final double invP = a[ao + INV_P];
-        final double invM = a[ao + INV_M];
-        final double invR = a[ao + INV_R];
-        final double invKappa = a[ao + INV_KAPPA];
-        final double invCp = a[ao + INV_CP];
-        final double invDelta = a[ao + INV_DELTA];
-        final double invAlpha = a[ao + INV_ALPHA];
-        final double lengthHp = a[ao + LENGTH_HP];
-        final double le = a[ao + LOSS_ELASTICITY];
-        final double perL = a[ao + PER_L];
-        final double nablaRad = b[bo + NABLA_RAD];
-        final double invNablaRad = b[bo + INV_NABLA_RAD];
-        final double w = b[bo + EXCESS];
-        final double invW = b[bo + INV_EXCESS];
-        final double a0 = b[bo + A0];
-        final double invFourULoss2 = b[bo + INV_FOUR_U_LOSS2];
-        final double s = b[bo + RHS];
-        final double buoyancy = b[bo + B];
-        final double phi = c[co + PHI];
-        final double invDen = c[co + INV_DEN];
-        final double shareRad = c[co + SHARE_RAD];
-        final double shareSuper = c[co + SHARE_SUPER];
-        final double sensitivity = c[co + SENSITIVITY];
-        final double velocity = c[co + VELOCITY_OUT];
-        final double convective = c[co + CONVECTIVE_OUT];
-        final boolean driven = code == COMPOSITION;
+    private static double jacobian(double[] scratch, ConvectionResult out, double[] jac, int base0, int zoneStep,
+                                   int stride, int c0, int c1) {
+        double last = 0.0;
+        for (int k = c0; k < c1; k++) {
+            final int o = scratch != null ? (k - c0) * SCRATCH : 0;
+            final int code = (int) (scratch != null ? scratch[o + 2 * ZoneInput.COUNT + CODE] : out.dDiffusion[CODE]);
+            if (code < CUBIC) {
+                continue;
+            }
+            final double gamma = scratch != null ? scratch[o + 2 * ZoneInput.COUNT + GAMMA] : out.dDiffusion[GAMMA];
+            final int base = base0 + (k - c0) * zoneStep;
+            // the scratch: three sections of a batch's work array, or the result's last three derivative arrays
+            final double[] a = scratch != null ? scratch : out.dVelocity;
+            final double[] b = scratch != null ? scratch : out.dConvectiveFraction;
+            final double[] c = scratch != null ? scratch : out.dDiffusion;
+            final int ao = scratch != null ? o : 0;
+            final int bo = scratch != null ? o + ZoneInput.COUNT : 0;
+            final int co = scratch != null ? o + 2 * ZoneInput.COUNT : 0;
+            // each section's highest slot first: its bounds check covers the others
+            final double diffusion = c[co + DIFFUSION_OUT];
+            final double perL = a[ao + PER_L];
+            final double nablaMu = c[co + NABLA_MU];
+            final double invT = a[ao + INV_T];
+            final double invRho = a[ao + INV_RHO];
+            final double invP = a[ao + INV_P];
+            final double invM = a[ao + INV_M];
+            final double invR = a[ao + INV_R];
+            final double invKappa = a[ao + INV_KAPPA];
+            final double invCp = a[ao + INV_CP];
+            final double invDelta = a[ao + INV_DELTA];
+            final double invAlpha = a[ao + INV_ALPHA];
+            final double lengthHp = a[ao + LENGTH_HP];
+            final double le = a[ao + LOSS_ELASTICITY];
+            final double nablaRad = b[bo + NABLA_RAD];
+            final double invNablaRad = b[bo + INV_NABLA_RAD];
+            final double w = b[bo + EXCESS];
+            final double invW = b[bo + INV_EXCESS];
+            final double a0 = b[bo + A0];
+            final double invFourULoss2 = b[bo + INV_FOUR_U_LOSS2];
+            final double s = b[bo + RHS];
+            final double buoyancy = b[bo + B];
+            final double phi = c[co + PHI];
+            final double invDen = c[co + INV_DEN];
+            final double shareRad = c[co + SHARE_RAD];
+            final double shareSuper = c[co + SHARE_SUPER];
+            final double sensitivity = c[co + SENSITIVITY];
+            final double velocity = c[co + VELOCITY_OUT];
+            final double convective = c[co + CONVECTIVE_OUT];
+            final boolean driven = code == COMPOSITION;
 
-        final double den = MixingLengthCubic.denominator(a0, gamma);
-        // d Gamma = gR (dR - dA) + gB dB + gMu mu + gNu nu and d ln v = vR (dR - dA) + vB dB + vMu mu + vNu nu
-        // + lambda + sigma, with B = b
-        final double gR;
-        final double gB;
-        final double gMu;
-        final double gNu;
-        final double vR;
-        final double vB;
-        final double vMu;
-        final double vNu;
-        final double a0Gamma2 = a0 * (gamma * gamma);
-        if (driven) {
-            // d Gamma = (Gamma dS + D d beta - (Gamma^2 - beta) Gamma^2 d a0) / F' (MixingLengthCubic.compositionSlope)
-            final double h = 1.0 / MixingLengthCubic.compositionSlope(a0, s, gamma);
-            final double scaled = invFourULoss2 * h;
-            gR = gamma * scaled;
-            gB = den * scaled;
-            gMu = -2.0 * (gamma * gamma) * den * h;
-            gNu = -s * a0Gamma2 * gamma * invDen * h;
-            vR = scaled;
-            vB = gB / gamma;
-            vMu = 1.0 - 2.0 * gamma * den * h;
-            vNu = -s * a0Gamma2 * invDen * h;
-        } else {
-            // the g's over Gamma written by S = Gamma D and S = W / (4 U'^2): gR / Gamma = sensitivity D / W,
-            // gMu / Gamma = -2 sensitivity D, gNu / Gamma = -sensitivity a0 Gamma^2
-            gR = sensitivity * invFourULoss2;
-            gB = 0.0;
-            gMu = sensitivity * (-2.0 * s);
-            gNu = sensitivity * -(a0Gamma2 * gamma);
-            vR = sensitivity * (den * invW);
-            vB = 0.0;
-            vMu = 1.0 - 2.0 * (sensitivity * den);
-            vNu = sensitivity * -a0Gamma2;
-        }
+            final double den = MixingLengthCubic.denominator(a0, gamma);
+            // d Gamma = gR (dR - dA) + gB dB + gMu mu + gNu nu and d ln v = vR (dR - dA) + vB dB + vMu mu + vNu nu
+            // + lambda + sigma, with B = b
+            final double gR;
+            final double gB;
+            final double gMu;
+            final double gNu;
+            final double vR;
+            final double vB;
+            final double vMu;
+            final double vNu;
+            final double a0Gamma2 = a0 * (gamma * gamma);
+            if (driven) {
+                // d Gamma = (Gamma dS + D d beta - (Gamma^2 - beta) Gamma^2 d a0) / F' (MixingLengthCubic.compositionSlope)
+                final double h = 1.0 / MixingLengthCubic.compositionSlope(a0, s, gamma);
+                final double scaled = invFourULoss2 * h;
+                gR = gamma * scaled;
+                gB = den * scaled;
+                gMu = -2.0 * (gamma * gamma) * den * h;
+                gNu = -s * a0Gamma2 * gamma * invDen * h;
+                vR = scaled;
+                vB = gB / gamma;
+                vMu = 1.0 - 2.0 * gamma * den * h;
+                vNu = -s * a0Gamma2 * invDen * h;
+            } else {
+                // the g's over Gamma written by S = Gamma D and S = W / (4 U'^2): gR / Gamma = sensitivity D / W,
+                // gMu / Gamma = -2 sensitivity D, gNu / Gamma = -sensitivity a0 Gamma^2
+                gR = sensitivity * invFourULoss2;
+                gB = 0.0;
+                gMu = sensitivity * (-2.0 * s);
+                gNu = sensitivity * -(a0Gamma2 * gamma);
+                vR = sensitivity * (den * invW);
+                vB = 0.0;
+                vMu = 1.0 - 2.0 * (sensitivity * den);
+                vNu = sensitivity * -a0Gamma2;
+            }
 
-        // d(shareRad) = sR (dR - dA) + sMu mu + sNu nu
-        final double invDen2 = invDen * invDen;
-        final double shareSlope = (a0 * gamma * (gamma + 2.0)) * invDen2;
-        final double sR = shareSlope * gR;
-        final double sMu = shareSlope * gMu;
-        final double sNu = (a0Gamma2 * (gamma + 1.0)) * invDen2 + shareSlope * gNu;
-        // d nabla = nR dR + nA dA + nMu mu + nNu nu
-        final double nR = shareSuper - w * sR;
-        final double nA = shareRad + w * sR;
-        final double nMu = -w * sMu;
-        final double nNu = -w * sNu;
-        // d(F_conv/F) = cR dR + cA dA + cMu mu + cNu nu
-        final double cR = (shareRad + w * sR - convective) * invNablaRad;
-        final double cA = -nA * invNablaRad;
-        final double cMu = w * sMu * invNablaRad;
-        final double cNu = w * sNu * invNablaRad;
+            // d(shareRad) = sR (dR - dA) + sMu mu + sNu nu
+            final double invDen2 = invDen * invDen;
+            final double shareSlope = (a0 * gamma * (gamma + 2.0)) * invDen2;
+            final double sR = shareSlope * gR;
+            final double sMu = shareSlope * gMu;
+            final double sNu = (a0Gamma2 * (gamma + 1.0)) * invDen2 + shareSlope * gNu;
+            // d nabla = nR dR + nA dA + nMu mu + nNu nu
+            final double nR = shareSuper - w * sR;
+            final double nA = shareRad + w * sR;
+            final double nMu = -w * sMu;
+            final double nNu = -w * sNu;
+            // d(F_conv/F) = cR dR + cA dA + cMu mu + cNu nu
+            final double cR = (shareRad + w * sR - convective) * invNablaRad;
+            final double cA = -nA * invNablaRad;
+            final double cMu = w * sMu * invNablaRad;
+            final double cNu = w * sNu * invNablaRad;
 
-        // per input: base derivatives per unit of the input
-        // lengthHp: d ln l / d ln H_P for H_P's inputs (0 when l = alpha r); le: d ln q / d ln omega
-        // the 44 entries that can be nonzero, input by input: d nabla, d v, d(F_conv/F), d D, each stored as soon
-        // as it is known (few values live at a time). Every entry finite? Their plain sum is finite only if
-        // each one is (an infinity or NaN carries through); in the rare case that it is not, the exact test,
-        // the sum of (entry * 0), which is NaN exactly when one entry is not finite.
-        double sum;
-        // alpha: l ~ alpha, U ~ l^-2, omega ~ l
-        {
-            double lambda = invAlpha;
-            double nu = le * lambda;
-            double mu = -2.0 * lambda + nu;
-            double lnV = vMu * mu + vNu * nu + lambda;
-            final double nablaAlpha = nMu * mu + nNu * nu;
-            final double velAlpha = velocity * lnV;
-            final double fracAlpha = cMu * mu + cNu * nu;
-            final double diffAlpha = diffusion * (lnV + lambda);
-            put(out, jac, base, stride, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
-            sum = (nablaAlpha + velAlpha) + (fracAlpha + diffAlpha);
-        }
-        // T: nabla_rad ~ T^-4, U ~ T^3
-        {
-            double dR = -4.0 * nablaRad * invT;
-            double mu = 3.0 * invT;
-            double lnV = vR * dR + vMu * mu;
-            final double nablaT = nR * dR + nMu * mu;
-            final double velT = velocity * lnV;
-            final double fracT = cR * dR + cMu * mu;
-            final double diffT = diffusion * lnV;
-            put(out, jac, base, stride, ZoneInput.T, nablaT, velT, fracT, diffT);
-            sum += (nablaT + velT) + (fracT + diffT);
-        }
-        // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
-        {
-            double lambda = -lengthHp * invRho;
-            double nu = le * (invRho + lambda);
-            double mu = -2.5 * invRho - 2.0 * lambda + nu;
-            double sigma = 0.5 * invRho;
-            double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            final double nablaRho = nMu * mu + nNu * nu;
-            final double velRho = velocity * lnV;
-            final double fracRho = cMu * mu + cNu * nu;
-            final double diffRho = diffusion * (lnV + lambda);
-            put(out, jac, base, stride, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
-            sum += (nablaRho + velRho) + (fracRho + diffRho);
-        }
-        // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
-        {
-            double dR = nablaRad * invP;
-            double lambda = lengthHp * invP;
-            double nu = le * lambda;
-            double mu = 0.5 * invP - 2.0 * lambda + nu;
-            double sigma = -0.5 * invP;
-            double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            final double nablaP = nR * dR + nMu * mu + nNu * nu;
-            final double velP = velocity * lnV;
-            final double fracP = cR * dR + cMu * mu + cNu * nu;
-            final double diffP = diffusion * (lnV + lambda);
-            put(out, jac, base, stride, ZoneInput.P, nablaP, velP, fracP, diffP);
-            sum += (nablaP + velP) + (fracP + diffP);
-        }
-        // L: nabla_rad only
-        {
-            double dR = perL;
-            double lnV = vR * dR;
-            final double nablaL = nR * dR;
-            final double velL = velocity * lnV;
-            final double fracL = cR * dR;
-            final double diffL = diffusion * lnV;
-            put(out, jac, base, stride, ZoneInput.L, nablaL, velL, fracL, diffL);
-            sum += (nablaL + velL) + (fracL + diffL);
-        }
-        // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
-        {
-            double dR = -nablaRad * invM;
-            double lambda = -lengthHp * invM;
-            double nu = le * lambda;
-            double mu = -invM - 2.0 * lambda + nu;
-            double sigma = invM;
-            double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
-            final double nablaM = nR * dR + nMu * mu + nNu * nu;
-            final double velM = velocity * lnV;
-            final double fracM = cR * dR + cMu * mu + cNu * nu;
-            final double diffM = diffusion * (lnV + lambda);
-            put(out, jac, base, stride, ZoneInput.M, nablaM, velM, fracM, diffM);
-            sum += (nablaM + velM) + (fracM + diffM);
-        }
-        // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
-        {
-            double lambda = (1.0 + lengthHp) * invR;
-            double nu = le * lambda;
-            double mu = 2.0 * invR - 2.0 * lambda + nu;
-            double sigma = -2.0 * invR;
-            double lnV = vMu * mu + vNu * nu + lambda + sigma;
-            final double nablaRadius = nMu * mu + nNu * nu;
-            final double velRadius = velocity * lnV;
-            final double fracRadius = cMu * mu + cNu * nu;
-            final double diffRadius = diffusion * (lnV + lambda);
-            put(out, jac, base, stride, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
-            sum += (nablaRadius + velRadius) + (fracRadius + diffRadius);
-        }
-        // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
-        {
-            double dR = nablaRad * invKappa;
-            double nu = le * invKappa;
-            double mu = -invKappa + nu;
-            double lnV = vR * dR + vMu * mu + vNu * nu;
-            final double nablaKappa = nR * dR + nMu * mu + nNu * nu;
-            final double velKappa = velocity * lnV;
-            final double fracKappa = cR * dR + cMu * mu + cNu * nu;
-            final double diffKappa = diffusion * lnV;
-            put(out, jac, base, stride, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
-            sum += (nablaKappa + velKappa) + (fracKappa + diffKappa);
-        }
-        // c_P: U ~ 1/c_P
-        {
-            double mu = -invCp;
-            double lnV = vMu * mu;
-            final double nablaCp = nMu * mu;
-            final double velCp = velocity * lnV;
-            final double fracCp = cMu * mu;
-            final double diffCp = diffusion * lnV;
-            put(out, jac, base, stride, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
-            sum += (nablaCp + velCp) + (fracCp + diffCp);
-        }
-        // nabla_ad: dA = 1
-        {
-            double lnV = -vR;
-            final double nablaNablaAd = nA;
-            final double velNablaAd = velocity * lnV;
-            final double fracNablaAd = cA;
-            final double diffNablaAd = diffusion * lnV;
-            put(out, jac, base, stride, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
-            sum += (nablaNablaAd + velNablaAd) + (fracNablaAd + diffNablaAd);
-        }
-        // delta: U ~ delta^-1/2, sigma = +1/2
-        {
-            double mu = -0.5 * invDelta;
-            double lnV = vMu * mu + 0.5 * invDelta;
-            final double nablaDelta = nMu * mu;
-            final double velDelta = velocity * lnV;
-            final double fracDelta = cMu * mu;
-            final double diffDelta = diffusion * lnV;
-            put(out, jac, base, stride, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
-            sum += (nablaDelta + velDelta) + (fracDelta + diffDelta);
-        }
-        // nabla_mu and phi enter only through the composition term, added below
-        put(out, jac, base, stride, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
-        put(out, jac, base, stride, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
-        double probe = 0.0;
-        if (!(Math.abs(sum) <= Double.MAX_VALUE)) {
-            for (int output = 0; output < ZoneMajorJacobian.OUTPUTS; output++) {
-                for (int i = 0; i < ZoneInput.COUNT; i++) {
-                    probe += entry(out, jac, base, stride, output, i) * 0.0;
+            // per input: base derivatives per unit of the input
+            // lengthHp: d ln l / d ln H_P for H_P's inputs (0 when l = alpha r); le: d ln q / d ln omega
+            // the 44 entries that can be nonzero, input by input: d nabla, d v, d(F_conv/F), d D, each stored as soon
+            // as it is known (few values live at a time). Every entry finite? Their plain sum is finite only if
+            // each one is (an infinity or NaN carries through); in the rare case that it is not, the exact test,
+            // the sum of (entry * 0), which is NaN exactly when one entry is not finite.
+            double sum;
+            // alpha: l ~ alpha, U ~ l^-2, omega ~ l
+            {
+                double lambda = invAlpha;
+                double nu = le * lambda;
+                double mu = -2.0 * lambda + nu;
+                double lnV = vMu * mu + vNu * nu + lambda;
+                final double nablaAlpha = nMu * mu + nNu * nu;
+                final double velAlpha = velocity * lnV;
+                final double fracAlpha = cMu * mu + cNu * nu;
+                final double diffAlpha = diffusion * (lnV + lambda);
+                put(out, jac, base, stride, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
+                sum = (nablaAlpha + velAlpha) + (fracAlpha + diffAlpha);
+            }
+            // T: nabla_rad ~ T^-4, U ~ T^3
+            {
+                double dR = -4.0 * nablaRad * invT;
+                double mu = 3.0 * invT;
+                double lnV = vR * dR + vMu * mu;
+                final double nablaT = nR * dR + nMu * mu;
+                final double velT = velocity * lnV;
+                final double fracT = cR * dR + cMu * mu;
+                final double diffT = diffusion * lnV;
+                put(out, jac, base, stride, ZoneInput.T, nablaT, velT, fracT, diffT);
+                sum += (nablaT + velT) + (fracT + diffT);
+            }
+            // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
+            {
+                double lambda = -lengthHp * invRho;
+                double nu = le * (invRho + lambda);
+                double mu = -2.5 * invRho - 2.0 * lambda + nu;
+                double sigma = 0.5 * invRho;
+                double lnV = vMu * mu + vNu * nu + lambda + sigma;
+                final double nablaRho = nMu * mu + nNu * nu;
+                final double velRho = velocity * lnV;
+                final double fracRho = cMu * mu + cNu * nu;
+                final double diffRho = diffusion * (lnV + lambda);
+                put(out, jac, base, stride, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
+                sum += (nablaRho + velRho) + (fracRho + diffRho);
+            }
+            // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
+            {
+                double dR = nablaRad * invP;
+                double lambda = lengthHp * invP;
+                double nu = le * lambda;
+                double mu = 0.5 * invP - 2.0 * lambda + nu;
+                double sigma = -0.5 * invP;
+                double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
+                final double nablaP = nR * dR + nMu * mu + nNu * nu;
+                final double velP = velocity * lnV;
+                final double fracP = cR * dR + cMu * mu + cNu * nu;
+                final double diffP = diffusion * (lnV + lambda);
+                put(out, jac, base, stride, ZoneInput.P, nablaP, velP, fracP, diffP);
+                sum += (nablaP + velP) + (fracP + diffP);
+            }
+            // L: nabla_rad only
+            {
+                double dR = perL;
+                double lnV = vR * dR;
+                final double nablaL = nR * dR;
+                final double velL = velocity * lnV;
+                final double fracL = cR * dR;
+                final double diffL = diffusion * lnV;
+                put(out, jac, base, stride, ZoneInput.L, nablaL, velL, fracL, diffL);
+                sum += (nablaL + velL) + (fracL + diffL);
+            }
+            // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
+            {
+                double dR = -nablaRad * invM;
+                double lambda = -lengthHp * invM;
+                double nu = le * lambda;
+                double mu = -invM - 2.0 * lambda + nu;
+                double sigma = invM;
+                double lnV = vR * dR + vMu * mu + vNu * nu + lambda + sigma;
+                final double nablaM = nR * dR + nMu * mu + nNu * nu;
+                final double velM = velocity * lnV;
+                final double fracM = cR * dR + cMu * mu + cNu * nu;
+                final double diffM = diffusion * (lnV + lambda);
+                put(out, jac, base, stride, ZoneInput.M, nablaM, velM, fracM, diffM);
+                sum += (nablaM + velM) + (fracM + diffM);
+            }
+            // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
+            {
+                double lambda = (1.0 + lengthHp) * invR;
+                double nu = le * lambda;
+                double mu = 2.0 * invR - 2.0 * lambda + nu;
+                double sigma = -2.0 * invR;
+                double lnV = vMu * mu + vNu * nu + lambda + sigma;
+                final double nablaRadius = nMu * mu + nNu * nu;
+                final double velRadius = velocity * lnV;
+                final double fracRadius = cMu * mu + cNu * nu;
+                final double diffRadius = diffusion * (lnV + lambda);
+                put(out, jac, base, stride, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
+                sum += (nablaRadius + velRadius) + (fracRadius + diffRadius);
+            }
+            // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
+            {
+                double dR = nablaRad * invKappa;
+                double nu = le * invKappa;
+                double mu = -invKappa + nu;
+                double lnV = vR * dR + vMu * mu + vNu * nu;
+                final double nablaKappa = nR * dR + nMu * mu + nNu * nu;
+                final double velKappa = velocity * lnV;
+                final double fracKappa = cR * dR + cMu * mu + cNu * nu;
+                final double diffKappa = diffusion * lnV;
+                put(out, jac, base, stride, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
+                sum += (nablaKappa + velKappa) + (fracKappa + diffKappa);
+            }
+            // c_P: U ~ 1/c_P
+            {
+                double mu = -invCp;
+                double lnV = vMu * mu;
+                final double nablaCp = nMu * mu;
+                final double velCp = velocity * lnV;
+                final double fracCp = cMu * mu;
+                final double diffCp = diffusion * lnV;
+                put(out, jac, base, stride, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
+                sum += (nablaCp + velCp) + (fracCp + diffCp);
+            }
+            // nabla_ad: dA = 1
+            {
+                double lnV = -vR;
+                final double nablaNablaAd = nA;
+                final double velNablaAd = velocity * lnV;
+                final double fracNablaAd = cA;
+                final double diffNablaAd = diffusion * lnV;
+                put(out, jac, base, stride, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
+                sum += (nablaNablaAd + velNablaAd) + (fracNablaAd + diffNablaAd);
+            }
+            // delta: U ~ delta^-1/2, sigma = +1/2
+            {
+                double mu = -0.5 * invDelta;
+                double lnV = vMu * mu + 0.5 * invDelta;
+                final double nablaDelta = nMu * mu;
+                final double velDelta = velocity * lnV;
+                final double fracDelta = cMu * mu;
+                final double diffDelta = diffusion * lnV;
+                put(out, jac, base, stride, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
+                sum += (nablaDelta + velDelta) + (fracDelta + diffDelta);
+            }
+            // nabla_mu and phi enter only through the composition term, added below
+            put(out, jac, base, stride, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
+            put(out, jac, base, stride, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
+            double probe = 0.0;
+            if (!(Math.abs(sum) <= Double.MAX_VALUE)) {
+                for (int output = 0; output < ZoneMajorJacobian.OUTPUTS; output++) {
+                    for (int i = 0; i < ZoneInput.COUNT; i++) {
+                        probe += entry(out, jac, base, stride, output, i) * 0.0;
+                    }
                 }
             }
+            if (driven) {
+                // the composition term, after the entries it adds to (d/d delta)
+                final double shareSlopeB = shareSlope * gB;
+                final double bMu = -(phi * invDelta);
+                final double bPhi = -nablaMu * invDelta;
+                final double bDelta = -buoyancy * invDelta;
+                probe += composition(out, jac, base, stride, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
+                        + composition(out, jac, base, stride, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
+                        + composition(out, jac, base, stride, ZoneMajorJacobian.CONVECTIVE_FRACTION,
+                                w * shareSlopeB * invNablaRad, bMu, bPhi, bDelta)
+                        + composition(out, jac, base, stride, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
+                                bDelta);
+            }
+            if (scratch != null) {
+                scratch[o + 2 * ZoneInput.COUNT + PROBE] += probe;
+            }
+            last = probe;
         }
-        if (driven) {
-            // the composition term, after the entries it adds to (d/d delta)
-            final double shareSlopeB = shareSlope * gB;
-            final double bMu = -(phi * invDelta);
-            final double bPhi = -nablaMu * invDelta;
-            final double bDelta = -buoyancy * invDelta;
-            probe += composition(out, jac, base, stride, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
-                    + composition(out, jac, base, stride, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
-                    + composition(out, jac, base, stride, ZoneMajorJacobian.CONVECTIVE_FRACTION,
-                            w * shareSlopeB * invNablaRad, bMu, bPhi, bDelta)
-                    + composition(out, jac, base, stride, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
-                            bDelta);
-        }
-        return probe;
+        return last;
     }
 
     /**
