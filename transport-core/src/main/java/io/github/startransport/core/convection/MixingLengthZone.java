@@ -253,16 +253,16 @@ public final class MixingLengthZone {
         final boolean transparent = eddyShape > 0.0;
         final double[] starts = geometry.cubicStarts();
         final double[] work = out.work;
-        // zone j of a chunk: scratch at j * SCRATCH; its staged Jacobian from STAGE, entry (o, i) at
-        // STAGE + (o * COUNT + i) * CHUNK + j for the column layout (each column's run of the chunk's zones
-        // contiguous) and at STAGE + j * PER_ZONE + o * COUNT + i for a buffer (zone-major)
-        final boolean staged = jacobian && block == null;
-        final boolean columnLayout = staged && buffer == null;
+        // zone j of a chunk: scratch at j * SCRATCH. The Jacobian goes straight into the zone-major block,
+        // or straight into the derivative columns (column layout), or for a buffer into the chunk's staging
+        // from STAGE, entry (o, i) of zone j at STAGE + j * PER_ZONE + o * COUNT + i (zone-major)
+        final boolean staged = jacobian && buffer != null;
+        final boolean columnLayout = jacobian && block == null && buffer == null;
         final double[] jac = staged ? work : block;
-        final int stride = columnLayout ? CHUNK : 1;
+        final ConvectionColumns cols = columnLayout ? out : null;
         for (int c0 = from; c0 < to; c0 += CHUNK) {
             final int c1 = Math.min(to, c0 + CHUNK);
-            front(null, in, c0, c1, alpha, geometry, eddyShape, limit, criterion, work, null);
+            front(null, in, c0, c1, alpha, geometry, eddyShape, limit, criterion, work, null, jacobian);
             for (int k = c0; k < c1; k++) {
                 final int o = (k - c0) * SCRATCH;
                 final int c = o + 2 * ZoneInput.COUNT;
@@ -274,17 +274,18 @@ public final class MixingLengthZone {
             }
             values(work, null, out, c0, c1);
             if (jacobian) {
-                // zone-major: output o of zone k at base + o * COUNT, in the block or in the chunk's staging
-                jacobian(work, null, jac, columnLayout || staged ? STAGE : origin + c0 * ZoneMajorJacobian.PER_ZONE,
-                        columnLayout ? 1 : ZoneMajorJacobian.PER_ZONE, stride, c0, c1);
+                // zone-major: output o of zone k at base + o * COUNT, in the block or in the chunk's staging; in
+                // the columns, at index k
+                jacobian(work, null, cols, jac,
+                        columnLayout ? c0 : staged ? STAGE : origin + c0 * ZoneMajorJacobian.PER_ZONE,
+                        columnLayout ? 1 : ZoneMajorJacobian.PER_ZONE, c0, c1);
             }
             for (int k = c0; k < c1; k++) {
                 final int o = (k - c0) * SCRATCH;
                 final int c = o + 2 * ZoneInput.COUNT;
                 final int code = (int) work[c + CODE];
                 // zone-major: output o of zone k at base + o * COUNT, in the block or in the chunk's staging
-                final int base = columnLayout ? STAGE + (k - c0)
-                        : staged ? STAGE + (k - c0) * ZoneMajorJacobian.PER_ZONE
+                final int base = staged ? STAGE + (k - c0) * ZoneMajorJacobian.PER_ZONE
                         : origin + k * ZoneMajorJacobian.PER_ZONE;
                 try {
                     if (code >= CUBIC) {
@@ -296,21 +297,23 @@ public final class MixingLengthZone {
                         final ConvectionResult res = out.workResult;
                         finish(code, in.load(k, out.workZone), settings.semiconvection(), settings.thermohaline(),
                                 work, o, res);
-                        out.store(k, res, false);
-                        if (jacobian) {
-                            stage(res, jac, base, stride);
+                        out.store(k, res, columnLayout);
+                        if (jacobian && !columnLayout) {
+                            stage(res, jac, base);
                         }
                     }
                 } catch (RuntimeException e) {
                     // the zones before the refused one keep their whole result
                     if (staged) {
-                        unstage(work, k - c0, out, c0, buffer, origin);
+                        buffer.put(origin + c0 * ZoneMajorJacobian.PER_ZONE, work, STAGE,
+                                (k - c0) * ZoneMajorJacobian.PER_ZONE);
                     }
                     throw e;
                 }
             }
             if (staged) {
-                unstage(work, c1 - c0, out, c0, buffer, origin);
+                // the chunk's staged blocks into the buffer in one bulk put
+                buffer.put(origin + c0 * ZoneMajorJacobian.PER_ZONE, work, STAGE, (c1 - c0) * ZoneMajorJacobian.PER_ZONE);
             }
         }
     }
@@ -324,32 +327,13 @@ public final class MixingLengthZone {
         }
     }
 
-    /** Copies one zone's Jacobian from a result into its block or staging, entry (o, i) at base + (o * COUNT + i) * stride. */
-    private static void stage(ConvectionResult r, double[] jac, int base, int stride) {
+    /** Copies one zone's Jacobian from a result into its zone-major block or staging, entry (o, i) at base + o * COUNT + i. */
+    private static void stage(ConvectionResult r, double[] jac, int base) {
         for (int i = 0; i < ZoneInput.COUNT; i++) {
-            jac[base + i * stride] = r.dNabla[i];
-            jac[base + (ZoneInput.COUNT + i) * stride] = r.dVelocity[i];
-            jac[base + (2 * ZoneInput.COUNT + i) * stride] = r.dConvectiveFraction[i];
-            jac[base + (3 * ZoneInput.COUNT + i) * stride] = r.dDiffusion[i];
-        }
-    }
-
-    /**
-     * Copies a chunk's staged Jacobians into the buffer (one bulk put) or, for the column layout, each
-     * derivative column's run of the chunk's zones with one array copy.
-     */
-    private static void unstage(double[] work, int zones, ConvectionColumns out, int first, DoubleBuffer buffer,
-                                int origin) {
-        if (buffer != null) {
-            buffer.put(origin + first * ZoneMajorJacobian.PER_ZONE, work, STAGE, zones * ZoneMajorJacobian.PER_ZONE);
-            return;
-        }
-        for (int i = 0; i < ZoneInput.COUNT; i++) {
-            System.arraycopy(work, STAGE + i * CHUNK, out.dNabla[i], first, zones);
-            System.arraycopy(work, STAGE + (ZoneInput.COUNT + i) * CHUNK, out.dVelocity[i], first, zones);
-            System.arraycopy(work, STAGE + (2 * ZoneInput.COUNT + i) * CHUNK, out.dConvectiveFraction[i], first,
-                    zones);
-            System.arraycopy(work, STAGE + (3 * ZoneInput.COUNT + i) * CHUNK, out.dDiffusion[i], first, zones);
+            jac[base + i] = r.dNabla[i];
+            jac[base + ZoneInput.COUNT + i] = r.dVelocity[i];
+            jac[base + 2 * ZoneInput.COUNT + i] = r.dConvectiveFraction[i];
+            jac[base + 3 * ZoneInput.COUNT + i] = r.dDiffusion[i];
         }
     }
 
@@ -429,7 +413,7 @@ public final class MixingLengthZone {
                              CentreLimit limit, Criterion criterion, double semiconvection, double thermohaline,
                              ConvectionResult out, boolean jacobian) {
         // the scratch of the stages is the result's own last three derivative arrays (written last)
-        final int code = front(z, null, 0, 1, alpha, geometry, eddyShape, limit, criterion, null, out);
+        final int code = front(z, null, 0, 1, alpha, geometry, eddyShape, limit, criterion, null, out, jacobian);
         if (code >= CUBIC) {
             final double[] b = out.dConvectiveFraction;
             final double gamma = efficiency(code, b[A0], b[RHS], b[BETA], eddyShape > 0.0, geometry.cubicStarts());
@@ -438,7 +422,7 @@ public final class MixingLengthZone {
             c[GAMMA] = gamma;
             values(null, out, null, 0, 1);
             final double valuesProbe = c[PROBE];
-            final double probe = jacobian ? valuesProbe + jacobian(null, out, null, 0, 0, 1, 0, 1) : valuesProbe;
+            final double probe = jacobian ? valuesProbe + jacobian(null, out, null, null, 0, 0, 0, 1) : valuesProbe;
             ZoneChecks.finiteOutputs("nabla", out.nabla, probe, z);
         } else {
             finish(code, z, semiconvection, thermohaline, null, 0, out);
@@ -510,13 +494,14 @@ public final class MixingLengthZone {
      * @param scratch  a batch call's work array (zone k's scratch at (k - c0) * SCRATCH, its code stored
      *                 there too), or null for the result's own arrays
      * @param out      the result whose arrays are the scratch of a per-zone call
+     * @param derivatives whether the Jacobian stage follows (otherwise the reciprocals only it reads are 0)
      * @return for the last zone: {@link #CUBIC} or {@link #COMPOSITION} for a convective zone; the ordinal of the
      *         {@link Regime} of a stable zone; {@link #INVALID}, {@link #OUT_OF_RANGE} or
      *         {@link #NO_FRACTION} for a zone to refuse
      */
     private static int front(ZoneState z, ZoneColumns in, int c0, int c1, double alpha,
                              MixingLengthGeometry geometry, double eddyShape, CentreLimit limit, Criterion criterion,
-                             double[] scratch, ConvectionResult out) {
+                             double[] scratch, ConvectionResult out, boolean derivatives) {
         int code = INVALID;
         for (int k = c0; k < c1; k++) {
             // the zone's inputs: from the zone of a per-zone call, or from the columns of a batch call
@@ -563,26 +548,34 @@ public final class MixingLengthZone {
                 final double invRhoPDelta = 1.0 / (rhoP * delta);
                 final double mR = m * r;
                 final double invMRT = 1.0 / (mR * t);
-                final double kappaCp = kappa * cp;
-                final double invKappaCpAlpha = 1.0 / (kappaCp * alpha);
                 invRho = (p * delta) * invRhoPDelta;
                 invP = (rho * delta) * invRhoPDelta;
                 invDelta = rhoP * invRhoPDelta;
                 invM = (r * t) * invMRT;
                 invR = (m * t) * invMRT;
                 invT = mR * invMRT;
-                invKappa = (cp * alpha) * invKappaCpAlpha;
-                invCp = (kappa * alpha) * invKappaCpAlpha;
-                invAlpha = kappaCp * invKappaCpAlpha;
             } else {
                 invT = 1.0 / t;
                 invRho = 1.0 / rho;
                 invP = 1.0 / p;
                 invM = 1.0 / m;
                 invR = 1.0 / r;
+                invDelta = 1.0 / delta;
+            }
+            // 1/kappa, 1/c_P and 1/alpha enter the Jacobian only
+            if (!derivatives) {
+                invKappa = 0.0;
+                invCp = 0.0;
+                invAlpha = 0.0;
+            } else if (ordinary) {
+                final double kappaCp = kappa * cp;
+                final double invKappaCpAlpha = 1.0 / (kappaCp * alpha);
+                invKappa = (cp * alpha) * invKappaCpAlpha;
+                invCp = (kappa * alpha) * invKappaCpAlpha;
+                invAlpha = kappaCp * invKappaCpAlpha;
+            } else {
                 invKappa = 1.0 / kappa;
                 invCp = 1.0 / cp;
-                invDelta = 1.0 / delta;
                 invAlpha = 1.0 / alpha;
             }
 
@@ -834,8 +827,8 @@ public final class MixingLengthZone {
     /**
      * The Jacobian stage of convective zones, after {@link #values}: from Gamma and the scratch of
      * {@link #front} and {@link #values}, one output's 13 entries at a time into the result's arrays (a
-     * per-zone call) or into {@code jac} from zone k's base {@code base0 + (k - c0) zoneStep} with
-     * {@code stride} ({@link #put}). Reads all of a zone's scratch before it writes anything, so the
+     * per-zone call), into the derivative columns at index k, or into {@code jac} (zone-major) from zone
+     * k's base {@code base0 + (k - c0) zoneStep} ({@link #put}). Reads all of a zone's scratch before it writes anything, so the
      * scratch may be the result's own derivative arrays. Like {@link #front} it loops over a batch
      * call's zones itself (zones whose code is not a convective one are skipped) and adds each zone's
      * probe to the one {@link #values} left in its scratch.
@@ -862,16 +855,17 @@ public final class MixingLengthZone {
      *
      * @param scratch  a batch call's work array, or null for the result's own arrays
      * @param out      the result of a per-zone call, or null
-     * @param jac      the zone-major block or the chunk's staging, or null for the result's arrays
-     * @param base0    index of the chunk's first zone's entry (0, 0) in {@code jac}
-     * @param zoneStep distance between two zones' entries (0, 0): 1 or {@link ZoneMajorJacobian#PER_ZONE}
-     * @param stride   distance between entries (o, i) and (o, i + 1): 1 or {@link #CHUNK}
+     * @param cols     the columns of a batch call in the column layout, or null
+     * @param jac      the zone-major block or the chunk's staging, or null
+     * @param base0    index of the chunk's first zone's entry (0, 0) in {@code jac}, or c0 in the columns
+     * @param zoneStep distance between two zones' entries (0, 0): {@link ZoneMajorJacobian#PER_ZONE}, or 1
+     *                 in the columns
      * @param c0       first zone (inclusive); 0 for a per-zone call
      * @param c1       last zone (exclusive); 1 for a per-zone call
      * @return the last zone's probe: 0, or NaN when a derivative is not finite (the caller refuses the zone)
      */
-    private static double jacobian(double[] scratch, ConvectionResult out, double[] jac, int base0, int zoneStep,
-                                   int stride, int c0, int c1) {
+    private static double jacobian(double[] scratch, ConvectionResult out, ConvectionColumns cols, double[] jac,
+                                   int base0, int zoneStep, int c0, int c1) {
         double last = 0.0;
         for (int k = c0; k < c1; k++) {
             final int o = scratch != null ? (k - c0) * SCRATCH : 0;
@@ -991,7 +985,7 @@ public final class MixingLengthZone {
                 final double velAlpha = velocity * lnV;
                 final double fracAlpha = cMu * mu + cNu * nu;
                 final double diffAlpha = diffusion * (lnV + lambda);
-                put(out, jac, base, stride, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
+                put(out, cols, jac, base, ZoneInput.ALPHA, nablaAlpha, velAlpha, fracAlpha, diffAlpha);
                 sum = (nablaAlpha + velAlpha) + (fracAlpha + diffAlpha);
             }
             // T: nabla_rad ~ T^-4, U ~ T^3
@@ -1003,7 +997,7 @@ public final class MixingLengthZone {
                 final double velT = velocity * lnV;
                 final double fracT = cR * dR + cMu * mu;
                 final double diffT = diffusion * lnV;
-                put(out, jac, base, stride, ZoneInput.T, nablaT, velT, fracT, diffT);
+                put(out, cols, jac, base, ZoneInput.T, nablaT, velT, fracT, diffT);
                 sum += (nablaT + velT) + (fracT + diffT);
             }
             // rho: H_P ~ 1/rho, U ~ rho^-2 (H_P)^(1/2) l^-2, omega ~ rho l, sigma = +1/2
@@ -1017,7 +1011,7 @@ public final class MixingLengthZone {
                 final double velRho = velocity * lnV;
                 final double fracRho = cMu * mu + cNu * nu;
                 final double diffRho = diffusion * (lnV + lambda);
-                put(out, jac, base, stride, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
+                put(out, cols, jac, base, ZoneInput.RHO, nablaRho, velRho, fracRho, diffRho);
                 sum += (nablaRho + velRho) + (fracRho + diffRho);
             }
             // P: nabla_rad ~ P, H_P ~ P, sigma = -1/2
@@ -1032,7 +1026,7 @@ public final class MixingLengthZone {
                 final double velP = velocity * lnV;
                 final double fracP = cR * dR + cMu * mu + cNu * nu;
                 final double diffP = diffusion * (lnV + lambda);
-                put(out, jac, base, stride, ZoneInput.P, nablaP, velP, fracP, diffP);
+                put(out, cols, jac, base, ZoneInput.P, nablaP, velP, fracP, diffP);
                 sum += (nablaP + velP) + (fracP + diffP);
             }
             // L: nabla_rad only
@@ -1043,7 +1037,7 @@ public final class MixingLengthZone {
                 final double velL = velocity * lnV;
                 final double fracL = cR * dR;
                 final double diffL = diffusion * lnV;
-                put(out, jac, base, stride, ZoneInput.L, nablaL, velL, fracL, diffL);
+                put(out, cols, jac, base, ZoneInput.L, nablaL, velL, fracL, diffL);
                 sum += (nablaL + velL) + (fracL + diffL);
             }
             // m: nabla_rad ~ 1/m, H_P ~ 1/m, g ~ m, U ~ (H_P/g)^(1/2) l^-2, sigma = +1
@@ -1058,7 +1052,7 @@ public final class MixingLengthZone {
                 final double velM = velocity * lnV;
                 final double fracM = cR * dR + cMu * mu + cNu * nu;
                 final double diffM = diffusion * (lnV + lambda);
-                put(out, jac, base, stride, ZoneInput.M, nablaM, velM, fracM, diffM);
+                put(out, cols, jac, base, ZoneInput.M, nablaM, velM, fracM, diffM);
                 sum += (nablaM + velM) + (fracM + diffM);
             }
             // r: H_P ~ r^2, g ~ r^-2, l ~ r^2 (or r when capped), sigma = -2
@@ -1072,7 +1066,7 @@ public final class MixingLengthZone {
                 final double velRadius = velocity * lnV;
                 final double fracRadius = cMu * mu + cNu * nu;
                 final double diffRadius = diffusion * (lnV + lambda);
-                put(out, jac, base, stride, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
+                put(out, cols, jac, base, ZoneInput.R, nablaRadius, velRadius, fracRadius, diffRadius);
                 sum += (nablaRadius + velRadius) + (fracRadius + diffRadius);
             }
             // kappa: nabla_rad ~ kappa, U ~ 1/kappa, omega ~ kappa
@@ -1085,7 +1079,7 @@ public final class MixingLengthZone {
                 final double velKappa = velocity * lnV;
                 final double fracKappa = cR * dR + cMu * mu + cNu * nu;
                 final double diffKappa = diffusion * lnV;
-                put(out, jac, base, stride, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
+                put(out, cols, jac, base, ZoneInput.KAPPA, nablaKappa, velKappa, fracKappa, diffKappa);
                 sum += (nablaKappa + velKappa) + (fracKappa + diffKappa);
             }
             // c_P: U ~ 1/c_P
@@ -1096,7 +1090,7 @@ public final class MixingLengthZone {
                 final double velCp = velocity * lnV;
                 final double fracCp = cMu * mu;
                 final double diffCp = diffusion * lnV;
-                put(out, jac, base, stride, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
+                put(out, cols, jac, base, ZoneInput.CP, nablaCp, velCp, fracCp, diffCp);
                 sum += (nablaCp + velCp) + (fracCp + diffCp);
             }
             // nabla_ad: dA = 1
@@ -1106,7 +1100,7 @@ public final class MixingLengthZone {
                 final double velNablaAd = velocity * lnV;
                 final double fracNablaAd = cA;
                 final double diffNablaAd = diffusion * lnV;
-                put(out, jac, base, stride, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
+                put(out, cols, jac, base, ZoneInput.NABLA_AD, nablaNablaAd, velNablaAd, fracNablaAd, diffNablaAd);
                 sum += (nablaNablaAd + velNablaAd) + (fracNablaAd + diffNablaAd);
             }
             // delta: U ~ delta^-1/2, sigma = +1/2
@@ -1117,17 +1111,17 @@ public final class MixingLengthZone {
                 final double velDelta = velocity * lnV;
                 final double fracDelta = cMu * mu;
                 final double diffDelta = diffusion * lnV;
-                put(out, jac, base, stride, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
+                put(out, cols, jac, base, ZoneInput.DELTA, nablaDelta, velDelta, fracDelta, diffDelta);
                 sum += (nablaDelta + velDelta) + (fracDelta + diffDelta);
             }
             // nabla_mu and phi enter only through the composition term, added below
-            put(out, jac, base, stride, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
-            put(out, jac, base, stride, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
+            put(out, cols, jac, base, ZoneInput.NABLA_MU, 0.0, 0.0, 0.0, 0.0);
+            put(out, cols, jac, base, ZoneInput.PHI, 0.0, 0.0, 0.0, 0.0);
             double probe = 0.0;
             if (!(Math.abs(sum) <= Double.MAX_VALUE)) {
                 for (int output = 0; output < ZoneMajorJacobian.OUTPUTS; output++) {
                     for (int i = 0; i < ZoneInput.COUNT; i++) {
-                        probe += entry(out, jac, base, stride, output, i) * 0.0;
+                        probe += entry(out, cols, jac, base, output, i) * 0.0;
                     }
                 }
             }
@@ -1137,11 +1131,11 @@ public final class MixingLengthZone {
                 final double bMu = -(phi * invDelta);
                 final double bPhi = -nablaMu * invDelta;
                 final double bDelta = -buoyancy * invDelta;
-                probe += composition(out, jac, base, stride, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
-                        + composition(out, jac, base, stride, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
-                        + composition(out, jac, base, stride, ZoneMajorJacobian.CONVECTIVE_FRACTION,
+                probe += composition(out, cols, jac, base, ZoneMajorJacobian.NABLA, -w * shareSlopeB, bMu, bPhi, bDelta)
+                        + composition(out, cols, jac, base, ZoneMajorJacobian.VELOCITY, velocity * vB, bMu, bPhi, bDelta)
+                        + composition(out, cols, jac, base, ZoneMajorJacobian.CONVECTIVE_FRACTION,
                                 w * shareSlopeB * invNablaRad, bMu, bPhi, bDelta)
-                        + composition(out, jac, base, stride, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
+                        + composition(out, cols, jac, base, ZoneMajorJacobian.DIFFUSION, diffusion * vB, bMu, bPhi,
                                 bDelta);
             }
             if (scratch != null) {
@@ -1153,25 +1147,22 @@ public final class MixingLengthZone {
     }
 
     /**
-     * Stores the four entries of one input i into the zone-major block or the chunk's staging, entry
-     * (o, i) at {@code base + (o * COUNT + i) * stride} (the highest offset first), or into the result's
-     * arrays when there is neither. The stride is 1 or {@link #CHUNK}, each written out so that every
-     * offset is a constant.
+     * Stores the four entries of one input i: into the zone-major block or staging, entry (o, i) at
+     * {@code base + o * COUNT + i} (the highest offset first); into the derivative columns at index
+     * {@code base}; or into the result's arrays when there is neither.
      */
-    private static void put(ConvectionResult out, double[] jac, int base, int stride, int i,
+    private static void put(ConvectionResult out, ConvectionColumns cols, double[] jac, int base, int i,
                             double nabla, double velocity, double fraction, double diffusion) {
         if (jac != null) {
-            if (stride == 1) {
-                jac[base + 3 * ZoneInput.COUNT + i] = diffusion;
-                jac[base + 2 * ZoneInput.COUNT + i] = fraction;
-                jac[base + ZoneInput.COUNT + i] = velocity;
-                jac[base + i] = nabla;
-            } else {
-                jac[base + (3 * ZoneInput.COUNT + i) * CHUNK] = diffusion;
-                jac[base + (2 * ZoneInput.COUNT + i) * CHUNK] = fraction;
-                jac[base + (ZoneInput.COUNT + i) * CHUNK] = velocity;
-                jac[base + i * CHUNK] = nabla;
-            }
+            jac[base + 3 * ZoneInput.COUNT + i] = diffusion;
+            jac[base + 2 * ZoneInput.COUNT + i] = fraction;
+            jac[base + ZoneInput.COUNT + i] = velocity;
+            jac[base + i] = nabla;
+        } else if (cols != null) {
+            cols.dDiffusion[i][base] = diffusion;
+            cols.dConvectiveFraction[i][base] = fraction;
+            cols.dVelocity[i][base] = velocity;
+            cols.dNabla[i][base] = nabla;
         } else {
             out.dDiffusion[i] = diffusion;
             out.dConvectiveFraction[i] = fraction;
@@ -1181,15 +1172,18 @@ public final class MixingLengthZone {
     }
 
     /** Entry (o, i) of a Jacobian written by {@link #put}. */
-    private static double entry(ConvectionResult out, double[] jac, int base, int stride, int o, int i) {
-        return jac != null ? jac[base + (o * ZoneInput.COUNT + i) * stride] : row(out, o)[i];
+    private static double entry(ConvectionResult out, ConvectionColumns cols, double[] jac, int base, int o, int i) {
+        return jac != null ? jac[base + o * ZoneInput.COUNT + i]
+                : cols != null ? column(cols, o)[i][base] : row(out, o)[i];
     }
 
     /** Sets entry (o, i) of a Jacobian written by {@link #put}. */
-    private static void setEntry(ConvectionResult out, double[] jac, int base, int stride, int o, int i,
+    private static void setEntry(ConvectionResult out, ConvectionColumns cols, double[] jac, int base, int o, int i,
                                  double value) {
         if (jac != null) {
-            jac[base + (o * ZoneInput.COUNT + i) * stride] = value;
+            jac[base + o * ZoneInput.COUNT + i] = value;
+        } else if (cols != null) {
+            column(cols, o)[i][base] = value;
         } else {
             row(out, o)[i] = value;
         }
@@ -1200,19 +1194,24 @@ public final class MixingLengthZone {
                 : o == ZoneMajorJacobian.CONVECTIVE_FRACTION ? out.dConvectiveFraction : out.dDiffusion;
     }
 
+    private static double[][] column(ConvectionColumns cols, int o) {
+        return o == ZoneMajorJacobian.NABLA ? cols.dNabla : o == ZoneMajorJacobian.VELOCITY ? cols.dVelocity
+                : o == ZoneMajorJacobian.CONVECTIVE_FRACTION ? cols.dConvectiveFraction : cols.dDiffusion;
+    }
+
     /**
      * One output's composition entries: d/d nabla_mu and d/d phi written, d/d delta added to.
      *
      * @return the sum of (entry * 0) over the three: NaN exactly when one is not finite
      */
-    private static double composition(ConvectionResult out, double[] jac, int base, int stride, int o,
+    private static double composition(ConvectionResult out, ConvectionColumns cols, double[] jac, int base, int o,
                                       double perB, double bMu, double bPhi, double bDelta) {
         final double mu = perB * bMu;
         final double phi = perB * bPhi;
-        final double delta = entry(out, jac, base, stride, o, ZoneInput.DELTA) + perB * bDelta;
-        setEntry(out, jac, base, stride, o, ZoneInput.NABLA_MU, mu);
-        setEntry(out, jac, base, stride, o, ZoneInput.PHI, phi);
-        setEntry(out, jac, base, stride, o, ZoneInput.DELTA, delta);
+        final double delta = entry(out, cols, jac, base, o, ZoneInput.DELTA) + perB * bDelta;
+        setEntry(out, cols, jac, base, o, ZoneInput.NABLA_MU, mu);
+        setEntry(out, cols, jac, base, o, ZoneInput.PHI, phi);
+        setEntry(out, cols, jac, base, o, ZoneInput.DELTA, delta);
         return (mu * 0.0 + phi * 0.0) + delta * 0.0;
     }
 
