@@ -72,6 +72,21 @@ public class ThermoBenchmark {
         return s;
     }
 
+    /**
+     * Ours: the same outputs as {@link #oursZoneWithDerivatives} bit for bit, without the derivatives
+     * (what a profile diagnosis reads), validated, per zone.
+     */
+    @Benchmark
+    @OperationsPerInvocation(ZONES)
+    public double oursZoneValues() {
+        double s = 0;
+        for (int i = 0; i < ZONES; i++) {
+            IonisingGas.INSTANCE.evaluateValues(temp[i], rho[i], hydrogen, metals, i, result);
+            s += result.nablaAd + result.gamma1;
+        }
+        return s;
+    }
+
     /** Ours along the demo star's profile (centre to surface), per zone. */
     @Benchmark
     @OperationsPerInvocation(ZONES)
