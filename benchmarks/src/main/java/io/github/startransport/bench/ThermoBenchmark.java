@@ -158,4 +158,16 @@ public class ThermoBenchmark {
         }
         return s;
     }
+
+    /** Reference: the fully ionised ideal gas plus radiation, values only (no derivatives), per zone. */
+    @Benchmark
+    @OperationsPerInvocation(ZONES)
+    public double idealGasRadiationZoneValues() {
+        double s = 0;
+        for (int i = 0; i < ZONES; i++) {
+            IdealGasRadiation.INSTANCE.evaluateValues(temp[i], rho[i], hydrogen, metals, i, result);
+            s += result.nablaAd + result.gamma1;
+        }
+        return s;
+    }
 }
