@@ -72,6 +72,21 @@ public class ThermoBenchmark {
         return s;
     }
 
+    /**
+     * Ours: the same outputs as {@link #oursZoneWithDerivatives} bit for bit, without the derivatives
+     * (what a profile diagnosis reads), validated, per zone.
+     */
+    @Benchmark
+    @OperationsPerInvocation(ZONES)
+    public double oursZoneValues() {
+        double s = 0;
+        for (int i = 0; i < ZONES; i++) {
+            IonisingGas.INSTANCE.evaluateValues(temp[i], rho[i], hydrogen, metals, i, result);
+            s += result.nablaAd + result.gamma1;
+        }
+        return s;
+    }
+
     /** Ours along the demo star's profile (centre to surface), per zone. */
     @Benchmark
     @OperationsPerInvocation(ZONES)
@@ -140,6 +155,18 @@ public class ThermoBenchmark {
         for (int i = 0; i < ZONES; i++) {
             IdealGasRadiation.INSTANCE.evaluate(temp[i], rho[i], hydrogen, metals, i, result);
             s += result.nablaAd + result.dGamma1[ZoneInput.RHO];
+        }
+        return s;
+    }
+
+    /** Reference: the fully ionised ideal gas plus radiation, values only (no derivatives), per zone. */
+    @Benchmark
+    @OperationsPerInvocation(ZONES)
+    public double idealGasRadiationZoneValues() {
+        double s = 0;
+        for (int i = 0; i < ZONES; i++) {
+            IdealGasRadiation.INSTANCE.evaluateValues(temp[i], rho[i], hydrogen, metals, i, result);
+            s += result.nablaAd + result.gamma1;
         }
         return s;
     }

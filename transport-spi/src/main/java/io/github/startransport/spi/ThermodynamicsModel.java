@@ -4,7 +4,8 @@ package io.github.startransport.spi;
  * Thermodynamic response functions for hosts and tools that have no equation of state of
  * their own.
  *
- * <p>Implementations are immutable and thread-safe, and {@link #evaluate} allocates nothing.
+ * <p>Implementations are immutable and thread-safe, and {@link #evaluate} and
+ * {@link #evaluateValues} allocate nothing.
  */
 public interface ThermodynamicsModel {
 
@@ -20,6 +21,28 @@ public interface ThermodynamicsModel {
      * @throws InvalidInputException when an input is non-finite or unphysical
      */
     void evaluate(double temperature, double density, double hydrogen, double metals, int zone, ThermoResult out);
+
+    /**
+     * Evaluates the state for the values only: every scalar field of {@code out} as
+     * {@link #evaluate} sets it, bit for bit, and the same inputs refused with the same exception;
+     * the derivative arrays ({@link ThermoResult#dPressure} and the others) are left unspecified.
+     * For callers that read no derivative, such as a diagnosis of a whole profile. The default
+     * calls {@link #evaluate}; implementations skip the derivatives' arithmetic.
+     *
+     * @param temperature T (K), &gt; 0
+     * @param density     rho (g cm^-3), &gt; 0
+     * @param hydrogen    X (mass fraction), in [0, 1]
+     * @param metals      Z (mass fraction), in [0, 1], X + Z &lt;= 1
+     * @param zone        zone index for error messages, or {@link InvalidInputException#NO_ZONE}
+     * @param out         caller-owned result: its scalar fields are overwritten, its derivative
+     *                    arrays may be overwritten or left as they were
+     * @throws InvalidInputException when an input is non-finite or unphysical, exactly where
+     *                               {@link #evaluate} throws it
+     */
+    default void evaluateValues(double temperature, double density, double hydrogen, double metals, int zone,
+                                ThermoResult out) {
+        evaluate(temperature, density, hydrogen, metals, zone, out);
+    }
 
     /**
      * Evaluates at the zone's temperature, density and composition and writes pressure,

@@ -2,6 +2,7 @@ package io.github.startransport.core.gradient;
 
 import io.github.startransport.core.constants.Codata2018;
 import io.github.startransport.spi.Checks;
+import io.github.startransport.spi.InvalidInputException;
 import io.github.startransport.spi.ModelFamily;
 import io.github.startransport.spi.ModelInfo;
 import io.github.startransport.spi.ModelOptions;
@@ -40,32 +41,28 @@ public final class IdealGasRadiation implements ThermodynamicsModel {
         return INSTANCE;
     }
 
+    /**
+     * Temperatures (K) and densities (g cm^-3) inside which {@link #evaluateValues} skips the
+     * derivatives. Here beta stays above ~1e-31, so that c_P (which grows as 1 / beta^2), d c_P / d beta
+     * (1 / beta^3) and every other output and derivative stay far below the largest double:
+     * {@link #evaluate} refuses no valid state and the values alone decide as it does. Outside,
+     * {@link #evaluateValues} calls {@link #evaluate}, whose refusals also look at the derivatives.
+     */
+    static final double VALUES_T_MIN = 1.0;
+    static final double VALUES_T_MAX = 1e11;
+    static final double VALUES_RHO_MIN = 1e-20;
+    static final double VALUES_RHO_MAX = 1e10;
+
     @Override
     public void evaluate(double temperature, double density, double hydrogen, double metals, int zone,
                          ThermoResult out) {
         Checks.positive("temperature", temperature, "K", zone);
         Checks.positive("density", density, "g cm^-3", zone);
         ZoneChecks.composition(hydrogen, metals, zone);
-        double mu = GasRadiation.meanMolecularWeight(hydrogen, metals);
-        double pg = GasRadiation.gasPressure(temperature, density, mu);
-        double p = pg + GasRadiation.radiationPressure(temperature);
-        double beta = pg / p;
-        out.mu = mu;
-        out.beta = beta;
-        out.pressure = p;
-        out.nablaAd = GasRadiation.nablaAd(beta);
-        out.cp = GasRadiation.cp(beta, mu);
-        out.delta = GasRadiation.delta(beta);
-        out.phi = 1.0;
-        out.gamma1 = GasRadiation.gamma1(beta);
-        out.cv = GasRadiation.cv(beta, mu);
-        out.chiT = GasRadiation.chiT(beta);
-        out.chiRho = beta;
-        double electrons = GasRadiation.electronsPerMassUnit(hydrogen);
-        out.freeElectrons = electrons;
-        out.degeneracy = GasRadiation.electronDegeneracy(temperature,
-                density / Codata2018.ATOMIC_MASS_UNIT * electrons);
-        out.pressureIonisation = 0.0;
+        values(temperature, density, hydrogen, metals, out);
+        double mu = out.mu;
+        double p = out.pressure;
+        double beta = out.beta;
         // d beta / d ln T = -3 beta (1 - beta), d beta / d ln rho = beta (1 - beta)
         double oneMinusBeta = GasRadiation.radiationPressure(temperature) / p;
         double perT = -3.0 * beta * oneMinusBeta / temperature;
@@ -92,10 +89,63 @@ public final class IdealGasRadiation implements ThermodynamicsModel {
                 + out.dPressure[ZoneInput.T] + out.dPressure[ZoneInput.RHO] + out.dCp[ZoneInput.T]
                 + out.dCp[ZoneInput.RHO] + out.dDelta[ZoneInput.T] + out.dDelta[ZoneInput.RHO]) * 0.0;
         if (!(beta > 0.0) || probe != 0.0) {
-            throw new io.github.startransport.spi.InvalidInputException("density", density, "g cm^-3", zone,
-                    "large enough at T = " + temperature + " K that gas pressure is resolved in double precision "
-                            + "(beta = P_gas / P = " + beta + ", c_P = " + out.cp + ", P = " + p + ")");
+            throw unresolved(temperature, density, zone, out);
         }
+    }
+
+    /**
+     * The values of {@link #evaluate}, bit for bit, without the derivatives; the same inputs refused
+     * with the same exception. The derivative arrays of {@code out} are left untouched from 1 to
+     * 1e11 K and 1e-20 to 1e10 g cm^-3 (where the refusals of {@link #evaluate} depend on the values
+     * alone), and filled outside. Allocation-free and thread-safe.
+     */
+    @Override
+    public void evaluateValues(double temperature, double density, double hydrogen, double metals, int zone,
+                               ThermoResult out) {
+        if (!(temperature >= VALUES_T_MIN && temperature <= VALUES_T_MAX && density >= VALUES_RHO_MIN
+                && density <= VALUES_RHO_MAX)) {
+            evaluate(temperature, density, hydrogen, metals, zone, out);
+            return;
+        }
+        ZoneChecks.composition(hydrogen, metals, zone);
+        values(temperature, density, hydrogen, metals, out);
+        // the value terms of evaluate's probe, added in its order: where one is infinite or NaN, so is that probe
+        double probe = (out.pressure + out.nablaAd + out.cp + out.delta + out.gamma1 + out.cv) * 0.0;
+        if (!(out.beta > 0.0) || probe != 0.0) {
+            throw unresolved(temperature, density, zone, out);
+        }
+    }
+
+    /** Every scalar output of both calls, from the same expressions. */
+    private static void values(double temperature, double density, double hydrogen, double metals,
+                               ThermoResult out) {
+        double mu = GasRadiation.meanMolecularWeight(hydrogen, metals);
+        double pg = GasRadiation.gasPressure(temperature, density, mu);
+        double p = pg + GasRadiation.radiationPressure(temperature);
+        double beta = pg / p;
+        out.mu = mu;
+        out.beta = beta;
+        out.pressure = p;
+        out.nablaAd = GasRadiation.nablaAd(beta);
+        out.cp = GasRadiation.cp(beta, mu);
+        out.delta = GasRadiation.delta(beta);
+        out.phi = 1.0;
+        out.gamma1 = GasRadiation.gamma1(beta);
+        out.cv = GasRadiation.cv(beta, mu);
+        out.chiT = GasRadiation.chiT(beta);
+        out.chiRho = beta;
+        double electrons = GasRadiation.electronsPerMassUnit(hydrogen);
+        out.freeElectrons = electrons;
+        out.degeneracy = GasRadiation.electronDegeneracy(temperature,
+                density / Codata2018.ATOMIC_MASS_UNIT * electrons);
+        out.pressureIonisation = 0.0;
+    }
+
+    /** The refusal of a state whose gas pressure is lost beside radiation (the one message of both calls). */
+    private static InvalidInputException unresolved(double temperature, double density, int zone, ThermoResult out) {
+        return new InvalidInputException("density", density, "g cm^-3", zone,
+                "large enough at T = " + temperature + " K that gas pressure is resolved in double precision "
+                        + "(beta = P_gas / P = " + out.beta + ", c_P = " + out.cp + ", P = " + out.pressure + ")");
     }
 
     @Override

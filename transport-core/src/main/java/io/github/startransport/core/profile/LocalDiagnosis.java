@@ -240,7 +240,9 @@ public final class LocalDiagnosis implements ProfileDiagnoser {
                 zone.metals = z[k];
                 if (pass == 0 || !deferred) {
                     if (useThermo) {
-                        setup.thermodynamics().evaluate(t[k], rho[k], x[k], z[k], zone.zone, thermo);
+                        // values only: nabla_ad, c_P, delta, Gamma_1, phi and the checks' P, degeneracy and
+                        // pressure ionisation; the diagnosis reads no derivative
+                        setup.thermodynamics().evaluateValues(t[k], rho[k], x[k], z[k], zone.zone, thermo);
                         if (!hasThermo) {
                             if (!p.has(ProfileColumn.NABLA_AD)) {
                                 nablaAd[k] = thermo.nablaAd;

@@ -44,6 +44,18 @@ public final class IonisingGas implements ThermodynamicsModel {
         return INSTANCE;
     }
 
+    /**
+     * Temperatures (K) and densities (g cm^-3) inside which {@link #evaluateValues} runs the kernel
+     * without derivatives. Here no output and no derivative comes near the limits of double precision
+     * (the largest, where radiation dominates at high T and low rho, stay below ~1e91 in size), so
+     * {@link #evaluate} refuses no valid state and the values alone decide as it does; outside,
+     * {@link #evaluateValues} calls {@link #evaluate}, whose refusals also look at the derivatives.
+     */
+    static final double VALUES_T_MIN = 1.0;
+    static final double VALUES_T_MAX = 1e11;
+    static final double VALUES_RHO_MIN = 1e-20;
+    static final double VALUES_RHO_MAX = 1e10;
+
     @Override
     public void evaluate(double temperature, double density, double hydrogen, double metals, int zone,
                          ThermoResult out) {
@@ -60,11 +72,42 @@ public final class IonisingGas implements ThermodynamicsModel {
                 + ((out.dPhi[ZoneInput.T] + out.dPhi[ZoneInput.RHO]) + (out.dMu[ZoneInput.T]
                 + out.dMu[ZoneInput.RHO]))))) * 0.0;
         if (!(out.beta > 0.0) || probe != 0.0) {
-            throw new InvalidInputException("density", density, "g cm^-3", zone,
-                    "such that pressure and its derivatives are representable in double precision at T = "
-                            + temperature + " K (beta = P_gas / P = " + out.beta + ", P = " + out.pressure
-                            + " dyn cm^-2, c_V = " + out.cv + " erg g^-1 K^-1)");
+            throw unrepresentable(temperature, density, zone, out);
         }
+    }
+
+    /**
+     * The values of {@link #evaluate}, bit for bit, without the derivatives' arithmetic (see
+     * {@link SahaIonisation#evaluateValues}); the same inputs refused with the same exception. The
+     * derivative arrays of {@code out} are left untouched from 1 to 1e11 K and 1e-20 to 1e10 g cm^-3
+     * (where the refusals of {@link #evaluate} depend on the values alone), and filled outside.
+     * Allocation-free and thread-safe.
+     */
+    @Override
+    public void evaluateValues(double temperature, double density, double hydrogen, double metals, int zone,
+                               ThermoResult out) {
+        if (!(temperature >= VALUES_T_MIN && temperature <= VALUES_T_MAX && density >= VALUES_RHO_MIN
+                && density <= VALUES_RHO_MAX)) {
+            evaluate(temperature, density, hydrogen, metals, zone, out);
+            return;
+        }
+        ZoneChecks.composition(hydrogen, metals, zone);
+        SahaIonisation.evaluateValues(temperature, density, hydrogen, metals, out);
+        // the value terms of evaluate's probe: where one of them is infinite or NaN, so is that probe
+        double probe = ((((out.pressure + out.nablaAd) + (out.cp + out.cv)) + ((out.delta + out.gamma1)
+                + (out.chiT + out.chiRho))) + (out.phi + out.mu)) * 0.0;
+        if (!(out.beta > 0.0) || probe != 0.0) {
+            throw unrepresentable(temperature, density, zone, out);
+        }
+    }
+
+    /** The refusal of a state whose outputs leave double precision (the one message of both calls). */
+    private static InvalidInputException unrepresentable(double temperature, double density, int zone,
+                                                         ThermoResult out) {
+        return new InvalidInputException("density", density, "g cm^-3", zone,
+                "such that pressure and its derivatives are representable in double precision at T = "
+                        + temperature + " K (beta = P_gas / P = " + out.beta + ", P = " + out.pressure
+                        + " dyn cm^-2, c_V = " + out.cv + " erg g^-1 K^-1)");
     }
 
     @Override

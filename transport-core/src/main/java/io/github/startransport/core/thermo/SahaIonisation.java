@@ -148,7 +148,24 @@ public final class SahaIonisation {
      */
     public static void evaluate(double temperature, double density, double hydrogen, double metals,
                                 ThermoResult out) {
-        evaluate(temperature, density, hydrogen, metals, 1.0, 1.0, out);
+        compute(temperature, density, hydrogen, metals, 1.0, 1.0, true, out);
+    }
+
+    /**
+     * {@link #evaluate(double, double, double, double, ThermoResult)} without the derivatives: every
+     * scalar output bit for bit as there (the same arithmetic, in the same order), the derivative
+     * arrays left untouched. Inputs are not validated here (see {@link IonisingGas}); allocation-free
+     * and thread-safe.
+     *
+     * @param temperature T (K)
+     * @param density     rho (g cm^-3)
+     * @param hydrogen    X
+     * @param metals      Z
+     * @param out         result: scalar fields overwritten, derivative arrays untouched
+     */
+    public static void evaluateValues(double temperature, double density, double hydrogen, double metals,
+                                      ThermoResult out) {
+        compute(temperature, density, hydrogen, metals, 1.0, 1.0, false, out);
     }
 
     /**
@@ -178,6 +195,19 @@ public final class SahaIonisation {
      */
     static double evaluate(double temperature, double density, double hydrogen, double metals, double radiation,
                          double exclusion, ThermoResult out) {
+        return compute(temperature, density, hydrogen, metals, radiation, exclusion, true, out);
+    }
+
+    /**
+     * The one body of {@link #evaluate} and {@link #evaluateValues}: the scalar outputs and what they
+     * need first, then, when {@code derivatives} is true, the second-order sums and the derivative
+     * arrays. Either way each scalar output comes from the same expressions, so the two agree bit for bit.
+     *
+     * @param derivatives whether to fill the derivative arrays (left untouched when false)
+     * @return the specific internal energy u (erg g^-1), see {@link #specificEnergy}
+     */
+    private static double compute(double temperature, double density, double hydrogen, double metals,
+                                  double radiation, double exclusion, boolean derivatives, ThermoResult out) {
         double t = temperature;
         double rho = density;
         double invT = 1.0 / t;
@@ -329,11 +359,11 @@ public final class SahaIonisation {
         // times the derivatives of l, its second one adds the third cumulants K times products of them.
         // With l_T = h - u_T, each sum S has S_T = S[C h] - u_T S[C1] (C1: covariance with the charge), and
         // S_TT = S[K l_T l_T + C hp] - u_TT S[C1]; the charge balance x = X gives the derivatives of u.
-        // single-stage variance c and third cumulant kappa; helium covariances C and cumulants K of (I1, I2)
+        // The values need the first order only (c_V, chi_T and chi_rho are first derivatives of u and P);
+        // the second order feeds the derivative arrays alone and is computed after the values, when asked.
+        // single-stage variances c; helium covariances C of (I1, I2)
         double cH = yH * nH;
-        double kapH = cH * (nH - yH);
         double cD = yD * nD;
-        double kapD = cD * (nD - yD);
         double p1 = y1 + y2;
         double q2c = y0 + y1;                  // 1 - p2
         double c11 = p1 * y0;
@@ -367,65 +397,17 @@ public final class SahaIonisation {
         double qeT = eH * chH + e1 * ch1 + e2 * ch2 + eD * chD - uT * eC;
         double bT = fH * chH + f1 * ch1 + f2 * ch2 + fD * chD - uT * bC;
         double bgR = fH * ckH + f1 * ck1 + f2 * ck2 + fD * ckD - uR * bC;
-        // second order: S[K l l + C hp] (TT), S[K l l] (TR), S[K l l + C kp] (RR)
-        double lTH = hH - uT;
-        double lRH = kH - uR;
-        double sTTH = kapH * lTH * lTH + cH * hpH;
-        double sTRH = kapH * lTH * lRH;
-        double sRRH = kapH * lRH * lRH + cH * kpH;
-        double lTD = hD - uT;
-        double lRD = kD - uR;
-        double sTTD = kapD * lTD * lTD + cD * hpD;
-        double sTRD = kapD * lTD * lRD;
-        double sRRD = kapD * lRD * lRD + cD * kpD;
-        double lT1 = h1 - uT;
-        double lT2 = h2 - uT;
-        double lR1 = k1 - uR;
-        double lR2 = k2 - uR;
-        double k111 = c11 * (y0 - p1);
-        double k112 = c12 * (y0 - p1);
-        double k122 = c12 * (q2c - y2);
-        double k222 = c22 * (q2c - y2);
-        double tt11 = lT1 * lT1;
-        double tt12 = 2.0 * lT1 * lT2;
-        double tt22 = lT2 * lT2;
-        double tr11 = lT1 * lR1;
-        double tr12 = lT1 * lR2 + lT2 * lR1;
-        double tr22 = lT2 * lR2;
-        double rr11 = lR1 * lR1;
-        double rr12 = 2.0 * lR1 * lR2;
-        double rr22 = lR2 * lR2;
-        double sTT1 = k111 * tt11 + k112 * tt12 + k122 * tt22 + c11 * hp1 + c12 * hp2;
-        double sTT2 = k112 * tt11 + k122 * tt12 + k222 * tt22 + c12 * hp1 + c22 * hp2;
-        double sTR1 = k111 * tr11 + k112 * tr12 + k122 * tr22;
-        double sTR2 = k112 * tr11 + k122 * tr12 + k222 * tr22;
-        double sRR1 = k111 * rr11 + k112 * rr12 + k122 * rr22 + c11 * kp1 + c12 * kp2;
-        double sRR2 = k112 * rr11 + k122 * rr12 + k222 * rr22 + c12 * kp1 + c22 * kp2;
-        double uTT = (aH * sTTH + aHe * (sTT1 + sTT2) + aD * sTTD - x * uT * uT) * invW;
-        double uTR = (aH * sTRH + aHe * (sTR1 + sTR2) + aD * sTRD - x * uT * uR) * invW;
-        double uRR = (aH * sRRH + aHe * (sRR1 + sRR2) + aD * sRRD - x * uR * uR) * invW;
-        double qeTT = eH * sTTH + e1 * sTT1 + e2 * sTT2 + eD * sTTD - uTT * eC;
-        double qeTR = eH * sTRH + e1 * sTR1 + e2 * sTR2 + eD * sTRD - uTR * eC;
+        double qe = eH * yH + e1 * p1 + e2 * y2 + eD * yD;
         double b = aH * bH0 * nH + aHe * (bHe0 * y0 + bHe1 * y1) + aD * bD0 * nD;
         double bR = b + bgR;
-        double bTT = fH * sTTH + f1 * sTT1 + f2 * sTT2 + fD * sTTD - uTT * bC;
-        double bTR = bT + fH * sTRH + f1 * sTR1 + f2 * sTR2 + fD * sTRD - uTR * bC;
-        double bRR = b + 2.0 * bgR + fH * sRRH + f1 * sRR1 + f2 * sRR2 + fD * sRRD - uRR * bC;
-        double qe = eH * yH + e1 * p1 + e2 * y2 + eD * yD;
 
         // gas pressure: ln P_g = const + ln rho + ln T + ln Pi, Pi = 1 + x + b
         double pi = 1.0 + x + b;
         double invPi = 1.0 / pi;
         double piT = x * uT + bT;
         double piR = x * uR + bR;
-        double piTT = x * (uT * uT + uTT) + bTT;
-        double piTR = x * (uT * uR + uTR) + bTR;
-        double piRR = x * (uR * uR + uRR) + bRR;
         double gT = 1.0 + piT * invPi;
         double gR = 1.0 + piR * invPi;
-        double gTT = (piTT - piT * piT * invPi) * invPi;
-        double gTR = (piTR - piT * piR * invPi) * invPi;
-        double gRR = (piRR - piR * piR * invPi) * invPi;
 
         double kOverMu = K / MU * nuN;                       // k / m_u per nucleus count
         double pg = kOverMu * rho * t * pi;
@@ -438,51 +420,26 @@ public final class SahaIonisation {
         double oneMinusBeta = pr * invP;
         double chiT = beta * gT + 4.0 * oneMinusBeta;
         double chiR = beta * gR;
-        double betaT = beta * oneMinusBeta * (gT - 4.0);
-        double betaR = beta * oneMinusBeta * gR;
-        double chiTT = betaT * (gT - 4.0) + beta * gTT;
-        double chiTR = betaR * (gT - 4.0) + beta * gTR;
-        double chiRT = betaT * gR + beta * gTR;
-        double chiRR = betaR * gR + beta * gRR;
 
         // c_V = (k nu_N / m_u) A + 4 a T^3 / rho
         double radCv = 12.0 * pr * invT * invRho;            // 4 a T^3 / rho
         double aCv = 1.5 * (1.0 + x) + 1.5 * x * uT + qeT * invT;
-        double aCvT = 1.5 * x * uT + 1.5 * x * (uT * uT + uTT) + (qeTT - qeT) * invT;
-        double aCvR = 1.5 * x * uR + 1.5 * x * (uT * uR + uTR) + qeTR * invT;
         double cv = kOverMu * aCv + radCv;
-        double cvT = kOverMu * aCvT + 3.0 * radCv;
-        double cvR = kOverMu * aCvR - radCv;
 
         double invCv = 1.0 / cv;
         double invChiTR = 1.0 / (chiT * chiR);
-        double invChiT = chiR * invChiTR;
         double invChiR = chiT * invChiTR;
         double g3 = p * chiT * invRho * invT * invCv;        // Gamma_3 - 1
-        double g3T = g3 * (chiT + chiTT * invChiT - 1.0 - cvT * invCv);
-        double g3R = g3 * (chiR + chiTR * invChiT - 1.0 - cvR * invCv);
         double gamma1 = chiT * g3 + chiR;
-        double gamma1T = chiTT * g3 + chiT * g3T + chiRT;
-        double gamma1R = chiTR * g3 + chiT * g3R + chiRR;
         double invG1 = 1.0 / gamma1;
         double nablaAd = g3 * invG1;
-        double nablaAdT = (g3T - nablaAd * gamma1T) * invG1;
-        double nablaAdR = (g3R - nablaAd * gamma1R) * invG1;
         double cp = cv * gamma1 * invChiR;
-        double cpT = cp * (cvT * invCv + gamma1T * invG1 - chiRT * invChiR);
-        double cpR = cp * (cvR * invCv + gamma1R * invG1 - chiRR * invChiR);
         double delta = chiT * invChiR;
-        double deltaT = delta * (chiTT * invChiT - chiRT * invChiR);
-        double deltaR = delta * (chiTR * invChiT - chiRR * invChiR);
         double onePlusX = 1.0 + x;
         double invOnePlusX = 1.0 / onePlusX;
         double mu = invNu * invOnePlusX;
-        double lnMuT = -x * uT * invOnePlusX;
-        double lnMuR = -x * uR * invOnePlusX;
         double denPhi = 1.0 / (onePlusX + 2.0 * b);
         double phi = onePlusX * denPhi;
-        double lnPhiT = x * uT * invOnePlusX - (x * uT + 2.0 * bT) * denPhi;
-        double lnPhiR = x * uR * invOnePlusX - (x * uR + 2.0 * bR) * denPhi;
 
         out.mu = mu;
         out.beta = beta;
@@ -498,20 +455,103 @@ public final class SahaIonisation {
         out.freeElectrons = nuN * x;
         out.degeneracy = 0.5 * x * nLambda3;
         out.pressureIonisation = aH > 0.0 ? pressureIonised(x, nH, qH, inH, lH0) : 0.0;
-        out.dPressure[ZoneInput.T] = p * chiT * invT;
-        out.dPressure[ZoneInput.RHO] = p * chiR * invRho;
-        out.dNablaAd[ZoneInput.T] = nablaAdT * invT;
-        out.dNablaAd[ZoneInput.RHO] = nablaAdR * invRho;
-        out.dCp[ZoneInput.T] = cpT * invT;
-        out.dCp[ZoneInput.RHO] = cpR * invRho;
-        out.dDelta[ZoneInput.T] = deltaT * invT;
-        out.dDelta[ZoneInput.RHO] = deltaR * invRho;
-        out.dPhi[ZoneInput.T] = phi * lnPhiT * invT;
-        out.dPhi[ZoneInput.RHO] = phi * lnPhiR * invRho;
-        out.dGamma1[ZoneInput.T] = gamma1T * invT;
-        out.dGamma1[ZoneInput.RHO] = gamma1R * invRho;
-        out.dMu[ZoneInput.T] = mu * lnMuT * invT;
-        out.dMu[ZoneInput.RHO] = mu * lnMuR * invRho;
+        if (derivatives) {
+            // single-stage third cumulants kappa; helium cumulants K of (I1, I2)
+            double kapH = cH * (nH - yH);
+            double kapD = cD * (nD - yD);
+            // second order: S[K l l + C hp] (TT), S[K l l] (TR), S[K l l + C kp] (RR)
+            double lTH = hH - uT;
+            double lRH = kH - uR;
+            double sTTH = kapH * lTH * lTH + cH * hpH;
+            double sTRH = kapH * lTH * lRH;
+            double sRRH = kapH * lRH * lRH + cH * kpH;
+            double lTD = hD - uT;
+            double lRD = kD - uR;
+            double sTTD = kapD * lTD * lTD + cD * hpD;
+            double sTRD = kapD * lTD * lRD;
+            double sRRD = kapD * lRD * lRD + cD * kpD;
+            double lT1 = h1 - uT;
+            double lT2 = h2 - uT;
+            double lR1 = k1 - uR;
+            double lR2 = k2 - uR;
+            double k111 = c11 * (y0 - p1);
+            double k112 = c12 * (y0 - p1);
+            double k122 = c12 * (q2c - y2);
+            double k222 = c22 * (q2c - y2);
+            double tt11 = lT1 * lT1;
+            double tt12 = 2.0 * lT1 * lT2;
+            double tt22 = lT2 * lT2;
+            double tr11 = lT1 * lR1;
+            double tr12 = lT1 * lR2 + lT2 * lR1;
+            double tr22 = lT2 * lR2;
+            double rr11 = lR1 * lR1;
+            double rr12 = 2.0 * lR1 * lR2;
+            double rr22 = lR2 * lR2;
+            double sTT1 = k111 * tt11 + k112 * tt12 + k122 * tt22 + c11 * hp1 + c12 * hp2;
+            double sTT2 = k112 * tt11 + k122 * tt12 + k222 * tt22 + c12 * hp1 + c22 * hp2;
+            double sTR1 = k111 * tr11 + k112 * tr12 + k122 * tr22;
+            double sTR2 = k112 * tr11 + k122 * tr12 + k222 * tr22;
+            double sRR1 = k111 * rr11 + k112 * rr12 + k122 * rr22 + c11 * kp1 + c12 * kp2;
+            double sRR2 = k112 * rr11 + k122 * rr12 + k222 * rr22 + c12 * kp1 + c22 * kp2;
+            double uTT = (aH * sTTH + aHe * (sTT1 + sTT2) + aD * sTTD - x * uT * uT) * invW;
+            double uTR = (aH * sTRH + aHe * (sTR1 + sTR2) + aD * sTRD - x * uT * uR) * invW;
+            double uRR = (aH * sRRH + aHe * (sRR1 + sRR2) + aD * sRRD - x * uR * uR) * invW;
+            double qeTT = eH * sTTH + e1 * sTT1 + e2 * sTT2 + eD * sTTD - uTT * eC;
+            double qeTR = eH * sTRH + e1 * sTR1 + e2 * sTR2 + eD * sTRD - uTR * eC;
+            double bTT = fH * sTTH + f1 * sTT1 + f2 * sTT2 + fD * sTTD - uTT * bC;
+            double bTR = bT + fH * sTRH + f1 * sTR1 + f2 * sTR2 + fD * sTRD - uTR * bC;
+            double bRR = b + 2.0 * bgR + fH * sRRH + f1 * sRR1 + f2 * sRR2 + fD * sRRD - uRR * bC;
+
+            double piTT = x * (uT * uT + uTT) + bTT;
+            double piTR = x * (uT * uR + uTR) + bTR;
+            double piRR = x * (uR * uR + uRR) + bRR;
+            double gTT = (piTT - piT * piT * invPi) * invPi;
+            double gTR = (piTR - piT * piR * invPi) * invPi;
+            double gRR = (piRR - piR * piR * invPi) * invPi;
+
+            double betaT = beta * oneMinusBeta * (gT - 4.0);
+            double betaR = beta * oneMinusBeta * gR;
+            double chiTT = betaT * (gT - 4.0) + beta * gTT;
+            double chiTR = betaR * (gT - 4.0) + beta * gTR;
+            double chiRT = betaT * gR + beta * gTR;
+            double chiRR = betaR * gR + beta * gRR;
+
+            double aCvT = 1.5 * x * uT + 1.5 * x * (uT * uT + uTT) + (qeTT - qeT) * invT;
+            double aCvR = 1.5 * x * uR + 1.5 * x * (uT * uR + uTR) + qeTR * invT;
+            double cvT = kOverMu * aCvT + 3.0 * radCv;
+            double cvR = kOverMu * aCvR - radCv;
+
+            double invChiT = chiR * invChiTR;
+            double g3T = g3 * (chiT + chiTT * invChiT - 1.0 - cvT * invCv);
+            double g3R = g3 * (chiR + chiTR * invChiT - 1.0 - cvR * invCv);
+            double gamma1T = chiTT * g3 + chiT * g3T + chiRT;
+            double gamma1R = chiTR * g3 + chiT * g3R + chiRR;
+            double nablaAdT = (g3T - nablaAd * gamma1T) * invG1;
+            double nablaAdR = (g3R - nablaAd * gamma1R) * invG1;
+            double cpT = cp * (cvT * invCv + gamma1T * invG1 - chiRT * invChiR);
+            double cpR = cp * (cvR * invCv + gamma1R * invG1 - chiRR * invChiR);
+            double deltaT = delta * (chiTT * invChiT - chiRT * invChiR);
+            double deltaR = delta * (chiTR * invChiT - chiRR * invChiR);
+            double lnMuT = -x * uT * invOnePlusX;
+            double lnMuR = -x * uR * invOnePlusX;
+            double lnPhiT = x * uT * invOnePlusX - (x * uT + 2.0 * bT) * denPhi;
+            double lnPhiR = x * uR * invOnePlusX - (x * uR + 2.0 * bR) * denPhi;
+
+            out.dPressure[ZoneInput.T] = p * chiT * invT;
+            out.dPressure[ZoneInput.RHO] = p * chiR * invRho;
+            out.dNablaAd[ZoneInput.T] = nablaAdT * invT;
+            out.dNablaAd[ZoneInput.RHO] = nablaAdR * invRho;
+            out.dCp[ZoneInput.T] = cpT * invT;
+            out.dCp[ZoneInput.RHO] = cpR * invRho;
+            out.dDelta[ZoneInput.T] = deltaT * invT;
+            out.dDelta[ZoneInput.RHO] = deltaR * invRho;
+            out.dPhi[ZoneInput.T] = phi * lnPhiT * invT;
+            out.dPhi[ZoneInput.RHO] = phi * lnPhiR * invRho;
+            out.dGamma1[ZoneInput.T] = gamma1T * invT;
+            out.dGamma1[ZoneInput.RHO] = gamma1R * invRho;
+            out.dMu[ZoneInput.T] = mu * lnMuT * invT;
+            out.dMu[ZoneInput.RHO] = mu * lnMuR * invRho;
+        }
         return kOverMu * (1.5 * t * onePlusX + qe) + aRad * t2 * t2 * invRho;
     }
 
