@@ -38,6 +38,7 @@ awk '
   /^bridge:/                 { side = "bridge" }
   /^java: .*zone-major/      { side = "java" }
   /^java: .*column Jacobian/ { side = "columns" }
+  /^java-buffer:/            { side = "buffer" }
   {
     match($0, /median [0-9.]+/); med = substr($0, RSTART + 7, RLENGTH - 7) + 0
     match($0, /fastest round [0-9.]+/); fast = substr($0, RSTART + 14, RLENGTH - 14) + 0
@@ -55,4 +56,6 @@ awk '
       best["bridge"], best["java"], best["columns"], 100 * (best["bridge"] / best["java"] - 1)
     printf "summary: median of %d runs: bridge %.1f ns per zone, Java %.1f (column layout %.1f): crossing overhead %+.1f %%\n", \
       n["bridge"], median("bridge"), median("java"), median("columns"), 100 * (median("bridge") / median("java") - 1)
+    printf "summary: the Java kernel into a direct buffer, as the bridge calls it: fastest round %.1f, median %.1f ns per zone\n", \
+      best["buffer"], median("buffer")
   }' "$work/runs.txt"

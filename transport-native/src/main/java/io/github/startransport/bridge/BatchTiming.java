@@ -9,6 +9,9 @@ import io.github.startransport.spi.ZoneColumns;
 import io.github.startransport.spi.ZoneMajorJacobian;
 
 import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.nio.DoubleBuffer;
 import java.nio.file.Path;
 import java.util.Arrays;
 
@@ -16,7 +19,8 @@ import java.util.Arrays;
  * The Java side of the native benchmark (run-benchmark.sh): times the same batch that
  * bench_convection.c sends through the C interface, on the same zones, called from Java: convection
  * with the zone-major Jacobian ({@link ConvectionModel#solveZoneMajor}) over the whole profile, and,
- * for comparison, the column layout ({@code solveColumns}). Same warm-up and rounds as the C side;
+ * for comparison, the same into a direct buffer as the bridge does ({@code solveZoneMajorInto}) and the
+ * column layout ({@code solveColumns}). Same warm-up and rounds as the C side;
  * prints the median and the fastest round in ns per zone. A timing tool, not a test.
  *
  * <p>Usage: {@code java -cp <jars> io.github.startransport.bridge.BatchTiming DIR [WARMUP_SECONDS ROUNDS CALLS]}
@@ -48,12 +52,20 @@ public final class BatchTiming {
             convection.solveZoneMajor(in, 0, n, out, block);
             sink += out.nabla[n / 2] + block[n / 2];
         };
+        DoubleBuffer direct = ByteBuffer.allocateDirect(n * ZoneMajorJacobian.PER_ZONE * Double.BYTES)
+                .order(ByteOrder.nativeOrder()).asDoubleBuffer();
+        Runnable buffer = () -> {
+            convection.solveZoneMajorInto(in, 0, n, out, direct);
+            sink += out.nabla[n / 2] + direct.get(n / 2);
+        };
         Runnable columns = () -> {
             convection.solveColumns(in, 0, n, out, true);
             sink += out.nabla[n / 2] + out.dNabla[0][n / 2];
         };
         report("java: convection with the zone-major Jacobian, " + n + " zones per call, solveZoneMajor from Java",
                 zoneMajor, n, warmup, rounds, calls);
+        report("java-buffer: convection with the zone-major Jacobian, " + n
+                + " zones per call, solveZoneMajorInto a direct buffer from Java", buffer, n, warmup, rounds, calls);
         report("java: convection with the column Jacobian, " + n + " zones per call, solveColumns from Java",
                 columns, n, warmup, rounds, calls);
     }
