@@ -41,18 +41,6 @@ public final class IdealGasRadiation implements ThermodynamicsModel {
         return INSTANCE;
     }
 
-    /**
-     * Temperatures (K) and densities (g cm^-3) inside which {@link #evaluateValues} skips the
-     * derivatives. Here beta stays above ~1e-31, so that c_P (which grows as 1 / beta^2), d c_P / d beta
-     * (1 / beta^3) and every other output and derivative stay far below the largest double:
-     * {@link #evaluate} refuses no valid state and the values alone decide as it does. Outside,
-     * {@link #evaluateValues} calls {@link #evaluate}, whose refusals also look at the derivatives.
-     */
-    static final double VALUES_T_MIN = 1.0;
-    static final double VALUES_T_MAX = 1e11;
-    static final double VALUES_RHO_MIN = 1e-20;
-    static final double VALUES_RHO_MAX = 1e10;
-
     @Override
     public void evaluate(double temperature, double density, double hydrogen, double metals, int zone,
                          ThermoResult out) {
@@ -95,15 +83,13 @@ public final class IdealGasRadiation implements ThermodynamicsModel {
 
     /**
      * The values of {@link #evaluate}, bit for bit, without the derivatives; the same inputs refused
-     * with the same exception. The derivative arrays of {@code out} are left untouched from 1 to
-     * 1e11 K and 1e-20 to 1e10 g cm^-3 (where the refusals of {@link #evaluate} depend on the values
-     * alone), and filled outside. Allocation-free and thread-safe.
+     * with the same exception. The derivative arrays of {@code out} are left untouched where
+     * {@link ZoneChecks#valuesDecide} holds, and filled outside. Allocation-free and thread-safe.
      */
     @Override
     public void evaluateValues(double temperature, double density, double hydrogen, double metals, int zone,
                                ThermoResult out) {
-        if (!(temperature >= VALUES_T_MIN && temperature <= VALUES_T_MAX && density >= VALUES_RHO_MIN
-                && density <= VALUES_RHO_MAX)) {
+        if (!ZoneChecks.valuesDecide(temperature, density)) {
             evaluate(temperature, density, hydrogen, metals, zone, out);
             return;
         }

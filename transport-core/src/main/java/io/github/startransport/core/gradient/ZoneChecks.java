@@ -32,6 +32,23 @@ public final class ZoneChecks {
     }
 
     /**
+     * Whether a values-only equation-of-state call may skip the derivatives at T and rho: from 1 to
+     * 1e11 K and from 1e-20 to 1e10 g cm^-3. There no output and no derivative of the built-in models
+     * comes near the largest double (the ideal gas with radiation keeps beta = P_gas / P above about
+     * 1e-31, and c_P grows only as 1 / beta^2; the partial-ionisation model's largest output or
+     * derivative is about 5e90 over a scan of 3.2 million states), so the call with derivatives refuses
+     * no valid state and the values alone decide as it does. Outside, a values-only call runs the call
+     * with derivatives, whose refusals also look at the derivatives.
+     *
+     * @param temperature T (K)
+     * @param density     rho (g cm^-3)
+     * @return true inside the range (false for NaN)
+     */
+    public static boolean valuesDecide(double temperature, double density) {
+        return temperature >= 1.0 && temperature <= 1e11 && density >= 1e-20 && density <= 1e10;
+    }
+
+    /**
      * Checks a composition (X, Z).
      *
      * @param hydrogen X

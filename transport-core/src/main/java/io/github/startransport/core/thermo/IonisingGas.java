@@ -44,18 +44,6 @@ public final class IonisingGas implements ThermodynamicsModel {
         return INSTANCE;
     }
 
-    /**
-     * Temperatures (K) and densities (g cm^-3) inside which {@link #evaluateValues} runs the kernel
-     * without derivatives. Here no output and no derivative comes near the limits of double precision
-     * (the largest, where radiation dominates at high T and low rho, stay below ~1e91 in size), so
-     * {@link #evaluate} refuses no valid state and the values alone decide as it does; outside,
-     * {@link #evaluateValues} calls {@link #evaluate}, whose refusals also look at the derivatives.
-     */
-    static final double VALUES_T_MIN = 1.0;
-    static final double VALUES_T_MAX = 1e11;
-    static final double VALUES_RHO_MIN = 1e-20;
-    static final double VALUES_RHO_MAX = 1e10;
-
     @Override
     public void evaluate(double temperature, double density, double hydrogen, double metals, int zone,
                          ThermoResult out) {
@@ -79,15 +67,14 @@ public final class IonisingGas implements ThermodynamicsModel {
     /**
      * The values of {@link #evaluate}, bit for bit, without the derivatives' arithmetic (see
      * {@link SahaIonisation#evaluateValues}); the same inputs refused with the same exception. The
-     * derivative arrays of {@code out} are left untouched from 1 to 1e11 K and 1e-20 to 1e10 g cm^-3
-     * (where the refusals of {@link #evaluate} depend on the values alone), and filled outside.
+     * derivative arrays of {@code out} are left untouched where {@link ZoneChecks#valuesDecide} holds,
+     * and filled outside.
      * Allocation-free and thread-safe.
      */
     @Override
     public void evaluateValues(double temperature, double density, double hydrogen, double metals, int zone,
                                ThermoResult out) {
-        if (!(temperature >= VALUES_T_MIN && temperature <= VALUES_T_MAX && density >= VALUES_RHO_MIN
-                && density <= VALUES_RHO_MAX)) {
+        if (!ZoneChecks.valuesDecide(temperature, density)) {
             evaluate(temperature, density, hydrogen, metals, zone, out);
             return;
         }
