@@ -111,9 +111,10 @@ public final class MixingLengthZone {
 
     /**
      * Doubles of working space per zone: three sections of {@link ZoneInput#COUNT} (the intermediate
-     * values that pass from {@link #front} to the cubic, to {@link #values} and to {@link #jacobian}). In a per-zone call the
-     * sections are the result's {@code dVelocity}, {@code dConvectiveFraction} and {@code dDiffusion},
-     * read before they are overwritten; in a batch call a chunk of zones shares the columns' work array.
+     * values that pass from {@link #front} to the cubic, to {@link #values} and to {@link #jacobian}). In
+     * a per-zone call the sections are the result's {@code dVelocity}, {@code dConvectiveFraction} and
+     * {@code dDiffusion}, read before they are overwritten; in a batch call a chunk of zones shares the
+     * columns' work array.
      */
     static final int SCRATCH = 3 * ZoneInput.COUNT;
     /** Zones per chunk of a batch call: the stages run over a chunk at a time (see {@link #solveBatch}). */
@@ -151,10 +152,13 @@ public final class MixingLengthZone {
     private static final int SCALE_HEIGHT = 0;
     private static final int PHI = 1;
     private static final int NABLA_MU = 2;
-    /** Batch calls only: the zone's {@link #front} code and its efficiency Gamma. */
+    /** The zone's {@link #front} code and its efficiency Gamma, for {@link #values} and {@link #jacobian}. */
     private static final int CODE = 3;
     private static final int GAMMA = 4;
-    /** Written by {@link #values} for {@link #jacobian}: 1/D, d Gamma / d S, the shares of W, v, F_conv / F, D_conv, the probe. */
+    /**
+     * Written by {@link #values} for {@link #jacobian} and the caller: 1/D, d Gamma / d S, the shares of W,
+     * v, F_conv / F, D_conv and the probe.
+     */
     private static final int INV_DEN = 5;
     private static final int SENSITIVITY = 6;
     private static final int SHARE_RAD = 7;
@@ -234,11 +238,11 @@ public final class MixingLengthZone {
     /**
      * The batch calls. Chunks of {@link #CHUNK} zones go through the per-zone stages one stage at a
      * time: {@link #front} over the chunk, the cubic, {@link #values} over the chunk (which writes the
-     * values straight into the columns), then zone by zone {@link #jacobian}, which writes the Jacobian
-     * straight into the zone-major block (or into a zone-major staging area that is copied into the
-     * columns, or into the buffer, once per chunk). A zone's dependent chain of divisions, roots and
-     * Halley steps then overlaps with its neighbours' instead of running alone, the first two stages
-     * run as loops without a call per zone, and no zone goes through the per-zone result. The stages
+     * values straight into the columns), then {@link #jacobian} over the chunk, which writes the
+     * Jacobian straight into the zone-major block or into the derivative columns (for a buffer, into a
+     * zone-major staging area put into the buffer in bulk once per chunk). A zone's dependent chain of
+     * divisions, roots and Halley steps then overlaps with its neighbours' instead of running alone, the
+     * stages run as loops without a call per zone, and no zone goes through the per-zone result. The stages
      * are those of the per-zone call, so every value is bit for bit the same; zones that are not
      * convective go through the per-zone finish. Zones are finished, and refused, in order: a refused
      * zone leaves every zone before it written (later zones of its chunk may hold their values too).
@@ -313,7 +317,8 @@ public final class MixingLengthZone {
             }
             if (staged) {
                 // the chunk's staged blocks into the buffer in one bulk put
-                buffer.put(origin + c0 * ZoneMajorJacobian.PER_ZONE, work, STAGE, (c1 - c0) * ZoneMajorJacobian.PER_ZONE);
+                buffer.put(origin + c0 * ZoneMajorJacobian.PER_ZONE, work, STAGE,
+                        (c1 - c0) * ZoneMajorJacobian.PER_ZONE);
             }
         }
     }
@@ -327,7 +332,7 @@ public final class MixingLengthZone {
         }
     }
 
-    /** Copies one zone's Jacobian from a result into its zone-major block or staging, entry (o, i) at base + o * COUNT + i. */
+    /** Copies one zone's Jacobian from a result into its zone-major block or staging: (o, i) at base + o * 13 + i. */
     private static void stage(ConvectionResult r, double[] jac, int base) {
         for (int i = 0; i < ZoneInput.COUNT; i++) {
             jac[base + i] = r.dNabla[i];
@@ -828,10 +833,10 @@ public final class MixingLengthZone {
      * The Jacobian stage of convective zones, after {@link #values}: from Gamma and the scratch of
      * {@link #front} and {@link #values}, one output's 13 entries at a time into the result's arrays (a
      * per-zone call), into the derivative columns at index k, or into {@code jac} (zone-major) from zone
-     * k's base {@code base0 + (k - c0) zoneStep} ({@link #put}). Reads all of a zone's scratch before it writes anything, so the
-     * scratch may be the result's own derivative arrays. Like {@link #front} it loops over a batch
-     * call's zones itself (zones whose code is not a convective one are skipped) and adds each zone's
-     * probe to the one {@link #values} left in its scratch.
+     * k's base {@code base0 + (k - c0) zoneStep} ({@link #put}). Reads all of a zone's scratch before it
+     * writes anything, so the scratch may be the result's own derivative arrays. Like {@link #front} it
+     * loops over a batch call's zones itself (zones whose code is not a convective one are skipped) and
+     * adds each zone's probe to the one {@link #values} left in its scratch.
      *
      * <p>The Jacobian is written as a few coefficients per output times the derivatives of the "base"
      * quantities each input moves: nabla_rad (R), nabla_ad (A), ln U' (mu), ln a0 (nu), ln l (lambda)
