@@ -169,10 +169,10 @@ final class EnvelopePoint {
         return Math.exp(x);
     }
 
-    /** ln P_eos(T, e^x) - ln P; leaves the state in {@link #thermo}. */
+    /** ln P_eos(T, e^x) - ln P; leaves the state in {@link #thermo} (values only: no derivative is read). */
     private double residual(double x, double t, double lnP) {
-        setup.thermodynamics().evaluate(t, Math.exp(x), star.hydrogen(), star.metals(), InvalidInputException.NO_ZONE,
-                thermo);
+        setup.thermodynamics().evaluateValues(t, Math.exp(x), star.hydrogen(), star.metals(),
+                InvalidInputException.NO_ZONE, thermo);
         return Math.log(thermo.pressure) - lnP;
     }
 }

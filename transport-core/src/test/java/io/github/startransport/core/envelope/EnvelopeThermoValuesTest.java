@@ -1,0 +1,89 @@
+package io.github.startransport.core.envelope;
+
+import io.github.startransport.core.checks.CheckKind;
+import io.github.startransport.spi.EnvelopeSetup;
+import io.github.startransport.spi.EnvelopeSolution;
+import io.github.startransport.spi.EnvelopeStar;
+import io.github.startransport.spi.ProfileColumn;
+import io.github.startransport.spi.ThermoResult;
+import io.github.startransport.spi.ThermodynamicsModel;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+
+import java.util.Arrays;
+import java.util.concurrent.atomic.AtomicInteger;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The envelope's density solve asks the equation of state for values only
+ * ({@link ThermodynamicsModel#evaluateValues}), and the envelope is what it is when every state goes
+ * through {@link ThermodynamicsModel#evaluate}: the same solution bit for bit.
+ */
+class EnvelopeThermoValuesTest {
+
+    /**
+     * Answers both calls through {@code inner.evaluate}, counting them; the values-only call then spoils
+     * every derivative, so that a caller which read one would show it.
+     */
+    private static final class EvaluateOnly implements ThermodynamicsModel {
+        final ThermodynamicsModel inner;
+        final AtomicInteger full = new AtomicInteger();
+        final AtomicInteger values = new AtomicInteger();
+
+        EvaluateOnly(ThermodynamicsModel inner) {
+            this.inner = inner;
+        }
+
+        @Override
+        public void evaluate(double temperature, double density, double hydrogen, double metals, int zone,
+                             ThermoResult out) {
+            full.incrementAndGet();
+            inner.evaluate(temperature, density, hydrogen, metals, zone, out);
+        }
+
+        @Override
+        public void evaluateValues(double temperature, double density, double hydrogen, double metals, int zone,
+                                   ThermoResult out) {
+            values.incrementAndGet();
+            inner.evaluate(temperature, density, hydrogen, metals, zone, out);
+            for (double[] d : new double[][] {out.dPressure, out.dNablaAd, out.dCp, out.dDelta, out.dPhi,
+                    out.dGamma1, out.dMu}) {
+                Arrays.fill(d, Double.NaN);
+            }
+        }
+
+        @Override
+        public String toString() {
+            return inner.toString();
+        }
+    }
+
+    @Tag(CheckKind.INTERNAL)
+    @Test
+    void theSunsEnvelopeIsTheSameThroughEvaluate() {
+        EnvelopeStar sun = Stars.sun();
+        EnvelopeSetup setup = Stars.defaults();
+        EvaluateOnly counting = new EvaluateOnly(setup.thermodynamics());
+        EnvelopeSetup through = new EnvelopeSetup(setup.convection(), setup.opacity(), counting);
+
+        EnvelopeSolution a = GreyAtmosphereEnvelope.DEFAULT.integrate(sun, setup);
+        EnvelopeSolution b = GreyAtmosphereEnvelope.DEFAULT.integrate(sun, through);
+
+        assertEquals(0, counting.full.get(), "the envelope asked for derivatives");
+        assertTrue(counting.values.get() > 100, "values-only calls: " + counting.values.get());
+        assertEquals(a.evaluations(), b.evaluations());
+        assertEquals(a.photosphericDensity(), b.photosphericDensity());
+        assertEquals(a.innerRadius(), b.innerRadius());
+        assertArrayEquals(a.nabla(), b.nabla());
+        assertArrayEquals(a.nablaRad(), b.nablaRad());
+        assertArrayEquals(a.velocity(), b.velocity());
+        assertEquals(a.surfaceConvectionBase(), b.surfaceConvectionBase());
+        assertEquals(a.warnings(), b.warnings());
+        double[] rhoA = a.profile().orElseThrow().column(ProfileColumn.DENSITY);
+        double[] rhoB = b.profile().orElseThrow().column(ProfileColumn.DENSITY);
+        assertArrayEquals(rhoA, rhoB);
+    }
+}
