@@ -1,17 +1,14 @@
 package io.github.startransport.core.envelope;
 
 import io.github.startransport.core.checks.CheckKind;
+import io.github.startransport.core.thermo.EvaluateOnly;
 import io.github.startransport.spi.EnvelopeSetup;
 import io.github.startransport.spi.EnvelopeSolution;
 import io.github.startransport.spi.EnvelopeStar;
 import io.github.startransport.spi.ProfileColumn;
-import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ThermodynamicsModel;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
-
-import java.util.Arrays;
-import java.util.concurrent.atomic.AtomicInteger;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -24,49 +21,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  */
 class EnvelopeThermoValuesTest {
 
-    /**
-     * Answers both calls through {@code inner.evaluate}, counting them; the values-only call then spoils
-     * every derivative, so that a caller which read one would show it.
-     */
-    private static final class EvaluateOnly implements ThermodynamicsModel {
-        final ThermodynamicsModel inner;
-        final AtomicInteger full = new AtomicInteger();
-        final AtomicInteger values = new AtomicInteger();
-
-        EvaluateOnly(ThermodynamicsModel inner) {
-            this.inner = inner;
-        }
-
-        @Override
-        public void evaluate(double temperature, double density, double hydrogen, double metals, int zone,
-                             ThermoResult out) {
-            full.incrementAndGet();
-            inner.evaluate(temperature, density, hydrogen, metals, zone, out);
-        }
-
-        @Override
-        public void evaluateValues(double temperature, double density, double hydrogen, double metals, int zone,
-                                   ThermoResult out) {
-            values.incrementAndGet();
-            inner.evaluate(temperature, density, hydrogen, metals, zone, out);
-            for (double[] d : new double[][] {out.dPressure, out.dNablaAd, out.dCp, out.dDelta, out.dPhi,
-                    out.dGamma1, out.dMu}) {
-                Arrays.fill(d, Double.NaN);
-            }
-        }
-
-        @Override
-        public String toString() {
-            return inner.toString();
-        }
-    }
-
     @Tag(CheckKind.INTERNAL)
     @Test
     void theSunsEnvelopeIsTheSameThroughEvaluate() {
         EnvelopeStar sun = Stars.sun();
         EnvelopeSetup setup = Stars.defaults();
-        EvaluateOnly counting = new EvaluateOnly(setup.thermodynamics());
+        EvaluateOnly counting = new EvaluateOnly(setup.thermodynamics(), true);
         EnvelopeSetup through = new EnvelopeSetup(setup.convection(), setup.opacity(), counting);
 
         EnvelopeSolution a = GreyAtmosphereEnvelope.DEFAULT.integrate(sun, setup);

@@ -3,6 +3,7 @@ package io.github.startransport.core.profile;
 import io.github.startransport.core.checks.CheckKind;
 import io.github.startransport.core.gradient.IdealGasRadiation;
 import io.github.startransport.core.model.DemoStar;
+import io.github.startransport.core.thermo.EvaluateOnly;
 import io.github.startransport.core.thermo.IonisingGas;
 import io.github.startransport.spi.DiagnosisColumn;
 import io.github.startransport.spi.DiagnosisSetup;
@@ -10,17 +11,14 @@ import io.github.startransport.spi.ModelOptions;
 import io.github.startransport.spi.Profile;
 import io.github.startransport.spi.ProfileColumn;
 import io.github.startransport.spi.ProfileDiagnosis;
-import io.github.startransport.spi.ThermoResult;
 import io.github.startransport.spi.ThermodynamicsModel;
 import io.github.startransport.spi.Transport;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
-import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.atomic.AtomicInteger;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -34,48 +32,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  */
 class DiagnosisThermoValuesTest {
     private static final Transport TRANSPORT = Transport.discover();
-
-    /**
-     * A model that answers both calls through {@code inner.evaluate} (the values-only call by the interface's
-     * default), counting the calls of each kind; with {@code poison}, the values-only call then spoils every
-     * derivative, so that a caller which read one would show it.
-     */
-    private static final class EvaluateOnly implements ThermodynamicsModel {
-        final ThermodynamicsModel inner;
-        final boolean poison;
-        final AtomicInteger full = new AtomicInteger();
-        final AtomicInteger values = new AtomicInteger();
-
-        EvaluateOnly(ThermodynamicsModel inner, boolean poison) {
-            this.inner = inner;
-            this.poison = poison;
-        }
-
-        @Override
-        public void evaluate(double temperature, double density, double hydrogen, double metals, int zone,
-                             ThermoResult out) {
-            full.incrementAndGet();
-            inner.evaluate(temperature, density, hydrogen, metals, zone, out);
-        }
-
-        @Override
-        public void evaluateValues(double temperature, double density, double hydrogen, double metals, int zone,
-                                   ThermoResult out) {
-            values.incrementAndGet();
-            inner.evaluate(temperature, density, hydrogen, metals, zone, out);
-            if (poison) {
-                for (double[] d : new double[][] {out.dPressure, out.dNablaAd, out.dCp, out.dDelta, out.dPhi,
-                        out.dGamma1, out.dMu}) {
-                    Arrays.fill(d, Double.NaN);
-                }
-            }
-        }
-
-        @Override
-        public String toString() {
-            return inner.toString();      // the warnings name the model
-        }
-    }
 
     private static ProfileDiagnosis diagnose(Profile p, ThermodynamicsModel thermo) {
         DiagnosisSetup setup = new DiagnosisSetup(TRANSPORT.convection(null, ModelOptions.defaults()),
