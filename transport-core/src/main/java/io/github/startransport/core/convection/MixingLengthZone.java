@@ -309,16 +309,13 @@ public final class MixingLengthZone {
                 } catch (RuntimeException e) {
                     // the zones before the refused one keep their whole result
                     if (staged) {
-                        buffer.put(origin + c0 * ZoneMajorJacobian.PER_ZONE, work, STAGE,
-                                (k - c0) * ZoneMajorJacobian.PER_ZONE);
+                        unstage(work, k - c0, c0, buffer, origin);
                     }
                     throw e;
                 }
             }
             if (staged) {
-                // the chunk's staged blocks into the buffer in one bulk put
-                buffer.put(origin + c0 * ZoneMajorJacobian.PER_ZONE, work, STAGE,
-                        (c1 - c0) * ZoneMajorJacobian.PER_ZONE);
+                unstage(work, c1 - c0, c0, buffer, origin);
             }
         }
     }
@@ -330,6 +327,11 @@ public final class MixingLengthZone {
         if (STAGE + CHUNK * ZoneMajorJacobian.PER_ZONE > ConvectionColumns.WORK_LENGTH) {
             throw new AssertionError("ConvectionColumns.work is too short for a chunk");
         }
+    }
+
+    /** Puts the staged blocks of a chunk's first {@code zones} zones into the buffer in one bulk put. */
+    private static void unstage(double[] work, int zones, int first, DoubleBuffer buffer, int origin) {
+        buffer.put(origin + first * ZoneMajorJacobian.PER_ZONE, work, STAGE, zones * ZoneMajorJacobian.PER_ZONE);
     }
 
     /** Copies one zone's Jacobian from a result into its zone-major block or staging: (o, i) at base + o * 13 + i. */
